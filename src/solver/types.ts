@@ -1,0 +1,107 @@
+/** Data the solver takes and gives. Pure data: the solver imports nothing from the rest of the project. */
+
+/** Boundary mark of a polyline segment. */
+export const MARK_WALL = 0;
+export const MARK_INLET = 1;
+export const MARK_OUTLET = 2;
+export type SegmentMark = typeof MARK_WALL | typeof MARK_INLET | typeof MARK_OUTLET;
+
+/**
+ * A closed polyline (the flattened outline or an island).
+ * Segment k runs from point k to point (k + 1) mod n.
+ */
+export interface Ring {
+  /** x0, y0, x1, y1, ... in length units (the document's). */
+  readonly xy: Float64Array;
+  /** Per segment: MARK_WALL, MARK_INLET or MARK_OUTLET. */
+  readonly marks: Uint8Array;
+  /** Per segment: index into FlowDomain.wallNames, or -1 for an unnamed wall / inlet / outlet. */
+  readonly wallIds: Int32Array;
+}
+
+/**
+ * The flow region: inside `outer`, outside every island.
+ * `outer` is counter-clockwise and islands clockwise (the geometry kernel orients them).
+ */
+export interface FlowDomain {
+  readonly outer: Ring;
+  readonly islands: readonly Ring[];
+  /** Names of walls, e.g. "short side"; islands' walls are named too. */
+  readonly wallNames: readonly string[];
+}
+
+/**
+ * Cut-cell grid. Cell (i, j) has centre (x0 + (i + 0.5) h, y0 + (j + 0.5) h); index i + j * nx.
+ * Faces: x-face (i, j) lies between cells (i-1, j) and (i, j), index i + j * (nx + 1);
+ * y-face (i, j) lies between cells (i, j-1) and (i, j), index i + j * nx.
+ */
+export interface CutGrid {
+  readonly nx: number;
+  readonly ny: number;
+  /** Cell size, length units. */
+  readonly h: number;
+  readonly x0: number;
+  readonly y0: number;
+  /** Fluid area fraction per cell, 0..1, row-major i + j * nx. */
+  readonly cellFraction: Float64Array;
+  /** Open fraction of each x-face, 0..1, (nx + 1) * ny. */
+  readonly openX: Float64Array;
+  /** Open fraction of each y-face, 0..1, nx * (ny + 1). */
+  readonly openY: Float64Array;
+  /**
+   * Dirichlet coupling per cell from inlet / outlet segments crossing it:
+   * conductance (boundary length / normal distance from the cell centre, dimensionless in 2D) to phi = 1 (inlet) and phi = 0 (outlet).
+   */
+  readonly inletCoupling: Float64Array;
+  readonly outletCoupling: Float64Array;
+}
+
+export interface SolveOptions {
+  /** Target number of grid cells over the domain's bounding box. */
+  readonly targetCells: number;
+  /** Relative residual to stop at; default 1e-8. */
+  readonly tolerance?: number;
+  /** Iteration cap; default 200. */
+  readonly maxIterations?: number;
+  /** Previous potential to warm start from (any grid; interpolated). */
+  readonly warmStart?: PotentialField;
+  /** Called between iterations; return true to stop early (a newer request superseded this one). */
+  readonly shouldStop?: () => boolean;
+}
+
+/** A potential on a grid, for warm starts. */
+export interface PotentialField {
+  readonly nx: number;
+  readonly ny: number;
+  readonly h: number;
+  readonly x0: number;
+  readonly y0: number;
+  /** potential, row-major i + j * nx; NaN outside the fluid. */
+  readonly phi: Float64Array;
+}
+
+/** Speed-ratio samples along one named wall (or unnamed wall run) in ring order. */
+export interface WallSpeeds {
+  readonly name: string;
+  /** Per sample: x, y, s (arc length from the wall's first point, length units), speed ratio. Flattened, 4 numbers a sample. */
+  readonly samples: Float64Array;
+}
+
+export interface SolveResult {
+  readonly grid: CutGrid;
+  /** potential, 1 at inlet and 0 at outlet; NaN in solid cells; row-major i + j * nx. */
+  readonly phi: Float64Array;
+  /** cell-centre speed ratio (speed / mean inlet speed); NaN in solid cells; row-major i + j * nx. */
+  readonly speedRatio: Float64Array;
+  readonly iterations: number;
+  /** Final relative residual ||r|| / ||b||. */
+  readonly residual: number;
+  /** Total flux per unit potential drop (unit depth). */
+  readonly conductance: number;
+  /** Worst |station flux - total| / total over equipotential stations. */
+  readonly fluxImbalance: number;
+  /** Mean inlet speed, potential units per length (flux / inlet length) at a unit potential drop. */
+  readonly inletMeanSpeed: number;
+  readonly peak: { readonly speedRatio: number; readonly x: number; readonly y: number };
+  readonly walls: readonly WallSpeeds[];
+}
