@@ -1,7 +1,15 @@
 import { defineConfig } from 'vitest/config';
 
+/** Cross-origin isolation lets the app share a cancel flag with its workers (SharedArrayBuffer). */
+const isolation = {
+  'Cross-Origin-Opener-Policy': 'same-origin',
+  'Cross-Origin-Embedder-Policy': 'require-corp',
+};
+
 export default defineConfig({
   worker: { format: 'es' },
+  server: { headers: isolation },
+  preview: { headers: isolation },
   test: {
     include: ['test/**/*.test.ts'],
     testTimeout: 60_000,

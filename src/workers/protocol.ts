@@ -1,0 +1,59 @@
+/** Messages between the app and the solver workers: plain data, typed arrays transferred. */
+import type { FlowDomain } from '../solver/types.ts';
+
+export interface SolveRequest {
+  /** Increasing per client; a newer id supersedes every older one. */
+  readonly id: number;
+  readonly domain: FlowDomain;
+  /** Target number of grid cells over the section's bounds. */
+  readonly targetCells: number;
+  /** Relative residual to stop at. */
+  readonly tolerance?: number;
+  /** Start from the potential this worker computed last (any grid), if it has one. */
+  readonly warmStart?: boolean;
+}
+
+/** Speed-ratio samples along a wall: x, y, s, speed ratio per sample (4 numbers each). */
+export interface WallSpeedsReply {
+  readonly name: string;
+  readonly samples: Float64Array;
+}
+
+export interface FieldReply {
+  readonly ok: true;
+  readonly id: number;
+  readonly nx: number;
+  readonly ny: number;
+  readonly x0: number;
+  readonly y0: number;
+  /** Cell size, document units. */
+  readonly h: number;
+  /** Speed ratio per cell for the GPU, row-major i + j * nx, NaN outside the fluid. */
+  readonly speedRatio: Float32Array;
+  readonly iterations: number;
+  readonly residual: number;
+  readonly conductance: number;
+  readonly fluxImbalance: number;
+  readonly peak: { readonly speedRatio: number; readonly x: number; readonly y: number };
+  readonly walls: readonly WallSpeedsReply[];
+  /** Time the worker spent, ms (measured outside the solver). */
+  readonly workerMs: number;
+}
+
+export interface FailureReply {
+  readonly ok: false;
+  readonly id: number;
+  /** 'superseded' when a newer request stopped this one. */
+  readonly code: string;
+  readonly message: string;
+  readonly where?: readonly [number, number];
+}
+
+export type SolveReply = FieldReply | FailureReply;
+
+/** The API one solver worker exposes over comlink. */
+export interface SolverWorkerApi {
+  /** Give the worker the shared cell holding the newest request id (null where SharedArrayBuffer is unavailable). */
+  init(latestId: SharedArrayBuffer | null): void;
+  solve(request: SolveRequest): Promise<SolveReply>;
+}

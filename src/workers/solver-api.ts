@@ -1,0 +1,72 @@
+/** The solver worker's API: a thin adapter from messages to the pure solver; it owns no physics. */
+import * as Comlink from 'comlink';
+import { solveFlow } from '../solver/solve.ts';
+import type { PotentialField, SolveResult } from '../solver/types.ts';
+import type { FailureReply, FieldReply, SolveReply, SolveRequest, SolverWorkerApi } from './protocol.ts';
+
+export function createSolverApi(): SolverWorkerApi {
+  let latest: Int32Array | null = null;
+  let lastPotential: PotentialField | null = null;
+  return {
+    init(shared) {
+      latest = shared ? new Int32Array(shared) : null;
+    },
+    async solve(request) {
+      const superseded = () => latest !== null && Atomics.load(latest, 0) > request.id;
+      if (superseded()) return failure(request.id, 'superseded', 'A newer request replaced this one.');
+      const started = performance.now();
+      try {
+        const result = solveFlow(request.domain, {
+          targetCells: request.targetCells,
+          tolerance: request.tolerance,
+          warmStart: request.warmStart && lastPotential ? lastPotential : undefined,
+          shouldStop: superseded,
+        });
+        if (superseded()) return failure(request.id, 'superseded', 'A newer request replaced this one.');
+        lastPotential = potentialOf(result);
+        return transferReply(toReply(request.id, result, performance.now() - started));
+      } catch (error) {
+        return failureFrom(request.id, error);
+      }
+    },
+  };
+}
+
+function potentialOf(result: SolveResult): PotentialField {
+  const { nx, ny, h, x0, y0 } = result.grid;
+  return { nx, ny, h, x0, y0, phi: result.phi };
+}
+
+function toReply(id: number, result: SolveResult, workerMs: number): FieldReply {
+  const { nx, ny, h, x0, y0 } = result.grid;
+  return {
+    ok: true, id, nx, ny, h, x0, y0,
+    speedRatio: Float32Array.from(result.speedRatio),
+    iterations: result.iterations,
+    residual: result.residual,
+    conductance: result.conductance,
+    fluxImbalance: result.fluxImbalance,
+    peak: result.peak,
+    walls: result.walls.map((w) => ({ name: w.name, samples: Float64Array.from(w.samples) })),
+    workerMs,
+  };
+}
+
+function transferReply(reply: FieldReply): SolveReply {
+  const buffers: ArrayBuffer[] = [reply.speedRatio.buffer as ArrayBuffer, ...reply.walls.map((w) => w.samples.buffer as ArrayBuffer)];
+  return Comlink.transfer(reply, buffers);
+}
+
+function failure(id: number, code: string, message: string, where?: readonly [number, number]): FailureReply {
+  return where ? { ok: false, id, code, message, where } : { ok: false, id, code, message };
+}
+
+/** Errors the user can cause carry a code and a plain message; anything else is reported as internal. */
+function failureFrom(id: number, error: unknown): FailureReply {
+  if (error instanceof Error && typeof (error as { code?: unknown }).code === 'string') {
+    const typed = error as Error & { code: string; where?: readonly [number, number] };
+    return failure(id, typed.code, typed.message, typed.where);
+  }
+  const message = error instanceof Error ? error.message : String(error);
+  return failure(id, 'internal', `The solver failed unexpectedly: ${message}`);
+}
