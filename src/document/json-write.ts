@@ -1,0 +1,51 @@
+/** Stable pretty JSON for section files: 2-space indent, points kept on one line, keys in the order given. */
+
+const INDENT = '  ';
+/** Widest line a small record (a vertex, an edge) is kept on. */
+const LINE_WIDTH = 100;
+
+/** Writes `value` (plain JSON data) with a trailing newline. Fields whose value is undefined are left out. */
+export function writeJson(value: unknown): string {
+  return `${write(value, '')}\n`;
+}
+
+function write(value: unknown, indent: string): string {
+  if (typeof value === 'number') return writeNumber(value);
+  if (typeof value === 'string' || typeof value === 'boolean' || value === null) return JSON.stringify(value);
+  if (Array.isArray(value)) return writeArray(value, indent);
+  if (typeof value === 'object') return writeObject(value as Record<string, unknown>, indent);
+  throw new TypeError(`cannot write a ${typeof value} as JSON`);
+}
+
+/** -0 is written as -0 so that a save and load gives back exactly the same numbers. */
+function writeNumber(n: number): string {
+  if (!Number.isFinite(n)) throw new TypeError(`cannot write ${n} as JSON`);
+  return Object.is(n, -0) ? '-0' : JSON.stringify(n);
+}
+
+function writeArray(items: readonly unknown[], indent: string): string {
+  if (items.length === 0) return '[]';
+  // A list of plain numbers is a point: [x, y] on one line reads as a coordinate.
+  if (items.every((item) => typeof item === 'number')) return `[${items.map((n) => writeNumber(n as number)).join(', ')}]`;
+  const inner = indent + INDENT;
+  return `[\n${items.map((item) => inner + write(item, inner)).join(',\n')}\n${indent}]`;
+}
+
+function writeObject(record: Record<string, unknown>, indent: string): string {
+  const keys = Object.keys(record).filter((key) => record[key] !== undefined);
+  if (keys.length === 0) return '{}';
+  // A small flat record (a vertex, an edge) reads best on one line: { "at": [12.5, 40] }.
+  if (keys.every((key) => isFlat(record[key]))) {
+    const line = `{ ${keys.map((key) => `${JSON.stringify(key)}: ${write(record[key], indent)}`).join(', ')} }`;
+    if (indent.length + line.length <= LINE_WIDTH) return line;
+  }
+  const inner = indent + INDENT;
+  const fields = keys.map((key) => `${inner}${JSON.stringify(key)}: ${write(record[key], inner)}`);
+  return `{\n${fields.join(',\n')}\n${indent}}`;
+}
+
+/** A value that is written on one line anyway: a number, text, true/false/null or a point. */
+function isFlat(value: unknown): boolean {
+  if (Array.isArray(value)) return value.every((item) => typeof item === 'number');
+  return typeof value !== 'object' || value === null;
+}

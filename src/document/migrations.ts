@@ -1,0 +1,58 @@
+/**
+ * Older section formats and how each becomes the next. A file is checked against the schema of its own version
+ * (so problems are named by the paths in the file as written), then lifted one version at a time.
+ */
+
+import { z } from 'zod';
+import { FORMAT_NAME, type Section, type Settings, type Units } from './types.ts';
+import { sectionSchema, titleSchema, unitsSchema } from './schema.ts';
+
+/** Format version 1: one section at the top level, no variants, no settings. */
+export const documentV1Schema = z.strictObject(
+  {
+    format: z.literal(FORMAT_NAME, { error: `must be "${FORMAT_NAME}"` }),
+    version: z.literal(1, { error: 'must be 1' }),
+    title: titleSchema,
+    units: unitsSchema,
+    section: sectionSchema,
+  },
+  { error: 'must be a section document (an object)' },
+);
+
+/** Name of the single variant a version-1 file becomes. */
+export const V1_VARIANT_NAME = 'base';
+/** Settings given to files from before settings existed. */
+export const DEFAULT_SETTINGS: Settings = { gridDetail: 'standard' };
+
+/** The version-2 document a version-1 file becomes (validated again by the loader). */
+export interface DocumentV2Shape {
+  format: typeof FORMAT_NAME;
+  version: 2;
+  title: string;
+  units: Units;
+  activeVariant: string;
+  settings: Settings;
+  variants: { name: string; section: Section }[];
+}
+
+function v1ToV2(doc: z.output<typeof documentV1Schema>): DocumentV2Shape {
+  return {
+    format: FORMAT_NAME,
+    version: 2,
+    title: doc.title,
+    units: doc.units,
+    activeVariant: V1_VARIANT_NAME,
+    settings: { ...DEFAULT_SETTINGS },
+    variants: [{ name: V1_VARIANT_NAME, section: doc.section }],
+  };
+}
+
+/** One step: the schema of version `from` and the lift to version `from + 1`. */
+export interface Migration {
+  readonly from: number;
+  readonly schema: z.ZodType;
+  readonly up: (doc: never) => unknown;
+}
+
+/** Every older version in order; MIGRATIONS[i].from === i + 1. */
+export const MIGRATIONS: readonly Migration[] = [{ from: 1, schema: documentV1Schema, up: v1ToV2 }];
