@@ -1,0 +1,44 @@
+/** Argument schemas shared by the edits, and the one place that turns a bad argument into an EditError. */
+
+import { z } from 'zod';
+import { EditError } from './errors.ts';
+
+/** A finite number (zod 4 rejects NaN and infinities). */
+export const finite = z.number();
+
+/** [x, y] in document units. */
+export const pointSchema = z.tuple([finite, finite]).readonly();
+
+/** A 0-based position in a list. */
+export const indexSchema = z.number().int().min(0);
+
+/** Absent: the section outline; otherwise the island's index. */
+export const islandSchema = indexSchema.optional();
+
+export const pointRefSchema = z.discriminatedUnion('kind', [
+  z.strictObject({ kind: z.literal('vertex'), vertex: indexSchema, island: islandSchema }),
+  z.strictObject({ kind: z.literal('through'), edge: indexSchema, island: islandSchema }),
+  z.strictObject({ kind: z.literal('via'), edge: indexSchema, via: indexSchema, island: islandSchema }),
+]);
+
+/** Arguments naming one vertex. */
+export const vertexArgs = { vertex: indexSchema, island: islandSchema };
+
+/** Arguments naming one edge. */
+export const edgeArgs = { edge: indexSchema, island: islandSchema };
+
+/** Parses `raw` or throws an EditError naming the first bad argument. */
+export function parseArgs<T>(schema: z.ZodType<T>, edit: string, raw: unknown): T {
+  const result = schema.safeParse(raw);
+  if (result.success) return result.data;
+  const issue = result.error.issues[0];
+  const path = formatPath(issue.path);
+  throw new EditError(edit, path === '' ? `${edit}: ${issue.message}` : `${edit}: ${path}: ${issue.message}`);
+}
+
+/** `['point', 'vertex']` -> `point.vertex`, `['to', 1]` -> `to[1]`. */
+function formatPath(path: readonly PropertyKey[]): string {
+  let out = '';
+  for (const key of path) out += typeof key === 'number' ? `[${key}]` : `${out === '' ? '' : '.'}${String(key)}`;
+  return out;
+}

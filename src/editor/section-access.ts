@@ -1,0 +1,58 @@
+/** Reading and replacing the active variant's section and its outlines, sharing every untouched part. */
+
+import type { Outline, PortDocument, Section } from '../document/types.ts';
+import { EditError } from './errors.ts';
+
+/** Index of the active variant; a document whose active name matches no variant cannot be edited. */
+export function activeVariantIndex(doc: PortDocument, edit: string): number {
+  const index = doc.variants.findIndex((v) => v.name === doc.activeVariant);
+  if (index < 0) throw new EditError(edit, `The active variant "${doc.activeVariant}" is not in the document.`);
+  return index;
+}
+
+export function activeSection(doc: PortDocument, edit = ''): Section {
+  return doc.variants[activeVariantIndex(doc, edit)].section;
+}
+
+/** The document with the active variant's section replaced; the same document when nothing changed. */
+export function withActiveSection(doc: PortDocument, edit: string, section: Section): PortDocument {
+  const index = activeVariantIndex(doc, edit);
+  const variant = doc.variants[index];
+  if (variant.section === section) return doc;
+  return { ...doc, variants: replaceAt(doc.variants, index, { ...variant, section }) };
+}
+
+/** The outer outline (island undefined) or island `island`'s outline. */
+export function outlineOf(section: Section, island: number | undefined, edit: string): Outline {
+  if (island === undefined) return section.outline;
+  const found = section.islands[island];
+  if (found === undefined) {
+    throw new EditError(edit, `There is no island ${island + 1}: the section has ${section.islands.length}.`);
+  }
+  return found.outline;
+}
+
+/** The section with one outline replaced; the same section when nothing changed. */
+export function withOutline(section: Section, island: number | undefined, outline: Outline): Section {
+  if (island === undefined) return section.outline === outline ? section : { ...section, outline };
+  const old = section.islands[island];
+  if (old.outline === outline) return section;
+  return { ...section, islands: replaceAt(section.islands, island, { ...old, outline }) };
+}
+
+/** "the section outline" or `island "valve head"`, for messages. */
+export function outlineName(section: Section, island: number | undefined): string {
+  return island === undefined ? 'the section outline' : `island "${section.islands[island].name}"`;
+}
+
+/** A copy of `items` with item `index` replaced. */
+export function replaceAt<T>(items: readonly T[], index: number, value: T): readonly T[] {
+  const copy = items.slice();
+  copy[index] = value;
+  return copy;
+}
+
+/** Wraps an index onto a closed outline of `n` items. */
+export function wrap(index: number, n: number): number {
+  return ((index % n) + n) % n;
+}
