@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import { BreathingInputError } from '../../src/breathing/errors.ts';
 import {
-  BreathingInputError,
   curtainArea,
   liftOverDiameter,
   minValveFlowArea,
