@@ -77,7 +77,7 @@ const FLAT_PLATE_C = 0.123 * 10 ** (-0.678 * TURBULENT_START_SHAPE_FACTOR);
 
 /**
  * Turbulent flat-plate momentum thickness from Ludwieg–Tillmann at H = 1.4, integrating d theta/dx = cf/2 from 0:
- * theta^1.268 = 1.268 * 0.123 * 10^(-0.949) * (U/nu)^-0.268 * x, i.e. theta = 0.0412 x Re_x^-0.2114.
+ * theta^1.268 = 1.268 * 0.123 * 10^(-0.949) * (U/nu)^-0.268 * x, i.e. theta = 0.04121 x Re_x^-0.2114.
  * @returns m; 0 for a zero run or speed
  */
 export function turbulentFlatPlateTheta(runM: number, speedMs: number, nuM2s: number): number {
