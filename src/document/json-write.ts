@@ -27,6 +27,11 @@ function writeArray(items: readonly unknown[], indent: string): string {
   if (items.length === 0) return '[]';
   // A list of plain numbers is a point: [x, y] on one line reads as a coordinate.
   if (items.every((item) => typeof item === 'number')) return `[${items.map((n) => writeNumber(n as number)).join(', ')}]`;
+  // A short list of points stays on one line too: "via": [[72.9, 11.4]].
+  if (items.every(isPoint)) {
+    const line = `[${items.map((item) => write(item, indent)).join(', ')}]`;
+    if (indent.length + line.length <= LINE_WIDTH) return line;
+  }
   const inner = indent + INDENT;
   return `[\n${items.map((item) => inner + write(item, inner)).join(',\n')}\n${indent}]`;
 }
@@ -44,8 +49,12 @@ function writeObject(record: Record<string, unknown>, indent: string): string {
   return `{\n${fields.join(',\n')}\n${indent}}`;
 }
 
-/** A value that is written on one line anyway: a number, text, true/false/null or a point. */
+/** A value that may share a line: a number, text, true/false/null, a point or a list of points. */
 function isFlat(value: unknown): boolean {
-  if (Array.isArray(value)) return value.every((item) => typeof item === 'number');
+  if (Array.isArray(value)) return isPoint(value) || value.every(isPoint);
   return typeof value !== 'object' || value === null;
+}
+
+function isPoint(value: unknown): boolean {
+  return Array.isArray(value) && value.every((item) => typeof item === 'number');
 }

@@ -1,0 +1,74 @@
+/** Entry of the headless portwright command: picks the subcommand, runs it, and maps failures to exit codes. */
+
+import { DocumentError } from '../document/errors.ts';
+import { GeometryError } from '../geometry/index.ts';
+import { EXIT_INTERNAL_ERROR, EXIT_OK, EXIT_USER_ERROR, type CliIO, type Command } from './command.ts';
+import { UserError } from './errors.ts';
+import { checkCommand } from './check.ts';
+
+/** Every subcommand; a new one (e.g. solve) is one file and one entry here. */
+export const COMMANDS: readonly Command[] = [checkCommand];
+
+const HELP_FLAGS = new Set(['-h', '--help', 'help']);
+
+const consoleIO: CliIO = {
+  out: (line) => process.stdout.write(`${line}\n`),
+  err: (line) => process.stderr.write(`${line}\n`),
+};
+
+/** Runs the command line `argv` (without node and the script) and returns the exit code. Never throws. */
+export async function run(argv: readonly string[], io: CliIO = consoleIO): Promise<number> {
+  const [name, ...args] = argv;
+  if (name === undefined) {
+    usage(io.err);
+    return EXIT_USER_ERROR;
+  }
+  if (HELP_FLAGS.has(name)) {
+    usage(io.out);
+    return EXIT_OK;
+  }
+  const command = COMMANDS.find((c) => c.name === name);
+  if (command === undefined) {
+    io.err(`portwright: unknown command "${name}"`);
+    usage(io.err);
+    return EXIT_USER_ERROR;
+  }
+  if (args.some((arg) => HELP_FLAGS.has(arg))) {
+    io.out(`usage: portwright ${command.name} ${command.args}`);
+    io.out(`  ${command.summary}`);
+    return EXIT_OK;
+  }
+  return runCommand(command, args, io);
+}
+
+async function runCommand(command: Command, args: readonly string[], io: CliIO): Promise<number> {
+  try {
+    return await command.run(args, io);
+  } catch (error) {
+    if (error instanceof DocumentError) {
+      io.err(`portwright ${command.name}: ${args[0] ?? ''}: the file cannot be used:`);
+      for (const line of error.message.split('\n')) io.err(`  ${line}`);
+      return EXIT_USER_ERROR;
+    }
+    if (error instanceof UserError || error instanceof GeometryError) {
+      io.err(`portwright ${command.name}: ${error.message}`);
+      return EXIT_USER_ERROR;
+    }
+    io.err(`portwright ${command.name}: internal error (a fault in Portwright, not in your file): ${String(error)}`);
+    if (error instanceof Error && error.stack !== undefined) io.err(error.stack);
+    return EXIT_INTERNAL_ERROR;
+  }
+}
+
+function usage(write: (line: string) => void): void {
+  write('Portwright: ideal-flow checks for cylinder-head port sections.');
+  write('');
+  write('usage: portwright COMMAND [ARGUMENTS]');
+  write('');
+  write('commands:');
+  const width = Math.max(...COMMANDS.map((c) => `${c.name} ${c.args}`.length));
+  for (const c of COMMANDS) write(`  ${`${c.name} ${c.args}`.padEnd(width)}  ${c.summary}`);
+  write('');
+  write(`  portwright COMMAND --help   show how to use one command`);
+  write('exit codes: 0 all good, 1 a problem you can fix (file, arguments), 2 a fault in Portwright');
+}

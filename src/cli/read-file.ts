@@ -1,0 +1,28 @@
+/** Reads a section file from disk for a command, turning every file-system failure into a plain UserError. */
+
+import { readFileSync, statSync } from 'node:fs';
+import { MAX_FILE_BYTES } from '../document/limits.ts';
+import { UserError } from './errors.ts';
+
+/** The text of `path` (UTF-8). Refuses folders and files too big to be a section before reading them. */
+export function readSectionText(path: string): string {
+  try {
+    const stat = statSync(path);
+    if (stat.isDirectory()) throw new UserError(`${path} is a folder, not a section file`);
+    if (stat.size > MAX_FILE_BYTES) {
+      throw new UserError(`${path} is too big (${(stat.size / 1e6).toFixed(1)} MB); a section file is at most ${MAX_FILE_BYTES / 1e6} MB`);
+    }
+    return readFileSync(path, 'utf8');
+  } catch (error) {
+    if (error instanceof UserError) throw error;
+    throw new UserError(`cannot read ${path}: ${fileProblem(error)}`);
+  }
+}
+
+function fileProblem(error: unknown): string {
+  const code = (error as { code?: unknown }).code;
+  if (code === 'ENOENT') return 'no such file';
+  if (code === 'EACCES' || code === 'EPERM') return 'permission denied';
+  if (code === 'ENOTDIR') return 'a folder on the path is a file';
+  return error instanceof Error ? error.message : String(error);
+}
