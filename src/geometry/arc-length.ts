@@ -37,7 +37,7 @@ export function polylineLength(xy: Float64Array, closed = false): number {
 
 /**
  * The point at arc length `s` from point 0 (clamped to the polyline), with its unit tangent.
- * At a point shared by two segments the tangent is the mean of their directions, so a sampled
+ * At a point shared by two segments (to within 1e-12 of the total length) the tangent is the mean of their directions, so a sampled
  * wall direction does not jump with where the flattening happened to put its points.
  * Pass `cumulative` (from cumulativeLengths) when sampling one polyline many times.
  */
@@ -50,9 +50,11 @@ export function pointAtLength(xy: Float64Array, s: number, closed = false, cumul
   const k = findSegment(cum, sc);
   const [ax, ay, bx, by] = segmentEnds(xy, k);
   const len = cum[k + 1] - cum[k];
+  // Within rounding of a join counts as at the join: a length computed as "half the total" must find the vertex there.
+  const near = 1e-12 * total;
   const t = len > 0 ? (sc - cum[k]) / len : 0;
   let [tx, ty] = direction(ax, ay, bx, by);
-  const atJoin = t === 1 ? k + 1 : t === 0 ? k : -1;
+  const atJoin = Math.abs(cum[k + 1] - sc) <= near ? k + 1 : Math.abs(sc - cum[k]) <= near ? k : -1;
   if (atJoin >= 0 && (closed || (atJoin > 0 && atJoin < m))) {
     const before = (atJoin - 1 + m) % m, after = atJoin % m;
     const d0 = direction(...segmentEnds(xy, before)), d1 = direction(...segmentEnds(xy, after));

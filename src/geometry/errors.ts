@@ -91,6 +91,7 @@ function formatNumber(value: number, round: 'nearest' | 'down', digits = 3): str
   if (value === 0) return '0';
   const scale = 10 ** (digits - 1 - Math.floor(Math.log10(Math.abs(value))));
   // Rounding down keeps an "at most" figure honest: the stated radius really fits.
-  const rounded = round === 'down' ? Math.floor(value * scale) / scale : Math.round(value * scale) / scale;
+  // (1e-9 slack so 9.999999999999998, a rounding of 10, still shows as 10.)
+  const rounded = round === 'down' ? Math.floor(value * scale * (1 + 1e-9)) / scale : Math.round(value * scale) / scale;
   return String(Number(rounded.toPrecision(digits)));
 }
