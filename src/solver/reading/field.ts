@@ -1,0 +1,63 @@
+/** The cell potential carried a little way into the solid, and sampled anywhere by bilinear interpolation. */
+import type { CutGrid } from '../types.ts';
+
+/**
+ * A copy of `phi` (row-major i + j * nx, NaN where not solved) with `layers` rings of cells outside the solved
+ * region filled, each with the mean of its already-filled edge neighbours. The copy lets equipotential lines and
+ * interpolation run up to (and past) a wall, where they are clipped; the mean of the neighbours is a zero normal
+ * gradient, which is what a wall imposes, so an equipotential reaches the wall square-on as it should.
+ */
+export function extendedPhi(grid: CutGrid, phi: Float64Array, layers = 2): Float64Array {
+  const { nx, ny } = grid;
+  const out = Float64Array.from(phi);
+  const next = new Float64Array(out.length);
+  for (let layer = 0; layer < layers; layer++) {
+    next.set(out);
+    for (let j = 0; j < ny; j++) {
+      for (let i = 0; i < nx; i++) {
+        const c = i + j * nx;
+        if (Number.isFinite(out[c])) continue;
+        let sum = 0;
+        let count = 0;
+        if (i > 0 && Number.isFinite(out[c - 1])) { sum += out[c - 1]; count++; }
+        if (i < nx - 1 && Number.isFinite(out[c + 1])) { sum += out[c + 1]; count++; }
+        if (j > 0 && Number.isFinite(out[c - nx])) { sum += out[c - nx]; count++; }
+        if (j < ny - 1 && Number.isFinite(out[c + nx])) { sum += out[c + nx]; count++; }
+        if (count > 0) next[c] = sum / count;
+      }
+    }
+    out.set(next);
+  }
+  return out;
+}
+
+/**
+ * Bilinear interpolation of a cell-centred field at (x, y), document units. Corners that are NaN drop out and the
+ * remaining weights are rescaled; NaN when all four are NaN or the point is off the grid.
+ * @param values row-major i + j * nx, cell centres at (x0 + (i + 0.5) h, y0 + (j + 0.5) h)
+ */
+export function sampleCells(grid: CutGrid, values: Float64Array, x: number, y: number): number {
+  const { nx, ny, h } = grid;
+  const u = (x - grid.x0) / h - 0.5;
+  const v = (y - grid.y0) / h - 0.5;
+  const i = Math.floor(u);
+  const j = Math.floor(v);
+  if (!(i >= -1 && j >= -1 && i < nx && j < ny)) return NaN;
+  const fu = u - i;
+  const fv = v - j;
+  let sum = 0;
+  let weight = 0;
+  for (let b = 0; b <= 1; b++) {
+    for (let a = 0; a <= 1; a++) {
+      const ci = i + a;
+      const cj = j + b;
+      if (ci < 0 || cj < 0 || ci >= nx || cj >= ny) continue;
+      const value = values[ci + cj * nx];
+      if (!Number.isFinite(value)) continue;
+      const w = (a === 1 ? fu : 1 - fu) * (b === 1 ? fv : 1 - fv);
+      sum += w * value;
+      weight += w;
+    }
+  }
+  return weight > 1e-12 ? sum / weight : NaN;
+}
