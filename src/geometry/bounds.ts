@@ -55,9 +55,9 @@ function addEdgeBulge(start: Point, edge: Edge, end: Point, add: (x: number, y: 
       points.forEach((p) => add(p[0], p[1]));
       return;
     }
-    const out: number[] = [];
-    for (const span of catmullRomSpans(points)) flattenSpan(span, 1e-3 * extent, out);
-    for (let k = 0; k < out.length; k += 2) add(out[k], out[k + 1]);
+    const sink = { xy: [] as number[], u: [] as number[] };
+    for (const span of catmullRomSpans(points)) flattenSpan(span, 1e-3 * extent, sink);
+    for (let k = 0; k < sink.xy.length; k += 2) add(sink.xy[k], sink.xy[k + 1]);
   }
 }
 

@@ -63,18 +63,35 @@ export function spanPoint(s: HermiteSpan, u: number, out: [number, number]): [nu
   return out;
 }
 
+/** Derivative of the span with respect to u at u, written into `out` (length units per unit u). */
+export function spanDerivative(s: HermiteSpan, u: number, out: [number, number]): [number, number] {
+  const u2 = u * u;
+  const g00 = 6 * u2 - 6 * u, g10 = 3 * u2 - 4 * u + 1, g01 = -g00, g11 = 3 * u2 - 2 * u;
+  out[0] = g00 * s.p0x + g10 * s.d0x + g01 * s.p1x + g11 * s.d1x;
+  out[1] = g00 * s.p0y + g10 * s.d0y + g01 * s.p1y + g11 * s.d1y;
+  return out;
+}
+
+/** Where flattened points go: x, y pairs and the span parameter u of each. */
+export interface FlattenSink {
+  readonly xy: number[];
+  readonly u: number[];
+}
+
 /**
- * Flattens one span into `out` (x, y pairs; the span's start point excluded, its end included) so that
+ * Flattens the span between u0 and u1 into `sink` (the point at u0 excluded, the point at u1 included) so that
  * no chord strays more than `tol` (length units) from the curve. Each piece is checked at its quarter points;
- * the span is first cut in four so an S-bend cannot hide between checks.
+ * the range is first cut in four so an S-bend cannot hide between checks.
  */
-export function flattenSpan(s: HermiteSpan, tol: number, out: number[]): void {
+export function flattenSpan(s: HermiteSpan, tol: number, sink: FlattenSink, u0 = 0, u1 = 1): void {
   const p: [number, number] = [0, 0];
-  let ax = s.p0x, ay = s.p0y;
+  spanPoint(s, u0, p);
+  let ax = p[0], ay = p[1];
   for (let q = 1; q <= 4; q++) {
-    spanPoint(s, q / 4, p);
+    const ua = u0 + ((u1 - u0) * (q - 1)) / 4, ub = u0 + ((u1 - u0) * q) / 4;
+    spanPoint(s, ub, p);
     const bx = p[0], by = p[1];
-    refine(s, (q - 1) / 4, q / 4, ax, ay, bx, by, tol, out, 0);
+    refine(s, ua, ub, ax, ay, bx, by, tol, sink, 0);
     ax = bx; ay = by;
   }
 }
@@ -83,7 +100,7 @@ const MAX_DEPTH = 24;
 
 function refine(
   s: HermiteSpan, u0: number, u1: number, ax: number, ay: number, bx: number, by: number,
-  tol: number, out: number[], depth: number,
+  tol: number, sink: FlattenSink, depth: number,
 ): void {
   const p: [number, number] = [0, 0];
   let worst = 0;
@@ -92,14 +109,15 @@ function refine(
     worst = Math.max(worst, distanceToChord(p[0], p[1], ax, ay, bx, by));
   }
   if (worst <= tol || depth >= MAX_DEPTH) {
-    out.push(bx, by);
+    sink.xy.push(bx, by);
+    sink.u.push(u1);
     return;
   }
   const um = 0.5 * (u0 + u1);
   spanPoint(s, um, p);
   const mx = p[0], my = p[1];
-  refine(s, u0, um, ax, ay, mx, my, tol, out, depth + 1);
-  refine(s, um, u1, mx, my, bx, by, tol, out, depth + 1);
+  refine(s, u0, um, ax, ay, mx, my, tol, sink, depth + 1);
+  refine(s, um, u1, mx, my, bx, by, tol, sink, depth + 1);
 }
 
 function distanceToChord(px: number, py: number, ax: number, ay: number, bx: number, by: number): number {

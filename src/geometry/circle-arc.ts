@@ -60,13 +60,6 @@ export function arcPoints(arc: CircleArc, count: number): Float64Array {
   return out;
 }
 
-/** Unit direction of travel along the arc at its start (`at` = 0) or end (`at` = 1). */
-export function arcTangent(arc: CircleArc, at: 0 | 1): [number, number] {
-  const angle = arc.startAngle + arc.sweep * at;
-  const s = Math.sign(arc.sweep);
-  return [-Math.sin(angle) * s, Math.cos(angle) * s];
-}
-
 /** Whether `angle` lies within the arc's sweep. */
 export function arcContainsAngle(arc: CircleArc, angle: number): boolean {
   const turn = 2 * Math.PI;

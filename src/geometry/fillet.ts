@@ -73,11 +73,11 @@ export function largestFilletRadius(cornerAngle: number, room: number): number {
 }
 
 /**
- * Points of the fillet arc, tangentIn to tangentOut inclusive, within chordal tolerance `tol`.
+ * Points of a fillet arc, tangentIn to tangentOut inclusive (ends exact), within chordal tolerance `tol`.
  * The chord count is even so the arc's midpoint is a point: the two halves can take the roles
  * of the two edges they join.
  */
-export function filletPoints(fillet: CornerFillet, tol: number): Float64Array {
+export function filletPoints(fillet: Pick<CornerFillet, 'arc' | 'tangentIn' | 'tangentOut'>, tol: number): Float64Array {
   const count = 2 * Math.ceil(arcSegmentCount(fillet.arc, tol, 2) / 2);
   const xy = arcPoints(fillet.arc, count);
   xy[0] = fillet.tangentIn[0]; xy[1] = fillet.tangentIn[1];

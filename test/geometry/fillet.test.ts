@@ -144,27 +144,26 @@ describe('fillets in the traced outline', () => {
     assertInDelta(ring.xy[2 * mid + 1], 4 - 4 * Math.SQRT1_2, 1e-12);
   });
 
-  it('a fillet beside an arc edge: tangent to the straight edge, ending on the flattened arc at the tangent distance', () => {
-    // Edge 1 is an arc from (20, 0) through (25, 10) to (20, 20): centre (12.5, 10), radius 12.5, leaving (20, 0)
-    // along (0.8, 0.6). [derived] The corner angle has cos -0.8, so tan(angle / 2) = 3 and a radius-3 fillet
-    // needs 1 unit of each edge: the floor ends at (19, 0) and the fillet centre is (19, 3).
+  it('a fillet beside an arc edge is tangent to the true arc: centre R - r from the arc centre and r above the floor', () => {
+    // Edge 1 is an arc from (20, 0) through (25, 10) to (20, 20): centre O = (12.5, 10), radius R = 12.5.
+    // [derived] A radius-3 fillet inside the turn has its centre C 3 above the floor and R - 3 = 9.5 from O:
+    // C = (12.5 + sqrt(9.5^2 - 7^2), 3); it touches the floor below C and the arc at O + R (C - O) / 9.5.
     const outline = {
       vertices: [{ at: [0, 0] as Point }, { at: [20, 0] as Point, filletRadius: 3 }, { at: [20, 20] as Point }, { at: [0, 20] as Point }],
       edges: [wall(), { kind: 'arc' as const, role: 'wall' as const, through: [25, 10] as Point }, wall(), wall()],
     };
-    const tol = 1e-3;
-    const ring = sectionToDomain(section(outline), tol).outer;
-    let floorEnd = -Infinity, onFillet = 0, arcStart: Point = [Infinity, Infinity];
+    const ring = sectionToDomain(section(outline), 1e-3).outer;
+    const cx = 12.5 + Math.sqrt(9.5 ** 2 - 49);
+    const touch: Point = [12.5 + (12.5 * (cx - 12.5)) / 9.5, 10 + (12.5 * (3 - 10)) / 9.5];
+    let floorEnd = -Infinity, onFillet = 0, nearTouch = Infinity;
     for (let k = 0; k < ring.xy.length; k += 2) {
       const x = ring.xy[k], y = ring.xy[k + 1];
       if (y === 0) floorEnd = Math.max(floorEnd, x);
-      if (Math.abs(Math.hypot(x - 19, y - 3) - 3) <= 1e-9) onFillet++;
-      const onArc = x > 20 && Math.abs(Math.hypot(x - 12.5, y - 10) - 12.5) <= tol;
-      if (onArc && Math.hypot(x - 20, y) < Math.hypot(arcStart[0] - 20, arcStart[1])) arcStart = [x, y];
+      if (Math.abs(Math.hypot(x - cx, y - 3) - 3) <= 1e-9) onFillet++;
+      nearTouch = Math.min(nearTouch, Math.hypot(x - touch[0], y - touch[1]));
     }
-    assertInDelta(floorEnd, 19, 1e-12);
+    assertInDelta(floorEnd, cx, 1e-9);
     expect(onFillet).toBeGreaterThan(2);
-    // Nearest arc point to the corner: 1 unit along the arc (chord 2 * 12.5 * sin(0.04) = 0.99973).
-    assertInDelta(Math.hypot(arcStart[0] - 20, arcStart[1]), 1, tol);
+    expect(nearTouch).toBeLessThanOrEqual(1e-9);
   });
 });

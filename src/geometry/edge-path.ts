@@ -1,0 +1,135 @@
+/** An outline edge as a parametric path on t in [0, 1] (vertex to next vertex): evaluation and flattening of any part. */
+
+import type { Edge, Point } from '../document/types.ts';
+import { arcPoints, arcSegmentCount, arcThroughPoints, type CircleArc } from './circle-arc.ts';
+import { catmullRomSpans, flattenSpan, spanDerivative, spanPoint, type FlattenSink } from './catmull-rom.ts';
+import { GeometryError, outlineLabel } from './errors.ts';
+
+/** Which edge, for error messages. */
+export interface EdgePlace {
+  readonly edgeIndex: number;
+  /** Absent for the section outline. */
+  readonly islandName?: string;
+}
+
+/** A flattened stretch of an edge. */
+export interface PathPolyline {
+  /** x0, y0, x1, y1, ... length units. */
+  readonly xy: Float64Array;
+  /** Path parameter t of each point, increasing. */
+  readonly t: Float64Array;
+}
+
+export interface EdgePath {
+  readonly kind: Edge['kind'];
+  /** Point at t (t may stray a little outside [0, 1]: the path's natural continuation). */
+  point(t: number): [number, number];
+  /** Derivative d(point)/dt at t, length units per unit t. */
+  derivative(t: number): [number, number];
+  /** Flattened part from t0 to t1 (t0 < t1) within chordal tolerance `tol`; t = 0 and t = 1 land exactly on the vertices. */
+  flatten(t0: number, t1: number, tol: number): PathPolyline;
+}
+
+/**
+ * The path of `edge` from `start` to `end` (which must differ).
+ * Throws GeometryError 'bad-arc' for an arc whose `through` point sits on an end or in line outside the ends,
+ * and 'zero-length' for a curve with two consecutive points alike.
+ */
+export function edgePath(start: Point, edge: Edge, end: Point, place: EdgePlace): EdgePath {
+  if (edge.kind === 'arc') {
+    const arc = arcOfEdge(start, edge.through, end, place);
+    return arc === null ? linePath(start, end) : arcPath(arc, start, end);
+  }
+  if (edge.kind === 'curve' && edge.via.length > 0) return curvePath([start, ...edge.via, end], place);
+  return linePath(start, end);
+}
+
+function linePath(a: Point, b: Point): EdgePath {
+  const dx = b[0] - a[0], dy = b[1] - a[1];
+  const at = (t: number): [number, number] => (t === 1 ? [b[0], b[1]] : [a[0] + t * dx, a[1] + t * dy]);
+  return {
+    kind: 'line',
+    point: at,
+    derivative: () => [dx, dy],
+    flatten: (t0, t1) => {
+      const p = at(t0), q = at(t1);
+      return { xy: Float64Array.of(p[0], p[1], q[0], q[1]), t: Float64Array.of(t0, t1) };
+    },
+  };
+}
+
+function arcPath(arc: CircleArc, start: Point, end: Point): EdgePath {
+  const angle = (t: number): number => arc.startAngle + arc.sweep * t;
+  return {
+    kind: 'arc',
+    point: (t) => [arc.cx + arc.r * Math.cos(angle(t)), arc.cy + arc.r * Math.sin(angle(t))],
+    derivative: (t) => [-arc.r * arc.sweep * Math.sin(angle(t)), arc.r * arc.sweep * Math.cos(angle(t))],
+    flatten: (t0, t1, tol) => {
+      const part: CircleArc = { ...arc, startAngle: angle(t0), sweep: arc.sweep * (t1 - t0) };
+      const count = arcSegmentCount(part, tol);
+      const xy = arcPoints(part, count);
+      if (t0 === 0) { xy[0] = start[0]; xy[1] = start[1]; }
+      if (t1 === 1) { xy[2 * count] = end[0]; xy[2 * count + 1] = end[1]; }
+      return { xy, t: Float64Array.from({ length: count + 1 }, (_, k) => t0 + ((t1 - t0) * k) / count) };
+    },
+  };
+}
+
+function curvePath(points: readonly Point[], place: EdgePlace): EdgePath {
+  for (let k = 0; k + 1 < points.length; k++) {
+    const a = points[k], b = points[k + 1];
+    if (a[0] === b[0] && a[1] === b[1]) {
+      throw new GeometryError('zero-length',
+        `Edge ${place.edgeIndex + 1} of ${outlineLabel(place.islandName)} is a curve with two consecutive points at the same place; remove one.`,
+        { where: a, edgeIndex: place.edgeIndex, islandName: place.islandName });
+    }
+  }
+  const spans = catmullRomSpans(points);
+  const m = spans.length;
+  // Span k covers t in [k / m, (k + 1) / m].
+  const locate = (t: number): [number, number] => {
+    const k = Math.min(m - 1, Math.max(0, Math.floor(t * m)));
+    return [k, t * m - k];
+  };
+  return {
+    kind: 'curve',
+    point: (t) => { const [k, u] = locate(t); return spanPoint(spans[k], u, [0, 0]); },
+    derivative: (t) => { const [k, u] = locate(t); const d = spanDerivative(spans[k], u, [0, 0]); return [d[0] * m, d[1] * m]; },
+    flatten: (t0, t1, tol) => {
+      const [k0, u0] = locate(t0);
+      let [k1, u1] = t1 >= 1 ? [m - 1, 1] : locate(t1);
+      if (u1 === 0 && k1 > k0) { k1 -= 1; u1 = 1; } // ending on a span boundary: finish the span before
+      const first = spanPoint(spans[k0], u0, [0, 0]);
+      const sink: FlattenSink = { xy: [first[0], first[1]], u: [t0 * m] };
+      for (let k = k0; k <= k1; k++) {
+        const before = sink.u.length;
+        flattenSpan(spans[k], tol, sink, k === k0 ? u0 : 0, k === k1 ? u1 : 1);
+        for (let j = before; j < sink.u.length; j++) sink.u[j] += k; // span u to curve parameter x m
+      }
+      const xy = Float64Array.from(sink.xy);
+      if (t0 === 0) { xy[0] = points[0][0]; xy[1] = points[0][1]; }
+      if (t1 >= 1) { xy[xy.length - 2] = points[m][0]; xy[xy.length - 1] = points[m][1]; }
+      return { xy, t: Float64Array.from(sink.u, (x) => x / m) };
+    },
+  };
+}
+
+/** The arc of an arc edge, or null when its three points are collinear with `through` between the ends (a line). */
+export function arcOfEdge(start: Point, through: Point, end: Point, place: EdgePlace): CircleArc | null {
+  const chord = Math.hypot(end[0] - start[0], end[1] - start[1]);
+  const near = 1e-9 * chord;
+  if (Math.hypot(through[0] - start[0], through[1] - start[1]) <= near || Math.hypot(through[0] - end[0], through[1] - end[1]) <= near) {
+    throw badArc('its middle point sits on one of its ends', through, place);
+  }
+  const arc = arcThroughPoints(start, through, end);
+  if (arc !== null) return arc;
+  const along = (through[0] - start[0]) * (end[0] - start[0]) + (through[1] - start[1]) * (end[1] - start[1]);
+  if (along < 0 || along > chord * chord) throw badArc('its middle point lies in line with its ends but outside them', through, place);
+  return null;
+}
+
+function badArc(why: string, through: Point, place: EdgePlace): GeometryError {
+  return new GeometryError('bad-arc',
+    `Edge ${place.edgeIndex + 1} of ${outlineLabel(place.islandName)} is an arc but ${why}; move it off the line between the ends.`,
+    { where: through, edgeIndex: place.edgeIndex, islandName: place.islandName });
+}
