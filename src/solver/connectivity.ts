@@ -38,7 +38,7 @@ export function connectedCells(grid: CutGrid): Uint8Array {
     const [x, y] = closingPoint(grid, reached);
     throw new FlowSetupError(
       'blocked',
-      `Air cannot get from the inlet to the outlet: the passage closes near x = ${formatLength(x)}, y = ${formatLength(y)}. ` +
+      `Air cannot get from the inlet to the outlet: the passage closes near x = ${formatLength(x, grid.h)}, y = ${formatLength(y, grid.h)}. ` +
         'Open the gap there (more valve lift, or move the wall) and solve again.',
       [x, y],
     );

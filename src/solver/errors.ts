@@ -22,9 +22,8 @@ export class FlowSetupError extends Error {
   }
 }
 
-/** A length or coordinate for a message: one decimal, or more when the section is small. */
-export function formatLength(value: number): string {
-  const size = Math.abs(value);
-  const digits = size === 0 || size >= 10 ? 1 : size >= 1 ? 2 : 3;
+/** A length or coordinate for a message, to one decimal or finer when `step` (the grid cell, length units) is smaller. */
+export function formatLength(value: number, step = 1): string {
+  const digits = Math.min(4, Math.max(1, Math.ceil(-Math.log10(step))));
   return value.toFixed(digits);
 }

@@ -77,7 +77,7 @@ export function checkInletSpan(domain: FlowDomain, h: number): void {
   if (inlet < h) {
     throw new FlowSetupError(
       'degenerate',
-      `The inlet is ${formatLength(inlet)} long, shorter than one grid cell (${formatLength(h)}): lengthen the inlet or use a finer grid.`,
+      `The inlet is ${formatLength(inlet, h / 10)} long, shorter than one grid cell (${formatLength(h, h / 10)}): lengthen the inlet or use a finer grid.`,
     );
   }
 }

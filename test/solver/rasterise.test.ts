@@ -203,6 +203,6 @@ describe('rasterise: set-up errors a porter can cause', () => {
     // Inlet 0.05 long on a unit square at 100 cells (h = 0.1).
     const shortInlet: Pt[] = [[0, 0], [1, 0], [1, 1], [0, 1], [0, 0.05]];
     expect(code(() => rasterise(domainOf(ringOf(shortInlet, [W, OUT, W, W, IN])), 100))).toBe('degenerate');
-    expect(() => rasterise(domainOf(ringOf(shortInlet, [W, OUT, W, W, IN])), 100)).toThrow(/inlet is 0\.050 long/);
+    expect(() => rasterise(domainOf(ringOf(shortInlet, [W, OUT, W, W, IN])), 100)).toThrow(/inlet is 0\.05 long, shorter than one grid cell \(0\.10\)/);
   });
 });
