@@ -17,20 +17,25 @@ const consoleIO: CliIO = {
 };
 
 /** Runs the command line `argv` (without node and the script) and returns the exit code. Never throws. */
-export async function run(argv: readonly string[], io: CliIO = consoleIO): Promise<number> {
+export function run(argv: readonly string[], io: CliIO = consoleIO): Promise<number> {
+  return runWith(COMMANDS, argv, io);
+}
+
+/** As run, choosing from `commands`. */
+export async function runWith(commands: readonly Command[], argv: readonly string[], io: CliIO): Promise<number> {
   const [name, ...args] = argv;
   if (name === undefined) {
-    usage(io.err);
+    usage(commands, io.err);
     return EXIT_USER_ERROR;
   }
   if (HELP_FLAGS.has(name)) {
-    usage(io.out);
+    usage(commands, io.out);
     return EXIT_OK;
   }
-  const command = COMMANDS.find((c) => c.name === name);
+  const command = commands.find((c) => c.name === name);
   if (command === undefined) {
     io.err(`portwright: unknown command "${name}"`);
-    usage(io.err);
+    usage(commands, io.err);
     return EXIT_USER_ERROR;
   }
   if (args.some((arg) => HELP_FLAGS.has(arg))) {
@@ -60,14 +65,14 @@ async function runCommand(command: Command, args: readonly string[], io: CliIO):
   }
 }
 
-function usage(write: (line: string) => void): void {
+function usage(commands: readonly Command[], write: (line: string) => void): void {
   write('Portwright: ideal-flow checks for cylinder-head port sections.');
   write('');
   write('usage: portwright COMMAND [ARGUMENTS]');
   write('');
   write('commands:');
-  const width = Math.max(...COMMANDS.map((c) => `${c.name} ${c.args}`.length));
-  for (const c of COMMANDS) write(`  ${`${c.name} ${c.args}`.padEnd(width)}  ${c.summary}`);
+  const width = Math.max(...commands.map((c) => `${c.name} ${c.args}`.length));
+  for (const c of commands) write(`  ${`${c.name} ${c.args}`.padEnd(width)}  ${c.summary}`);
   write('');
   write(`  portwright COMMAND --help   show how to use one command`);
   write('exit codes: 0 all good, 1 a problem you can fix (file, arguments), 2 a fault in Portwright');

@@ -1,0 +1,69 @@
+/** fast-check generators of valid section documents (valid by the schema; the geometry need not make sense). */
+
+import fc from 'fast-check';
+import type { Edge, Island, Outline, PortDocument, Section, Variant, Vertex } from '../../src/document/types.ts';
+import { MAX_COORDINATE, MAX_FILLET_RADIUS, MAX_NAME_LENGTH } from '../../src/document/limits.ts';
+
+/** Plain objects, as a loaded file gives (fc.record may otherwise build null-prototype ones). */
+const PLAIN = { noNullPrototype: true } as const;
+
+const coordinate = fc.double({ min: -MAX_COORDINATE, max: MAX_COORDINATE, noNaN: true });
+export const pointArb = fc.tuple(coordinate, coordinate);
+
+/** A one-line, non-blank label of 1..max UTF-16 units, from any Unicode text. */
+export function labelArb(max = MAX_NAME_LENGTH): fc.Arbitrary<string> {
+  const units = ['grapheme', 'grapheme-ascii', 'binary'] as const;
+  return fc
+    .oneof(...units.map((unit) => fc.string({ unit, minLength: 1, maxLength: max })))
+    .filter((s) => s.length <= max && s.trim().length > 0 && !/[\u0000-\u001f\u007f]/.test(s));
+}
+
+const vertexArb: fc.Arbitrary<Vertex> = fc.record(
+  { at: pointArb, filletRadius: fc.double({ min: 0, max: MAX_FILLET_RADIUS, noNaN: true }) },
+  { requiredKeys: ['at'], noNullPrototype: true },
+);
+
+const roleArb = fc.constantFrom('wall', 'inlet', 'outlet') as fc.Arbitrary<Edge['role']>;
+
+function edgeArb(role: fc.Arbitrary<Edge['role']>): fc.Arbitrary<Edge> {
+  const base = { role, wallName: labelArb() };
+  return fc.oneof(
+    fc.record({ kind: fc.constant('line' as const), ...base }, { requiredKeys: ['kind', 'role'], noNullPrototype: true }),
+    fc.record({ kind: fc.constant('arc' as const), ...base, through: pointArb }, { requiredKeys: ['kind', 'role', 'through'], noNullPrototype: true }),
+    fc.record(
+      { kind: fc.constant('curve' as const), ...base, via: fc.array(pointArb, { maxLength: 4 }) },
+      { requiredKeys: ['kind', 'role', 'via'], noNullPrototype: true },
+    ),
+  );
+}
+
+function outlineArb(role: fc.Arbitrary<Edge['role']>): fc.Arbitrary<Outline> {
+  return fc.integer({ min: 3, max: 7 }).chain((n) =>
+    fc.record({
+      vertices: fc.array(vertexArb, { minLength: n, maxLength: n }),
+      edges: fc.array(edgeArb(role), { minLength: n, maxLength: n }),
+    }, PLAIN),
+  );
+}
+
+const islandArb: fc.Arbitrary<Island> = fc.record({ name: labelArb(), outline: outlineArb(fc.constant('wall')) }, PLAIN);
+const sectionArb: fc.Arbitrary<Section> = fc.record({ outline: outlineArb(roleArb), islands: fc.array(islandArb, { maxLength: 2 }) }, PLAIN);
+const variantArb: fc.Arbitrary<Variant> = fc.record(
+  { name: labelArb(), note: fc.string({ maxLength: 200 }), section: sectionArb },
+  { requiredKeys: ['name', 'section'], noNullPrototype: true },
+);
+
+/** A valid current-version document with 1..3 variants. */
+export const documentArb: fc.Arbitrary<PortDocument> = fc
+  .uniqueArray(variantArb, { minLength: 1, maxLength: 3, selector: (v) => v.name })
+  .chain((variants) =>
+    fc.record({
+      format: fc.constant('portwright-section' as const),
+      version: fc.constant(2 as const),
+      title: labelArb(120),
+      units: fc.constantFrom('mm', 'inch') as fc.Arbitrary<PortDocument['units']>,
+      variants: fc.constant(variants),
+      activeVariant: fc.constantFrom(...variants.map((v) => v.name)),
+      settings: fc.record({ gridDetail: fc.constantFrom('preview', 'standard', 'fine') as fc.Arbitrary<'preview'> }, PLAIN),
+    }, PLAIN),
+  );

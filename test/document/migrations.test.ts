@@ -1,0 +1,45 @@
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { DocumentError } from '../../src/document/errors.ts';
+import { loadDocument, readDocument, saveDocument } from '../../src/document/load.ts';
+import { MIGRATIONS } from '../../src/document/migrations.ts';
+import { FORMAT_VERSION } from '../../src/document/types.ts';
+
+const fixture = (name: string): string => readFileSync(new URL(`../fixtures/${name}`, import.meta.url), 'utf8');
+
+describe('format version 1', () => {
+  it('migrates to the expected version-2 document (golden file)', () => {
+    const { document, fileVersion } = readDocument(fixture('section-v1.json'));
+    expect(fileVersion).toBe(1);
+    expect(document).toStrictEqual(loadDocument(fixture('section-v1-as-v2.json')));
+  });
+
+  it('saves as version 2, byte for byte the golden file', () => {
+    expect(saveDocument(loadDocument(fixture('section-v1.json')))).toBe(fixture('section-v1-as-v2.json'));
+  });
+
+  it('names problems by their place in the version-1 file', () => {
+    const v1 = JSON.parse(fixture('section-v1.json'));
+    v1.section.outline.vertices[2].filletRadius = -1;
+    v1.variants = [];
+    try {
+      loadDocument(JSON.stringify(v1));
+      throw new Error('expected a DocumentError');
+    } catch (error) {
+      expect(error).toBeInstanceOf(DocumentError);
+      expect((error as Error).message).toContain('section.outline.vertices[2].filletRadius: must be a number >= 0');
+      expect((error as Error).message).toContain('variants: is not a field');
+    }
+  });
+
+  it('is refused when it has a version-2 field mixed in', () => {
+    const v1 = { ...JSON.parse(fixture('section-v1.json')), activeVariant: 'base' };
+    expect(() => loadDocument(JSON.stringify(v1))).toThrow('activeVariant: is not a field');
+  });
+});
+
+describe('the migration chain', () => {
+  it('has one step per older version, in order', () => {
+    expect(MIGRATIONS.map((m) => m.from)).toEqual(Array.from({ length: FORMAT_VERSION - 1 }, (_, i) => i + 1));
+  });
+});
