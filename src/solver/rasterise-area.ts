@@ -45,7 +45,10 @@ export function cellFractions(rings: readonly GridRing[], nx: number, ny: number
   return cover;
 }
 
-/** Clamps to 0..1 and removes rounding noise next to 0 and 1. */
+/**
+ * Clamps to 0..1 and removes rounding noise next to 0 and 1.
+ * (Hot loops in other modules should copy it to a local: some module loaders turn imported bindings into getters.)
+ */
 export function tidyFraction(value: number): number {
   if (value < FRACTION_NOISE) return 0;
   if (value > 1 - FRACTION_NOISE) return 1;

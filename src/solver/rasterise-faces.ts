@@ -40,15 +40,28 @@ export function faceFractions(rings: readonly GridRing[], nx: number, ny: number
     });
   }
   closeWallsOnLines(rings, addX, addY);
-  for (let j = 1; j < ny; j++) {
-    for (let k = 0; k < strideX; k++) openX[k + j * strideX] += openX[k + (j - 1) * strideX];
+  sumUpLines(openX, openY, nx, ny);
+  return { openX, openY };
+}
+
+/** Turns the stored differences into open fractions: running sums up each u-line and along each v-line, tidied. */
+function sumUpLines(openX: Float64Array, openY: Float64Array, nx: number, ny: number): void {
+  const tidy = tidyFraction;
+  const strideX = nx + 1;
+  const running = new Float64Array(strideX);
+  for (let j = 0; j < ny; j++) {
+    for (let k = 0, f = j * strideX; k < strideX; k++, f++) {
+      running[k] += openX[f];
+      openX[f] = tidy(running[k]);
+    }
   }
   for (let m = 0; m <= ny; m++) {
-    for (let i = 1; i < nx; i++) openY[i + m * nx] += openY[i - 1 + m * nx];
+    let along = 0;
+    for (let f = m * nx, end = f + nx; f < end; f++) {
+      along += openY[f];
+      openY[f] = tidy(along);
+    }
   }
-  for (let c = 0; c < openX.length; c++) openX[c] = tidyFraction(openX[c]);
-  for (let c = 0; c < openY.length; c++) openY[c] = tidyFraction(openY[c]);
-  return { openX, openY };
 }
 
 type SegmentVisitor = (u0: number, v0: number, u1: number, v1: number) => void;

@@ -150,7 +150,7 @@ class WallFitter {
       const s = (dx * tx + dy * ty) / h;
       const q = (dx * nx + dy * ny) / h;
       const taper = 1 - r2 / (FIT_RADIUS * FIT_RADIUS);
-      this.addRow(taper * taper * this.grid.cellFraction[c], [1, s, s * s - q * q, s * q], this.phi[c]);
+      this.addRow(taper * taper * this.grid.cellFraction[c], s, s * s - q * q, s * q, this.phi[c]);
       return true;
     });
     const unknowns = used >= 6 ? 4 : used >= 2 ? 2 : 0;
@@ -205,7 +205,9 @@ class WallFitter {
     return tail;
   }
 
-  private addRow(weight: number, basis: readonly number[], value: number): void {
+  /** Adds one weighted cell to the normal equations of the basis 1, s, s^2 - q^2, s q. */
+  private addRow(weight: number, b1: number, b2: number, b3: number, value: number): void {
+    const basis = [1, b1, b2, b3];
     for (let a = 0; a < 4; a++) {
       this.rhs[a] += weight * basis[a] * value;
       for (let b = 0; b < 4; b++) this.normal[4 * a + b] += weight * basis[a] * basis[b];
