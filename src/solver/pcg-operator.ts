@@ -1,0 +1,57 @@
+/** Applying a 5-point stencil to a padded grid vector (the solver's matrix-vector product). */
+import type { Stencil } from './assemble.ts';
+
+/**
+ * A padded grid vector: cell (i, j) at index i + j * nx + nx, with one zero row before and after,
+ * so the 5-point loops need no edge cases (edge faces have coefficient 0 and read the zero rows).
+ */
+export function paddedVector(nx: number, ny: number): Float64Array {
+  return new Float64Array(nx * (ny + 2));
+}
+
+/**
+ * out = A x on every cell, and returns x . out (the energy x^T A x).
+ * @param x padded vector (see paddedVector), read.
+ * @param out padded vector, written (padding rows untouched); must not alias x.
+ */
+export function applyStencil(s: Stencil, x: Float64Array, out: Float64Array): number {
+  const { nx, ny, diag, faceX, faceY } = s;
+  let energy = 0;
+  for (let j = 0; j < ny; j++) {
+    const rowK = j * nx;
+    const rowX = rowK + j;
+    for (let i = 0; i < nx; i++) {
+      const k = rowK + i;
+      const v = k + nx;
+      const xv = x[v];
+      const ax = diag[k] * xv
+        - faceX[rowX + i] * x[v - 1] - faceX[rowX + i + 1] * x[v + 1]
+        - faceY[k] * x[v - nx] - faceY[k + nx] * x[v + nx];
+      out[v] = ax;
+      energy += xv * ax;
+    }
+  }
+  return energy;
+}
+
+/**
+ * r = b - A x with x padded and b, r plain (i + j * nx); returns ||r||_2. r may alias b.
+ */
+export function residual(s: Stencil, x: Float64Array, b: Float64Array, r: Float64Array): number {
+  const { nx, ny, diag, faceX, faceY } = s;
+  let sum = 0;
+  for (let j = 0; j < ny; j++) {
+    const rowK = j * nx;
+    const rowX = rowK + j;
+    for (let i = 0; i < nx; i++) {
+      const k = rowK + i;
+      const v = k + nx;
+      const rk = b[k] - (diag[k] * x[v]
+        - faceX[rowX + i] * x[v - 1] - faceX[rowX + i + 1] * x[v + 1]
+        - faceY[k] * x[v - nx] - faceY[k + nx] * x[v + nx]);
+      r[k] = rk;
+      sum += rk * rk;
+    }
+  }
+  return Math.sqrt(sum);
+}
