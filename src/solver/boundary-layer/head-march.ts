@@ -7,15 +7,16 @@ import {
   ludwiegTillmannCf,
 } from './head-closure.ts';
 import { stallCrossing, type WallFlow } from './wall-flow.ts';
+import { firstSampleAtOrAfter } from './wall-samples.ts';
 
-/** Re_theta below which Ludwieg–Tillmann is not trusted; cf and the starting theta use it as a floor (numerical guard). */
+/** Re_theta below which Ludwieg–Tillmann is not trusted: a floor for cf and the starting theta (numerical guard). */
 export const MIN_TURBULENT_RE_THETA = 100;
-/** Largest step, in momentum thicknesses: keeps RK4 stable where H1 relaxes fastest (near separation, rate ~0.04/theta). */
+/** Largest step in momentum thicknesses: keeps RK4 stable where H1 relaxes fastest (near separation, ~0.04/theta). */
 const STEP_PER_THETA = 10;
 /** Largest step as a share of U / |dU/ds|. */
 const STEP_PER_SPEED_SCALE = 0.1;
-/** Smallest step as a share of the wall length, so a wall never costs more than ~1e5 steps. */
-const MIN_STEP_SHARE = 1e-5;
+/** Smallest step as a share of the wall length, so a wall never costs more than ~1e4 steps. */
+const MIN_STEP_SHARE = 1e-4;
 
 export interface TurbulentStart {
   /** arc length where the turbulent layer starts, m (at or after the first sample) */
@@ -35,10 +36,22 @@ export interface TurbulentRun {
   readonly lastIndex: number;
 }
 
-/** Momentum thickness theta (m) and Y = U theta H1 (m^2/s): the two quantities Head's method integrates. */
+/**
+ * What Head's method integrates: z = ln(theta / 1 m) and Y = U theta H1 (m^2/s). Marching ln(theta) keeps theta
+ * positive even where a step must be longer than RK4's stable length (within micrometres of a stagnation point),
+ * because the stiff pressure-gradient term -(H + 2) dU/ds / U does not depend on theta in this form.
+ */
 interface State {
-  theta: number;
+  z: number;
   y: number;
+}
+
+/** theta is kept between these, m, so exp(z) never underflows or overflows (only reached at absurd inputs). */
+const LN_THETA_MIN = Math.log(1e-15);
+const LN_THETA_MAX = Math.log(1e6);
+
+function thetaOf(state: State): number {
+  return Math.exp(Math.min(Math.max(state.z, LN_THETA_MIN), LN_THETA_MAX));
 }
 
 /**
@@ -59,10 +72,10 @@ export function marchTurbulent(
   let s = start.sM;
   let i = firstSampleAtOrAfter(sM, s);
   const k0 = Math.max(i - 1, 0);
-  let state: State = { theta: Math.max(start.thetaM, thetaFloor), y: 0 };
-  state.y = speedAt(wall, k0, s) * state.theta * headH1(start.shapeFactor);
+  const theta0 = Math.max(start.thetaM, thetaFloor);
+  let state: State = { z: Math.log(theta0), y: speedAt(wall, k0, s) * theta0 * headH1(start.shapeFactor) };
   if (sM[i] === s) {
-    thetaM[i] = state.theta;
+    thetaM[i] = theta0;
     shapeFactor[i] = start.shapeFactor;
     i++;
   }
@@ -74,17 +87,11 @@ export function marchTurbulent(
     state = leg.state;
     s = target;
     const h = shapeFactorOf(wall, i - 1, s, state);
-    if (stall !== null) return { kind: 'stall', sM: s, thetaM: state.theta, shapeFactor: h, lastIndex: i - 1 };
-    thetaM[i] = state.theta;
+    if (stall !== null) return { kind: 'stall', sM: s, thetaM: thetaOf(state), shapeFactor: h, lastIndex: i - 1 };
+    thetaM[i] = thetaOf(state);
     shapeFactor[i] = h;
   }
   return { kind: 'wall-end', sM: sM[n - 1], thetaM: thetaM[n - 1], shapeFactor: shapeFactor[n - 1], lastIndex: n - 1 };
-}
-
-function firstSampleAtOrAfter(sM: Float64Array, s: number): number {
-  let i = 0;
-  while (i < sM.length - 1 && sM[i] < s) i++;
-  return i;
 }
 
 interface Leg {
@@ -109,13 +116,14 @@ function integrateLeg(
     const u = speedAt(wall, k, s);
     const g = Math.abs(gradientAt(wall, k, s));
     const scale = g > 0 ? (STEP_PER_SPEED_SCALE * u) / g : Infinity;
-    const step = Math.min(target - s, Math.max(Math.min(STEP_PER_THETA * state.theta, scale), minStep));
+    const step = Math.min(target - s, Math.max(Math.min(STEP_PER_THETA * thetaOf(state), scale), minStep));
     const next = rk4Step(wall, k, s, step, state);
     const sNext = step === target - s ? target : s + step;
-    const h1 = Number.isFinite(next.theta) && Number.isFinite(next.y) ? shapeFactorOf(wall, k, sNext, next) : Infinity;
+    const finite = Number.isFinite(next.z) && Number.isFinite(next.y);
+    const h1 = finite ? shapeFactorOf(wall, k, sNext, next) : Infinity;
     if (h1 >= limit) {
       const t = Number.isFinite(h1) && h1 > h0 ? Math.min(Math.max((limit - h0) / (h1 - h0), 0), 1) : 0;
-      const theta = Number.isFinite(next.theta) ? state.theta + t * (next.theta - state.theta) : state.theta;
+      const theta = finite ? thetaOf(state) + t * (thetaOf(next) - thetaOf(state)) : thetaOf(state);
       return { state, detachedAt: { sM: s + t * (sNext - s), thetaM: theta, shapeFactor: limit } };
     }
     state = next;
@@ -127,34 +135,35 @@ function integrateLeg(
 
 function rk4Step(wall: WallFlow, k: number, s: number, h: number, y0: State): State {
   const a = rates(wall, k, s, y0);
-  const b = rates(wall, k, s + h / 2, { theta: y0.theta + (h / 2) * a.theta, y: y0.y + (h / 2) * a.y });
-  const c = rates(wall, k, s + h / 2, { theta: y0.theta + (h / 2) * b.theta, y: y0.y + (h / 2) * b.y });
-  const d = rates(wall, k, s + h, { theta: y0.theta + h * c.theta, y: y0.y + h * c.y });
+  const b = rates(wall, k, s + h / 2, { z: y0.z + (h / 2) * a.z, y: y0.y + (h / 2) * a.y });
+  const c = rates(wall, k, s + h / 2, { z: y0.z + (h / 2) * b.z, y: y0.y + (h / 2) * b.y });
+  const d = rates(wall, k, s + h, { z: y0.z + h * c.z, y: y0.y + h * c.y });
+  const z = y0.z + (h / 6) * (a.z + 2 * b.z + 2 * c.z + d.z);
   return {
-    theta: y0.theta + (h / 6) * (a.theta + 2 * b.theta + 2 * c.theta + d.theta),
+    z: Math.min(Math.max(z, LN_THETA_MIN), LN_THETA_MAX),
     y: y0.y + (h / 6) * (a.y + 2 * b.y + 2 * c.y + d.y),
   };
 }
 
 /**
- * Head's equations: d theta/ds = cf/2 - (H + 2) (theta/U) dU/ds and dY/ds = U F(H1), Y = U theta H1;
- * cf from Ludwieg–Tillmann with Re_theta floored at MIN_TURBULENT_RE_THETA.
+ * Head's equations: d theta/ds = cf/2 - (H + 2) (theta/U) dU/ds, written for ln(theta), and dY/ds = U F(H1)
+ * with Y = U theta H1; cf from Ludwieg–Tillmann with Re_theta floored at MIN_TURBULENT_RE_THETA.
  */
 function rates(wall: WallFlow, k: number, s: number, state: State): State {
   const u = speedAt(wall, k, s);
-  const theta = Math.max(state.theta, Number.MIN_VALUE);
+  const theta = thetaOf(state);
   const h1 = state.y / (u * theta);
   const h = headShapeFactor(h1);
   const reTheta = Math.max((u * theta) / wall.nuM2s, MIN_TURBULENT_RE_THETA);
   const cf = ludwiegTillmannCf(h, reTheta);
   return {
-    theta: cf / 2 - ((h + 2) * theta * gradientAt(wall, k, s)) / u,
+    z: cf / (2 * theta) - ((h + 2) * gradientAt(wall, k, s)) / u,
     y: u * headEntrainment(h1),
   };
 }
 
 function shapeFactorOf(wall: WallFlow, k: number, s: number, state: State): number {
-  return headShapeFactor(state.y / (speedAt(wall, k, s) * Math.max(state.theta, Number.MIN_VALUE)));
+  return headShapeFactor(state.y / (speedAt(wall, k, s) * thetaOf(state)));
 }
 
 /** Edge speed at s in segment k (linear), raised to the floor, m/s. */

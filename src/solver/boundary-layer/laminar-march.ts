@@ -87,7 +87,13 @@ function station(wall: WallFlow, i: number, numerator: number, runM: number, all
 }
 
 /** The earliest of separation, stall and transition inside the segment ending at sample i, or null. */
-function firstEvent(wall: WallFlow, i: number, prev: Station, here: Station, separationLambda: number): LaminarEnd | null {
+function firstEvent(
+  wall: WallFlow,
+  i: number,
+  prev: Station,
+  here: Station,
+  separationLambda: number,
+): LaminarEnd | null {
   const s0 = i === 0 ? wall.sM[0] : wall.sM[i - 1];
   const span = i === 0 ? 0 : wall.sM[i] - s0;
   const candidates: { kind: LaminarEnd['kind']; sM: number }[] = [];

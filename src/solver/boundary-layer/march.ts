@@ -1,14 +1,13 @@
-/** The march along one wall: laminar (Thwaites, Michel) and turbulent (Head, Stratford) to find where flow leaves it. */
+/** The march along one wall: laminar (Thwaites, Michel), turbulent (Head, Stratford): where does flow leave it? */
 
 import { BoundaryLayerInputError } from './errors.ts';
-import { TURBULENT_START_SHAPE_FACTOR, turbulentEquivalentRun, turbulentFlatPlateTheta } from './head-closure.ts';
-import { marchTurbulent } from './head-march.ts';
-import { marchLaminar } from './laminar-march.ts';
-import { stratfordSeparation } from './stratford.ts';
-import { thwaitesFlatPlateTheta, thwaitesShapeFactor } from './thwaites.ts';
-import { checkSetting, checkWallSamples } from './wall-samples.ts';
-import { STALL_SHARE, prepareWallFlow, type WallFlow } from './wall-flow.ts';
+import { TURBULENT_START_SHAPE_FACTOR, turbulentEquivalentRun } from './head-closure.ts';
+import { runLayer, type LayerSettings } from './layer-runs.ts';
 import { offWallStretch } from './off-wall.ts';
+import { stratfordSeparation } from './stratford.ts';
+import { thwaitesShapeFactor } from './thwaites.ts';
+import { STILL_AIR_MS, prepareWallFlow, type WallFlow } from './wall-flow.ts';
+import { checkSetting, checkWallSamples, firstSampleAtOrAfter } from './wall-samples.ts';
 
 /** Detachment limit on Head's H; separation is commonly taken between 2.2 and 2.4. */
 export const DEFAULT_SHAPE_FACTOR_LIMIT = 2.4;
@@ -64,106 +63,52 @@ export interface WallMarch {
 /**
  * Marches the boundary layer along one wall. Never returns NaN for physical input; throws BoundaryLayerInputError
  * when the arrays cannot describe a wall (lengths differ, arc length not increasing, negative or non-numeric speed)
- * or a setting is out of range.
+ * or a setting is out of range. A wall whose top speed is below 1 micrometre per second is still air: no layer,
+ * theta = initialThetaM (or 0), H = the starting value, no detachment.
+ * Example: a flat wall at 30 m/s over 1 m (nu 1.5e-5) stays attached with theta = 1.96 mm and H = 1.39 at the end.
  */
 export function marchWall(input: WallMarchInput): WallMarch {
   const settings = readSettings(input);
   const { sM, speedMs, nuM2s } = input;
   checkWallSamples(sM, speedMs);
   const n = sM.length;
-  const theta = new Float64Array(n);
-  const shapeFactor = new Float64Array(n);
+  const out = { theta: new Float64Array(n), shapeFactor: new Float64Array(n) };
   const offWall = new Uint8Array(n);
-  const quiet = { detachment: null, transitionSM: null, stratford: null, theta, shapeFactor, offWall };
+  const quiet = { detachment: null, transitionSM: null, stratford: null, ...out, offWall };
   if (n === 0) return quiet;
   const wall = prepareWallFlow(sM, speedMs, nuM2s);
-  if (!(wall.topSpeedMs > 0)) {
-    theta.fill(input.initialThetaM ?? 0);
-    shapeFactor.fill(settings.laminar ? thwaitesShapeFactor(0) : TURBULENT_START_SHAPE_FACTOR);
+  if (!(wall.topSpeedMs >= STILL_AIR_MS)) {
+    out.theta.fill(input.initialThetaM ?? 0);
+    out.shapeFactor.fill(settings.laminar ? thwaitesShapeFactor(0) : TURBULENT_START_SHAPE_FACTOR);
     return quiet;
   }
-  const layer = settings.laminar ? laminarThenTurbulent(wall, input, settings, theta, shapeFactor) : turbulentOnly(wall, input, settings, theta, shapeFactor);
+  const layer = runLayer(wall, settings, out);
   let detachment: WallDetachment | null = null;
   if (layer.detached) {
-    const { sM: at, method, shapeFactor: h } = layer.detached;
-    const index = firstAtOrAfter(sM, at);
-    detachment = { sM: at, index, method, shapeFactor: h };
-    theta.fill(layer.detached.thetaM, layer.lastIndex + 1);
-    shapeFactor.fill(layer.detached.shapeFactor, layer.lastIndex + 1);
-    offWallStretch(sM, speedMs, detachment.sM, index, offWall);
+    const { sM: at, method, shapeFactor, thetaM } = layer.detached;
+    detachment = { sM: at, index: firstSampleAtOrAfter(sM, at), method, shapeFactor };
+    out.theta.fill(thetaM, layer.lastIndex + 1);
+    out.shapeFactor.fill(shapeFactor, layer.lastIndex + 1);
+    offWallStretch(sM, speedMs, at, detachment.index, offWall);
   }
-  const stratford = layer.turbulentFrom === null ? null : stratfordOpinion(wall, theta, layer.turbulentFrom);
-  return { detachment, transitionSM: layer.transitionSM, stratford, theta, shapeFactor, offWall };
+  const stratford = layer.turbulentFrom === null ? null : stratfordOpinion(wall, out.theta, layer.turbulentFrom);
+  return { detachment, transitionSM: layer.transitionSM, stratford, ...out, offWall };
 }
 
-interface Settings {
-  readonly laminar: boolean;
-  readonly shapeFactorLimit: number;
-  readonly initialRunM: number;
-}
-
-function readSettings(input: WallMarchInput): Settings {
+function readSettings(input: WallMarchInput): LayerSettings {
   checkSetting('air kinematic viscosity (m²/s)', input.nuM2s, 1e-9, 1);
   const shapeFactorLimit = input.shapeFactorLimit ?? DEFAULT_SHAPE_FACTOR_LIMIT;
   checkSetting('detachment shape factor', shapeFactorLimit, 1.5, 4);
   const initialRunM = input.initialRunM ?? DEFAULT_INITIAL_RUN_M;
   checkSetting('run ahead of the wall (m)', initialRunM, 0, 100);
-  if (input.initialThetaM !== undefined) checkSetting('starting momentum thickness (m)', input.initialThetaM, 0, 1);
+  const { initialThetaM } = input;
+  if (initialThetaM !== undefined) checkSetting('starting momentum thickness (m)', initialThetaM, 0, 1);
   const start = input.start ?? 'turbulent';
   if (start !== 'turbulent' && start !== 'laminar') {
-    throw new BoundaryLayerInputError('bad-setting', `The layer can start 'turbulent' or 'laminar', not '${String(start)}'.`);
+    const message = `The layer starts 'turbulent' or 'laminar', not '${String(start)}'.`;
+    throw new BoundaryLayerInputError('bad-setting', message);
   }
-  return { laminar: start === 'laminar', shapeFactorLimit, initialRunM };
-}
-
-/** How the layer went: where it detached (if it did), the last sample written by a march, where it turned turbulent. */
-interface LayerOutcome {
-  readonly detached: { sM: number; thetaM: number; shapeFactor: number; method: 'thwaites' | 'head' } | null;
-  readonly lastIndex: number;
-  readonly transitionSM: number | null;
-  /** first sample on the turbulent stretch, or null when there is none */
-  readonly turbulentFrom: number | null;
-}
-
-function turbulentOnly(wall: WallFlow, input: WallMarchInput, settings: Settings, theta: Float64Array, shape: Float64Array): LayerOutcome {
-  const u0 = Math.max(wall.speedMs[0], STALL_SHARE * wall.topSpeedMs);
-  const theta0 = input.initialThetaM ?? turbulentFlatPlateTheta(settings.initialRunM, u0, wall.nuM2s);
-  const start = { sM: wall.sM[0], thetaM: theta0, shapeFactor: TURBULENT_START_SHAPE_FACTOR };
-  return headFrom(wall, start, settings, theta, shape, null);
-}
-
-/**
- * Laminar from the first sample (Thwaites); at Michel transition theta carries over and H is reset to the turbulent
- * flat-plate value 1.4 (common practice), then Head. A wall that starts at a stagnation point (speed below 1% of its
- * top speed) counts Michel's Re_x from there, not from the run ahead.
- */
-function laminarThenTurbulent(wall: WallFlow, input: WallMarchInput, settings: Settings, theta: Float64Array, shape: Float64Array): LayerOutcome {
-  const u0 = wall.speedMs[0];
-  const stagnationStart = u0 < STALL_SHARE * wall.topSpeedMs;
-  const runM = stagnationStart ? 0 : settings.initialRunM;
-  const theta0 = input.initialThetaM ?? thwaitesFlatPlateTheta(settings.initialRunM, u0, wall.nuM2s);
-  const run = marchLaminar(wall, { thetaM: theta0, runM }, theta, shape);
-  const { end } = run;
-  if (end.kind === 'wall-end') return { detached: null, lastIndex: run.lastIndex, transitionSM: null, turbulentFrom: null };
-  if (end.kind !== 'transition') {
-    const detached = { sM: end.sM, thetaM: end.thetaM, shapeFactor: end.shapeFactor, method: 'thwaites' as const };
-    return { detached, lastIndex: run.lastIndex, transitionSM: null, turbulentFrom: null };
-  }
-  const start = { sM: end.sM, thetaM: end.thetaM, shapeFactor: TURBULENT_START_SHAPE_FACTOR };
-  return headFrom(wall, start, settings, theta, shape, end.sM);
-}
-
-function headFrom(
-  wall: WallFlow,
-  start: { sM: number; thetaM: number; shapeFactor: number },
-  settings: Settings,
-  theta: Float64Array,
-  shape: Float64Array,
-  transitionSM: number | null,
-): LayerOutcome {
-  const run = marchTurbulent(wall, start, theta, shape, settings.shapeFactorLimit);
-  const detached = run.kind === 'wall-end' ? null : { sM: run.sM, thetaM: run.thetaM, shapeFactor: run.shapeFactor, method: 'head' as const };
-  return { detached, lastIndex: run.lastIndex, transitionSM, turbulentFrom: firstAtOrAfter(wall.sM, start.sM) };
+  return { laminar: start === 'laminar', shapeFactorLimit, initialRunM, initialThetaM };
 }
 
 /** Stratford on the turbulent stretch; the equivalent run at each sample comes from its marched theta. */
@@ -173,11 +118,4 @@ function stratfordOpinion(wall: WallFlow, theta: Float64Array, from: number): { 
     run[i] = turbulentEquivalentRun(theta[i], Math.max(wall.speedMs[i], wall.floorMs), wall.nuM2s);
   }
   return stratfordSeparation(wall.sM, wall.speedMs, wall.nuM2s, run, from);
-}
-
-/** First sample index with sM[i] >= s (the last sample when s is past the end). */
-function firstAtOrAfter(sM: Float64Array, s: number): number {
-  let i = 0;
-  while (i < sM.length - 1 && sM[i] < s) i++;
-  return i;
 }

@@ -56,6 +56,10 @@ export function stratfordSeparation(
     const curvatureNegative = -ddq[i] * x < -CURVATURE_TOLERANCE * dCp * q[peak];
     const reynolds = (speedMs[peak] * x) / nuM2s;
     const margin = cp * Math.sqrt(x * dCp) - stratfordLimit(reynolds, curvatureNegative);
+    if (!Number.isFinite(margin)) {
+      prevMargin = -Infinity;
+      continue;
+    }
     if (margin >= 0) {
       const t = Number.isFinite(prevMargin) ? prevMargin / (prevMargin - margin) : 1;
       return { sM: sM[i - 1] + t * (sM[i] - sM[i - 1]) };

@@ -70,7 +70,8 @@ export function thwaitesThetaSq(
   floorMs: number,
 ): number {
   if (numerator <= 0 && speedMs <= floorMs) {
-    return gradientPerS > 0 ? (STAGNATION_LAMBDA * nuM2s) / gradientPerS : 0;
+    const hiemenz = gradientPerS > 0 ? (STAGNATION_LAMBDA * nuM2s) / gradientPerS : 0;
+    return Number.isFinite(hiemenz) ? hiemenz : 0; // a vanishing gradient forms no layer yet
   }
   const u = Math.max(speedMs, floorMs);
   return numerator / u ** THWAITES_B;

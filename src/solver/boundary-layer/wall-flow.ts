@@ -4,6 +4,8 @@ import { speedGradient } from './wall-samples.ts';
 
 /** Below this share of the wall's top speed, 1/U terms use the share instead (keeps them finite). */
 const SPEED_FLOOR_SHARE = 1e-3;
+/** A wall whose top speed is below this, m/s, is in still air: no layer is marched. */
+export const STILL_AIR_MS = 1e-6;
 /** Edge speed falling to this share of the highest speed upstream means the flow has stalled at the wall. */
 export const STALL_SHARE = 0.01;
 

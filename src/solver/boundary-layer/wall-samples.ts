@@ -22,7 +22,8 @@ export function checkWallSamples(sM: Float64Array, speedMs: Float64Array): void 
     if (i > 0 && !(sM[i] > sM[i - 1])) {
       throw new BoundaryLayerInputError(
         'arc-not-increasing',
-        `Wall positions must run forward along the wall: position ${i} (${sM[i]} m) is not past position ${i - 1} (${sM[i - 1]} m).`,
+        `Wall positions must run forward along the wall: position ${i} (${sM[i]} m) ` +
+          `is not past position ${i - 1} (${sM[i - 1]} m).`,
       );
     }
     if (!Number.isFinite(speedMs[i]) || speedMs[i] < 0) {
@@ -73,22 +74,15 @@ function quadraticSlope(a: number, b: number, c: number, fa: number, fb: number,
   );
 }
 
-/** Index k with sM[k] <= s < sM[k + 1] (clamped to the first and last segment). Binary search. */
-export function segmentAt(sM: Float64Array, s: number): number {
+/** First sample index with sM[i] >= s (the last sample when s is past the end). */
+export function firstSampleAtOrAfter(sM: Float64Array, s: number): number {
   let lo = 0;
   let hi = sM.length - 1;
-  if (hi < 1) return 0;
-  while (hi - lo > 1) {
+  if (hi < 0 || sM[hi] < s) return Math.max(hi, 0);
+  while (lo < hi) {
     const mid = (lo + hi) >> 1;
-    if (sM[mid] <= s) lo = mid;
+    if (sM[mid] < s) lo = mid + 1;
     else hi = mid;
   }
   return lo;
-}
-
-/** Linear interpolation of `values` at arc length s inside segment k. */
-export function lerpAt(sM: Float64Array, values: Float64Array, k: number, s: number): number {
-  if (sM.length < 2) return values[0];
-  const t = (s - sM[k]) / (sM[k + 1] - sM[k]);
-  return values[k] + t * (values[k + 1] - values[k]);
 }

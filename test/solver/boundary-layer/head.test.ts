@@ -107,7 +107,9 @@ describe("Head's method along a wall", () => {
     expect(march.offWall.slice(d?.index).every((v) => v === 1)).toBe(true);
     expect(march.offWall.slice(0, d?.index).every((v) => v === 0)).toBe(true);
     // H climbs through the deceleration
-    for (let i = 1; i <= (d?.index ?? 0) - 1; i++) expect(march.shapeFactor[i]).toBeGreaterThanOrEqual(march.shapeFactor[i - 1] - 1e-12);
+    for (let i = 1; i < (d?.index ?? 0); i++) {
+      expect(march.shapeFactor[i]).toBeGreaterThanOrEqual(march.shapeFactor[i - 1] - 1e-12);
+    }
   });
 
   it('detaches earlier with a lower shape-factor limit', () => {

@@ -21,6 +21,7 @@ export function assertRelative(actual: number, expected: number, share: number):
 /** Root of f on [lo, hi] by bisection (f(lo) and f(hi) of opposite sign). */
 export function bisect(f: (x: number) => number, lo: number, hi: number): number {
   const flo = f(lo);
+  if (Math.sign(flo) === Math.sign(f(hi))) throw new Error(`no sign change on [${lo}, ${hi}]`);
   for (let k = 0; k < 200; k++) {
     const mid = 0.5 * (lo + hi);
     if (Math.sign(f(mid)) === Math.sign(flo)) lo = mid;

@@ -21,13 +21,14 @@ describe("Michel's transition criterion (Michel 1951; Cebeci & Smith form 1974)"
 
   it('turns a laminar flat-plate layer turbulent where Thwaites meets Michel', () => {
     // [derived] flat plate from a sharp leading edge: Re_theta = sqrt(0.45 Re_x) (Thwaites) meets Michel at
-    // Re_x = 1.26e6, i.e. 0.63 m at 30 m/s.
+    // Re_x = 1.666e6, i.e. 0.833 m at 30 m/s.
     const u = 30;
     const reXtr = bisect((r) => Math.sqrt(0.45 * r) - michelTransitionReTheta(r), 1e5, 1e8);
     const sM = linspace(1001, 0, 1);
-    const march = marchWall({ sM, speedMs: sM.map(() => u), nuM2s: NU, start: 'laminar', initialThetaM: 0, initialRunM: 0 });
+    const speedMs = sM.map(() => u);
+    const march = marchWall({ sM, speedMs, nuM2s: NU, start: 'laminar', initialThetaM: 0, initialRunM: 0 });
     expect(march.transitionSM).not.toBeNull();
-    assertRelative(march.transitionSM ?? 0, (reXtr * NU) / u, 1e-3); // measured 0.6310 m
+    assertRelative(march.transitionSM ?? 0, (reXtr * NU) / u, 1e-3); // measured 0.8328 m
     expect(march.detachment).toBeNull();
     // after transition theta carries over and H drops from the laminar 2.61 to the turbulent start value 1.4
     const i = sM.findIndex((s) => s >= (march.transitionSM ?? 0));

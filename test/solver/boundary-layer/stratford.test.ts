@@ -36,16 +36,21 @@ describe("Stratford's criterion (Stratford 1959, J. Fluid Mech. 5)", () => {
   });
 
   it('uses 0.35 on a pressure rise that eases off (d2p/dx2 < 0)', () => {
-    // [derived] Cp = 0.8 (1 - exp(-(x - x0)/x0)): Cp'' < 0 throughout, so separation where Cp sqrt(x Cp') = 0.35 (R/1e6)^0.1.
+    // [derived] Cp = 0.8 (1 - exp(-(x - x0)/(0.5 x0))): Cp'' < 0 throughout, so separation where
+    // Cp sqrt(x Cp') = 0.35 (R/1e6)^0.1, at x/x0 = 1.2639; the 0.39 form would give 1.3231.
     const x0 = 0.1;
     const reX0 = 1e6;
-    const cp = (x: number) => 0.8 * (1 - Math.exp(-(x - x0) / x0));
-    const dcp = (x: number) => (0.8 / x0) * Math.exp(-(x - x0) / x0);
+    const cp = (x: number) => 0.8 * (1 - Math.exp(-(x - x0) / (0.5 * x0)));
+    const dcp = (x: number) => (0.8 / (0.5 * x0)) * Math.exp(-(x - x0) / (0.5 * x0));
     const rise = plateThenRise(x0, cp, 4001, reX0);
     const found = stratfordSeparation(rise.sM, rise.speedMs, rise.nuM2s, rise.run);
-    const expected = bisect((x) => cp(x) * Math.sqrt(x * dcp(x)) - 0.35 * ((reX0 * x) / x0 / 1e6) ** 0.1, x0 * 1.0001, 1.9 * x0);
+    const criterion = (limit: number) => (x: number) =>
+      cp(x) * Math.sqrt(x * dcp(x)) - limit * ((reX0 * x) / x0 / 1e6) ** 0.1;
+    const expected = bisect(criterion(0.35), x0 * 1.0001, 1.9 * x0);
+    const withUpperLimit = bisect(criterion(0.39), x0 * 1.0001, 1.9 * x0);
     expect(cp(expected)).toBeLessThan(4 / 7);
-    assertRelative(found?.sM ?? NaN, expected, 5e-4); // measured x/x0 = 1.2907
+    assertRelative(found?.sM ?? NaN, expected, 5e-4);
+    expect(withUpperLimit / x0 - (found?.sM ?? NaN) / x0).toBeGreaterThan(0.05);
   });
 
   it('gives no verdict without a pressure rise', () => {

@@ -17,7 +17,8 @@ const NU = 1.5e-5;
 function laminarOnly(sM: Float64Array, speedMs: Float64Array, separationLambda?: number) {
   const theta = new Float64Array(sM.length);
   const shape = new Float64Array(sM.length);
-  const run = marchLaminar(prepareWallFlow(sM, speedMs, NU), { thetaM: 0, runM: 0 }, theta, shape, separationLambda, false);
+  const wall = prepareWallFlow(sM, speedMs, NU);
+  const run = marchLaminar(wall, { thetaM: 0, runM: 0 }, theta, shape, separationLambda, false);
   return { run, theta, shape };
 }
 
@@ -66,7 +67,8 @@ describe("Thwaites' method against classical solutions", () => {
   });
 
   it("Howarth's retarded flow U = U0 (1 - x/L) separates at x/L = 0.1231 with lambda_sep = -0.09", () => {
-    // [derived] (1 - x/L)^-6 = 1 + 0.09/0.075 gives x/L = 0.12314. Exact 0.1199 [pub: Howarth 1938; 4th digit from memory].
+    // [derived] (1 - x/L)^-6 = 1 + 0.09/0.075 gives x/L = 0.12314.
+    // Exact 0.1199 [pub: Howarth, Proc. R. Soc. A 164, 1938; 4th digit from memory].
     const L = 0.5;
     const sM = linspace(4001, 0, 0.2 * L);
     const speeds = sM.map((s) => 12 * (1 - s / L));
