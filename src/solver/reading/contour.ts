@@ -2,42 +2,62 @@
 import type { CutGrid } from '../types.ts';
 
 /**
- * The lines where `values` equals `level`, traced over the squares between four cell centres that all hold a number.
- * Each crossing of a square's side is placed by linear interpolation; the two ambiguous saddle cases are settled by
- * the mean of the four corners. Segments sharing a side are joined, so each result is one unbroken polyline
- * (closed loops repeat their first point at the end).
+ * The lines where `values` equals each of `levels`, traced over the squares between four cell centres that all hold
+ * a number. Each crossing of a square's side is placed by linear interpolation; the two ambiguous saddle cases are
+ * settled by the mean of the four corners. Segments sharing a side are joined, so each result is one unbroken
+ * polyline (closed loops repeat their first point at the end). One pass over the grid serves every level.
  * @param values row-major i + j * nx, NaN where there is no value
- * @returns polylines, x0, y0, x1, y1, ... in document units
+ * @returns per level, polylines x0, y0, x1, y1, ... in document units
  */
-export function levelLines(grid: CutGrid, values: Float64Array, level: number): Float64Array[] {
+export function levelLines(grid: CutGrid, values: Float64Array, levels: readonly number[]): Float64Array[][] {
   const { nx, ny } = grid;
-  const ends: number[] = [];
+  const order = levels.map((_, k) => k).sort((a, b) => levels[a] - levels[b]);
+  const sorted = order.map((k) => levels[k]);
+  const ends: number[][] = levels.map(() => []);
   for (let j = 0; j < ny - 1; j++) {
-    for (let i = 0; i < nx - 1; i++) squareSegments(values, nx, i, j, level, ends);
+    for (let i = 0; i < nx - 1; i++) {
+      const c = i + j * nx;
+      const a = values[c], b = values[c + 1], d = values[c + nx + 1], e = values[c + nx];
+      if (!(Number.isFinite(a) && Number.isFinite(b) && Number.isFinite(d) && Number.isFinite(e))) continue;
+      const lo = Math.min(a, b, d, e), hi = Math.max(a, b, d, e);
+      // a level crosses the square when some corner is above it and some is not: lo <= level < hi
+      for (let q = firstAtLeast(sorted, lo); q < sorted.length && sorted[q] < hi; q++) {
+        squareSegments(values, nx, c, sorted[q], ends[order[q]]);
+      }
+    }
   }
-  return joinSegments(ends, (side) => sidePoint(grid, values, side, level));
+  return levels.map((level, k) => joinSegments(ends[k], (side) => sidePoint(grid, values, side, level)));
+}
+
+/** First index q of an ascending array with sorted[q] >= value. */
+function firstAtLeast(sorted: readonly number[], value: number): number {
+  let lo = 0, hi = sorted.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (sorted[mid] < value) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
 }
 
 /** Side ids: the side from cell c to its right neighbour is 2c, to its upper neighbour 2c + 1. */
-function squareSegments(values: Float64Array, nx: number, i: number, j: number, level: number, ends: number[]): void {
-  const c = i + j * nx;
+function squareSegments(values: Float64Array, nx: number, c: number, level: number, ends: number[]): void {
   const a = values[c], b = values[c + 1], d = values[c + nx + 1], e = values[c + nx];
-  if (!(Number.isFinite(a) && Number.isFinite(b) && Number.isFinite(d) && Number.isFinite(e))) return;
   const bottom = 2 * c, right = 2 * (c + 1) + 1, top = 2 * (c + nx), left = 2 * c + 1;
   const hiA = a > level, hiB = b > level, hiD = d > level, hiE = e > level;
-  const crossed: number[] = [];
-  if (hiA !== hiB) crossed.push(bottom);
-  if (hiB !== hiD) crossed.push(right);
-  if (hiD !== hiE) crossed.push(top);
-  if (hiE !== hiA) crossed.push(left);
-  if (crossed.length === 2) {
-    ends.push(crossed[0], crossed[1]);
-  } else if (crossed.length === 4) {
+  const crossings = (hiA !== hiB ? 1 : 0) + (hiB !== hiD ? 1 : 0) + (hiD !== hiE ? 1 : 0) + (hiE !== hiA ? 1 : 0);
+  if (crossings === 4) {
     // saddle: when the centre sides with corner a, a's diagonal joins through the middle and the other two corners are cut off
     const centreHigh = (a + b + d + e) / 4 > level;
     if (centreHigh === hiA) ends.push(bottom, right, top, left);
     else ends.push(left, bottom, right, top);
+    return;
   }
+  if (crossings !== 2) return;
+  if (hiA !== hiB) ends.push(bottom);
+  if (hiB !== hiD) ends.push(right);
+  if (hiD !== hiE) ends.push(top);
+  if (hiE !== hiA) ends.push(left);
 }
 
 /** The point where the level crosses side `side` (see squareSegments for side ids). */

@@ -32,18 +32,25 @@ export class RingIndex {
 
   constructor(private readonly grid: CutGrid, domain: FlowDomain) {
     this.rings = [domain.outer, ...domain.islands];
-    const lists: number[][] = Array.from({ length: grid.nx * grid.ny }, () => []);
+    // (cell, ring, segment) triples, then a counting sort by cell
+    const triples: number[] = [];
     this.rings.forEach((ring, r) => {
       const n = ring.marks.length;
       for (let k = 0; k < n; k++) {
         const m = (k + 1) % n;
-        for (const c of this.cellsOf(ring.xy[2 * k], ring.xy[2 * k + 1], ring.xy[2 * m], ring.xy[2 * m + 1])) lists[c].push(r, k);
+        for (const c of this.cellsOf(ring.xy[2 * k], ring.xy[2 * k + 1], ring.xy[2 * m], ring.xy[2 * m + 1])) triples.push(c, r, k);
       }
     });
-    this.start = new Int32Array(lists.length + 1);
-    for (let c = 0; c < lists.length; c++) this.start[c + 1] = this.start[c] + lists[c].length;
-    this.refs = new Int32Array(this.start[lists.length]);
-    lists.forEach((list, c) => this.refs.set(list, this.start[c]));
+    const cells = grid.nx * grid.ny;
+    this.start = new Int32Array(cells + 1);
+    for (let t = 0; t < triples.length; t += 3) this.start[triples[t] + 1] += 2;
+    for (let c = 0; c < cells; c++) this.start[c + 1] += this.start[c];
+    this.refs = new Int32Array(this.start[cells]);
+    const fill = this.start.slice(0, cells);
+    for (let t = 0; t < triples.length; t += 3) {
+      this.refs[fill[triples[t]]++] = triples[t + 1];
+      this.refs[fill[triples[t]]++] = triples[t + 2];
+    }
     this.segmentBase = new Int32Array(this.rings.length + 1);
     this.rings.forEach((ring, r) => (this.segmentBase[r + 1] = this.segmentBase[r] + ring.marks.length));
     this.stamp = new Int32Array(this.segmentBase[this.rings.length]);

@@ -24,8 +24,9 @@ export interface StationInputs {
  * fluid is left out. Distances run along the path inlet centre -> each station's centroid in turn.
  */
 export function buildStations(input: StationInputs, levels: readonly number[]): Station[] {
+  const raw = levelLines(input.grid, input.phi, levels);
   const pieces = levels
-    .map((phi) => ({ phi, lines: clipToFluid(levelLines(input.grid, input.phi, phi), input.index) }))
+    .map((phi, k) => ({ phi, lines: clipToFluid(raw[k], input.index) }))
     .filter((s) => totalLength(s.lines) > 0);
   let [px, py] = inletCentre(input.domain);
   let distance = 0;

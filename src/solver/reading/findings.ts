@@ -1,0 +1,101 @@
+/** Findings: the reading boiled down to a ranked list of plain sentences, each with a place to look. */
+import type { ReadingSettings } from './options.ts';
+import type { Finding, FlowReading, WallDetachmentReading, WallReading } from './types.ts';
+import { lengthText, opening, percentText, ratioText } from './wording.ts';
+
+/** Slow zones smaller than this share of the port are not worth a line. */
+const SLOW_SHARE_WORTH_TELLING = 0.01;
+
+/**
+ * Ranked findings. Scores order the list and are a judgement, not physics: a likely detachment first (more for a
+ * bigger pressure climb after the peak), then a large slow share, the tightest station, over-wide stations and the
+ * fastest wall. `h` is the grid's cell size (document units), the smallest zoom radius worth giving.
+ */
+export function findings(reading: Omit<FlowReading, 'findings'>, settings: ReadingSettings, h: number): Finding[] {
+  const u = settings.units;
+  const out: Finding[] = [];
+  for (const d of reading.detachments) {
+    const wall = reading.walls.find((w) => w.name === d.name);
+    if (d.detachment && wall) out.push(detachmentFinding(d, wall, settings, h));
+  }
+  const { tightest, slow, stations } = reading;
+  const inPort = reading.valvePhi !== null;
+  if (tightest) {
+    const where = inPort ? 'Tightest section ahead of the valve' : 'Tightest section';
+    out.push({
+      score: 0.6,
+      kind: 'tightest',
+      text: `${where}: ${lengthText(tightest.width, u)} wide, ${lengthText(tightest.distanceFromInlet, u)} from the manifold face`,
+      x: 0.5 * (tightest.x1 + tightest.x2),
+      y: 0.5 * (tightest.y1 + tightest.y2),
+      radius: Math.max(0.75 * tightest.width, 4 * h),
+    });
+  }
+  if (slow.largest && slow.portShare >= SLOW_SHARE_WORTH_TELLING) {
+    const part = inPort ? 'the port ahead of the valve' : 'the section';
+    out.push({
+      score: 0.5 + 0.4 * Math.min(1, 2 * slow.portShare),
+      kind: 'slow',
+      text: `${percentText(slow.portShare)} of ${part} moves below ${percentText(settings.slowFraction)} of its local mean speed`,
+      x: slow.largest.x,
+      y: slow.largest.y,
+      radius: Math.max(slow.largest.radius, 4 * h),
+    });
+  }
+  for (const run of overWideRuns(reading)) {
+    const s = stations[run.index];
+    out.push({
+      score: 0.3 + Math.min(0.4, run.excess / run.envelope),
+      kind: 'over-wide',
+      text: `Over-wide: the section ${lengthText(s.distanceFromInlet, u)} from the manifold face is ${lengthText(run.excess, u)} ` +
+        `(${percentText(run.excess / run.envelope)}) wider than the sections either side`,
+      x: 0.5 * (run.x1 + run.x2),
+      y: 0.5 * (run.y1 + run.y2),
+      radius: Math.max(0.6 * run.width, 4 * h),
+    });
+  }
+  const fastest = reading.walls.reduce<WallReading | null>((best, w) => (best && best.peak.speedRatio >= w.peak.speedRatio ? best : w), null);
+  if (fastest) {
+    out.push({
+      score: 0.2 + 0.05 * Math.min(2, fastest.peak.speedRatio),
+      kind: 'peak',
+      text: `Fastest wall flow on the ${fastest.name}: ${ratioText(fastest.peak.speedRatio)} times the mean inlet speed`,
+      x: fastest.peak.x,
+      y: fastest.peak.y,
+      radius: 6 * h,
+    });
+  }
+  return out.sort((a, b) => b.score - a.score);
+}
+
+function detachmentFinding(d: WallDetachmentReading, wall: WallReading, settings: ReadingSettings, h: number): Finding {
+  const at = d.detachment!;
+  const u = settings.units;
+  const past = at.s - wall.peak.s;
+  const where = past >= 0 ? `${lengthText(past, u)} past the speed peak` : `${lengthText(-past, u)} before the speed peak`;
+  const off = d.offWall.length > 0 ? d.offWall[0][1] - d.offWall[0][0] : 0;
+  const stretch = off > 0 ? ` and likely stays off for ${lengthText(off, u)}` : '';
+  return {
+    score: 0.7 + 0.3 * wall.pressureRecovered,
+    kind: 'detachment',
+    text: `${opening(d.name)}: flow likely leaves the wall ${where}${stretch}; speed ratio falls from ` +
+      `${ratioText(wall.peak.speedRatio)} to ${ratioText(wall.low.speedRatio)}`,
+    x: at.x,
+    y: at.y,
+    radius: Math.max(4 * h, Math.abs(past), 0.5 * off),
+  };
+}
+
+/** Over-wide stations grouped into runs of consecutive stations; each run is told once, at its widest excess. */
+function overWideRuns(reading: Omit<FlowReading, 'findings'>): FlowReading['overWide'] {
+  const runs: FlowReading['overWide'][number][] = [];
+  let previous = -2;
+  for (const s of reading.overWide) {
+    const last = runs[runs.length - 1];
+    if (last && s.index === previous + 1) {
+      if (s.excess / s.envelope > last.excess / last.envelope) runs[runs.length - 1] = s;
+    } else runs.push(s);
+    previous = s.index;
+  }
+  return runs;
+}

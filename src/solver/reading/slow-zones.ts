@@ -1,0 +1,98 @@
+/** Slow zones: cells that move far below the mean speed of their own station, and how much of the section they are. */
+import type { CutGrid } from '../types.ts';
+import type { SlowZones, Station } from './types.ts';
+
+/**
+ * Marks solved cells whose speed ratio is below `slowFraction` times their station's mean speed ratio. A cell's
+ * station mean comes from its potential, linear between the two stations around it (held constant beyond the first
+ * and last). Shares are fluid-area weighted (cell fraction); the port share counts only cells with potential above
+ * `valvePhi` (every cell when it is null).
+ * @param phi cell potential, row-major i + j * nx, NaN where not solved
+ * @param speedRatio cell speed ratio, row-major i + j * nx, NaN where not solved
+ */
+export function slowZones(
+  grid: CutGrid, phi: Float64Array, speedRatio: Float64Array, stations: readonly Station[], slowFraction: number, valvePhi: number | null,
+): SlowZones {
+  const mask = new Uint8Array(grid.nx * grid.ny);
+  const port = new Uint8Array(grid.nx * grid.ny);
+  const levels = stations.map((s) => s.phi);
+  const means = stations.map((s) => s.meanSpeedRatio);
+  let area = 0, slowArea = 0, portArea = 0, portSlowArea = 0;
+  for (let c = 0; c < mask.length; c++) {
+    const f = grid.cellFraction[c];
+    if (!(f > 0) || !Number.isFinite(phi[c]) || !Number.isFinite(speedRatio[c])) continue;
+    const inPort = valvePhi === null || phi[c] > valvePhi;
+    const slow = stations.length > 0 && speedRatio[c] < slowFraction * interpolateDescending(levels, means, phi[c]);
+    area += f;
+    if (inPort) portArea += f;
+    if (!slow) continue;
+    mask[c] = 1;
+    slowArea += f;
+    if (inPort) {
+      portSlowArea += f;
+      port[c] = 1;
+    }
+  }
+  return {
+    mask,
+    share: area > 0 ? slowArea / area : 0,
+    portShare: portArea > 0 ? portSlowArea / portArea : 0,
+    largest: largestPatch(grid, port),
+  };
+}
+
+/** Linear interpolation in a table whose keys fall (stations run from phi near 1 to near 0); clamped at the ends. */
+export function interpolateDescending(keys: readonly number[], values: readonly number[], key: number): number {
+  const n = keys.length;
+  if (key >= keys[0]) return values[0];
+  if (key <= keys[n - 1]) return values[n - 1];
+  let lo = 0, hi = n - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (keys[mid] >= key) lo = mid;
+    else hi = mid;
+  }
+  const t = (key - keys[lo]) / (keys[hi] - keys[lo]);
+  return values[lo] + t * (values[hi] - values[lo]);
+}
+
+/** Centre, radius and fluid area (document units) of the largest edge-joined group of marked cells; null if none. */
+function largestPatch(grid: CutGrid, marked: Uint8Array): SlowZones['largest'] {
+  const { nx, ny, h, x0, y0 } = grid;
+  const seen = new Uint8Array(marked.length);
+  const stack: number[] = [];
+  let best: { cells: number[]; area: number } | null = null;
+  for (let start = 0; start < marked.length; start++) {
+    if (!marked[start] || seen[start]) continue;
+    const cells: number[] = [];
+    let area = 0;
+    seen[start] = 1;
+    stack.push(start);
+    while (stack.length > 0) {
+      const c = stack.pop()!;
+      cells.push(c);
+      area += grid.cellFraction[c] * h * h;
+      const i = c % nx, j = (c - i) / nx;
+      for (const [di, dj] of [[1, 0], [-1, 0], [0, 1], [0, -1]]) {
+        const a = i + di, b = j + dj, n = a + b * nx;
+        if (a >= 0 && b >= 0 && a < nx && b < ny && marked[n] && !seen[n]) {
+          seen[n] = 1;
+          stack.push(n);
+        }
+      }
+    }
+    if (best === null || area > best.area) best = { cells, area };
+  }
+  if (best === null) return null;
+  const centre = (c: number): [number, number] => [x0 + ((c % nx) + 0.5) * h, y0 + (Math.floor(c / nx) + 0.5) * h];
+  let sx = 0, sy = 0;
+  for (const c of best.cells) {
+    const [x, y] = centre(c);
+    sx += x * grid.cellFraction[c] * h * h;
+    sy += y * grid.cellFraction[c] * h * h;
+  }
+  const x = sx / best.area, y = sy / best.area;
+  let radius = 0;
+  for (const c of best.cells) radius = Math.max(radius, Math.hypot(centre(c)[0] - x, centre(c)[1] - y));
+  return { x, y, radius: radius + h, area: best.area };
+}

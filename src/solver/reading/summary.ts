@@ -1,0 +1,48 @@
+/** A JSON-ready digest of a flow reading, for the headless command's --json output. */
+import type { FlowReading } from './types.ts';
+
+/** Plain numbers and strings only; every number rounded to six significant figures so that output is stable. */
+export interface ReadingSummary {
+  readonly stations: { phi: number; width: number; meanSpeedRatio: number; distanceFromInlet: number }[];
+  readonly tightest: { width: number; x1: number; y1: number; x2: number; y2: number; distanceFromInlet: number } | null;
+  /** slow share of the whole section */
+  readonly slowShare: number;
+  /** slow share of the port ahead of the valve */
+  readonly portSlowShare: number;
+  readonly walls: {
+    name: string;
+    peakSpeedRatio: number;
+    pressureRecovered: number;
+    detachment: { s: number; x: number; y: number; method: 'thwaites' | 'head'; shapeFactor: number } | null;
+  }[];
+  readonly findings: string[];
+}
+
+/** The summary of `reading` (lengths in document units, s from each wall's upstream end). */
+export function readingSummary(reading: FlowReading): ReadingSummary {
+  const t = reading.tightest;
+  return {
+    stations: reading.stations.map((s) => ({
+      phi: round(s.phi), width: round(s.width), meanSpeedRatio: round(s.meanSpeedRatio), distanceFromInlet: round(s.distanceFromInlet),
+    })),
+    tightest: t ? { width: round(t.width), x1: round(t.x1), y1: round(t.y1), x2: round(t.x2), y2: round(t.y2), distanceFromInlet: round(t.distanceFromInlet) } : null,
+    slowShare: round(reading.slow.share),
+    portSlowShare: round(reading.slow.portShare),
+    walls: reading.detachments.map((d) => {
+      const wall = reading.walls.find((w) => w.name === d.name);
+      const at = d.detachment;
+      return {
+        name: d.name,
+        peakSpeedRatio: round(wall ? wall.peak.speedRatio : NaN),
+        pressureRecovered: round(wall ? wall.pressureRecovered : NaN),
+        detachment: at ? { s: round(at.s), x: round(at.x), y: round(at.y), method: at.method, shapeFactor: round(at.shapeFactor) } : null,
+      };
+    }),
+    findings: reading.findings.map((f) => f.text),
+  };
+}
+
+/** Six significant figures; a missing number stays NaN (JSON.stringify writes it as null). */
+function round(value: number): number {
+  return Number.isFinite(value) ? Number(value.toPrecision(6)) : NaN;
+}
