@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import type { Point } from '../../src/document/types.ts';
+import type { Outline, Point } from '../../src/document/types.ts';
+import { edgePath } from '../../src/geometry/edge-path.ts';
+import { solvePathFillet } from '../../src/geometry/fillet-solve.ts';
 import { filletPoints, lineCornerFillet, type CornerFillet } from '../../src/geometry/fillet.ts';
 import { GeometryError } from '../../src/geometry/errors.ts';
 import { sectionToDomain } from '../../src/geometry/to-domain.ts';
@@ -165,5 +167,35 @@ describe('fillets in the traced outline', () => {
     assertInDelta(floorEnd, cx, 1e-9);
     expect(onFillet).toBeGreaterThan(2);
     expect(nearTouch).toBeLessThanOrEqual(1e-9);
+  });
+});
+
+describe('fillets beside curves', () => {
+  it('between a line and a curve: centre r from the line and r from the curve along its normal', () => {
+    const inPath = edgePath([-10, 0], { kind: 'line', role: 'wall' }, [0, 0], { edgeIndex: 0 });
+    const outPath = edgePath([0, 0], { kind: 'curve', role: 'wall', via: [[3, 4], [9, 4]] }, [12, 0], { edgeIndex: 1 });
+    const f = solvePathFillet(inPath, outPath, 1, 0.9, 0.1)!;
+    expect(f).not.toBeNull();
+    // Tangent to the line y = 0 from above (left turn).
+    assertInDelta(f.centre[1], 1, 1e-12);
+    assertInDelta(f.tangentIn[0], f.centre[0], 1e-12);
+    assertInDelta(f.tangentIn[1], 0, 1e-12);
+    // Tangent to the curve: radius 1 to the touching point, square to the curve's direction there.
+    const t = outPath.point(f.tOut), d = outPath.derivative(f.tOut);
+    assertInDelta(Math.hypot(f.centre[0] - t[0], f.centre[1] - t[1]), 1, 1e-12);
+    assertInDelta(((f.centre[0] - t[0]) * d[0] + (f.centre[1] - t[1]) * d[1]) / Math.hypot(d[0], d[1]), 0, 1e-10);
+  });
+
+  it('too large beside an arc: the largest radius reported fits and one 1% larger does not', () => {
+    const outline = (r: number): Outline => ({
+      vertices: [{ at: [0, 0] }, { at: [10, 0], filletRadius: r }, { at: [10, 10] }, { at: [0, 10] }],
+      edges: [{ kind: 'arc', role: 'wall', through: [5, -2] }, wall(), wall(), wall()],
+    });
+    const err = catchGeometry(() => sectionToDomain(section(outline(50)), 0.001));
+    expect(err.code).toBe('fillet-too-large');
+    const largest = err.largestRadius!;
+    expect(largest).toBeGreaterThan(1);
+    expect(() => sectionToDomain(section(outline(largest)), 0.001)).not.toThrow();
+    expect(() => sectionToDomain(section(outline(largest * 1.01)), 0.001)).toThrow(GeometryError);
   });
 });
