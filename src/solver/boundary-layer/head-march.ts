@@ -116,7 +116,8 @@ function integrateLeg(
     const u = speedAt(wall, k, s);
     const g = Math.abs(gradientAt(wall, k, s));
     const scale = g > 0 ? (STEP_PER_SPEED_SCALE * u) / g : Infinity;
-    const step = Math.min(target - s, Math.max(Math.min(STEP_PER_THETA * thetaOf(state), scale), minStep));
+    let step = Math.min(target - s, Math.max(Math.min(STEP_PER_THETA * thetaOf(state), scale), minStep));
+    if (s + step <= s) step = target - s; // far from s = 0 a tiny step could round away: finish the leg instead
     const next = rk4Step(wall, k, s, step, state);
     const sNext = step === target - s ? target : s + step;
     const finite = Number.isFinite(next.z) && Number.isFinite(next.y);
