@@ -1,0 +1,80 @@
+/** The keyboard shortcuts: one table that both dispatches keys and fills the help overlay. */
+
+import { EDIT_LIST, type EditName, type EditShortcut } from './edits.ts';
+
+/** Things keys do that are not document edits; the app carries them out. */
+export type CommandName = 'fitView' | 'toggleInsertMode' | 'toggleSnapping' | 'toggleHelp' | 'save' | 'open' | 'cancel';
+
+/** What a key runs: an edit on the current selection, or a command. */
+export type ShortcutRun =
+  | { readonly edit: EditName; readonly target: EditShortcut['target']; readonly preset?: Readonly<Record<string, unknown>> }
+  | { readonly command: CommandName };
+
+export interface Shortcut {
+  /** Key as shown in the help overlay and matched against presses: "f", "Ctrl+S", "Delete", "?". */
+  readonly key: string;
+  readonly description: string;
+  /** Heading in the help overlay. */
+  readonly group: 'Edit' | 'View' | 'File';
+  readonly run: ShortcutRun;
+}
+
+const COMMANDS: readonly Shortcut[] = [
+  { key: 'i', description: 'Insert mode on/off: a click on an edge adds a corner there', group: 'Edit', run: { command: 'toggleInsertMode' } },
+  { key: 's', description: 'Snapping on/off (grid, and lining up with neighbouring points)', group: 'Edit', run: { command: 'toggleSnapping' } },
+  { key: 'Escape', description: 'Cancel the drag, or clear the selection', group: 'Edit', run: { command: 'cancel' } },
+  { key: 'f', description: 'Fit the section in the view', group: 'View', run: { command: 'fitView' } },
+  { key: '?', description: 'Show or hide this list of keys', group: 'View', run: { command: 'toggleHelp' } },
+  { key: 'Ctrl+S', description: 'Save the section file', group: 'File', run: { command: 'save' } },
+  { key: 'Ctrl+O', description: 'Open a section file', group: 'File', run: { command: 'open' } },
+];
+
+/** Every shortcut: commands first, then the keys registered with the edits (src/editor/edits.ts). */
+export const SHORTCUTS: readonly Shortcut[] = [
+  ...COMMANDS,
+  ...EDIT_LIST.flatMap((spec) => (spec.shortcuts ?? []).map((s): Shortcut => ({
+    key: s.key,
+    description: s.description,
+    group: 'Edit',
+    run: { edit: spec.name as EditName, target: s.target, ...(s.preset === undefined ? {} : { preset: s.preset }) },
+  }))),
+];
+
+/** Pointer gestures for the help overlay; they are handled by the drag tool, not dispatched from here. */
+export const POINTER_HINTS: readonly { readonly key: string; readonly description: string }[] = [
+  { key: 'Drag a point', description: 'Move a corner, an arc\'s middle point or a curve point' },
+  { key: 'Drag a fillet dot', description: 'Change that corner\'s radius (the short-side radius on the short-side corner)' },
+  { key: 'Shift+click an edge', description: 'Add a corner there (or a plain click in insert mode)' },
+  { key: 'Click an edge', description: 'Select it for a, c, l, w, n, o' },
+];
+
+/** Which modifier of a pointer event asks a click on an edge to add a corner there (Shift: Alt-click is the desktop's on many systems). */
+export const INSERT_MODIFIER = 'shiftKey' as const;
+
+/** The parts of a key press that matter; a DOM KeyboardEvent fits. */
+export interface KeyPress {
+  readonly key: string;
+  readonly ctrlKey?: boolean;
+  readonly metaKey?: boolean;
+  readonly altKey?: boolean;
+  readonly shiftKey?: boolean;
+}
+
+/**
+ * The press written as a chord, e.g. "Ctrl+S", "f", "Delete". Cmd counts as Ctrl. Shift is written only with
+ * named keys: on a character it is already in the character ("?" is Shift+/ on many layouts).
+ */
+export function chordOf(press: KeyPress): string {
+  const parts: string[] = [];
+  if (press.ctrlKey || press.metaKey) parts.push('Ctrl');
+  if (press.altKey) parts.push('Alt');
+  if (press.shiftKey && press.key.length > 1) parts.push('Shift');
+  parts.push(press.key.length === 1 && parts.length > 0 ? press.key.toUpperCase() : press.key);
+  return parts.join('+');
+}
+
+/** The shortcut for a press, or undefined. Letters match either case (Caps Lock on still works). */
+export function findShortcut(press: KeyPress): Shortcut | undefined {
+  const chord = chordOf(press).toLowerCase();
+  return SHORTCUTS.find((s) => s.key.toLowerCase() === chord);
+}
