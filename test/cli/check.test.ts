@@ -1,0 +1,74 @@
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { afterAll, describe, expect, it } from 'vitest';
+import { run } from '../../src/cli/main.ts';
+import { REPO, STACK_LINE, captureIO, tempDir } from './helpers.ts';
+
+const tmp = tempDir();
+afterAll(() => tmp.cleanup());
+const sample = () => JSON.parse(readFileSync(join(REPO, 'samples/street-tight-short-side.json'), 'utf8'));
+
+async function check(path: string) {
+  const io = captureIO();
+  const code = await run(['check', path], io);
+  return { code, out: io.stdout.join('\n'), err: io.stderr.join('\n') };
+}
+
+describe('check (in process)', () => {
+  it('summarises every variant of a file with two', async () => {
+    const { code, out, err } = await check(join(REPO, 'samples/short-side-compare.json'));
+    expect(code).toBe(0);
+    expect(err).toBe('');
+    expect(out).toContain('variants: 2, active: "tight short side"');
+    expect(out).toContain('variant "tight short side" (active)');
+    expect(out).toContain('variant "generous short side"\n');
+    expect(out).toContain('edges: 21 in the outline (1 inlet, 1 outlet, 19 wall), 10 in islands');
+    expect(out).toContain('islands: 1 (valve head)');
+    expect(out.match(/fluid area: \d+\.\d mm\^2/g)).toHaveLength(2);
+  });
+
+  it('reports a geometry problem per variant with exit 1', async () => {
+    const doc = sample();
+    doc.variants[0].section.outline.vertices[3].filletRadius = 60;
+    const { code, out, err } = await check(tmp.write('big-fillet.json', JSON.stringify(doc)));
+    expect(code).toBe(1);
+    expect(out).toMatch(/problem: .*fillet/i);
+    expect(out).not.toContain('fluid area');
+    expect(err).toContain('1 of 1 variant cannot be solved: "tight short side"');
+    expect(err + out).not.toMatch(STACK_LINE);
+  });
+
+  it('says when there is no outlet', async () => {
+    const doc = sample();
+    doc.variants[0].section.outline.edges[11] = { kind: 'line', role: 'wall' };
+    const { code, out } = await check(tmp.write('no-outlet.json', JSON.stringify(doc)));
+    expect(code).toBe(1);
+    expect(out).toContain('problem: the outline has no outlet edge');
+  });
+
+  it('names the position of a JSON syntax error', async () => {
+    const { code, err } = await check(tmp.write('cut.json', readFileSync(join(REPO, 'samples/street-tight-short-side.json'), 'utf8').slice(0, 700)));
+    expect(code).toBe(1);
+    expect(err).toMatch(/not valid JSON at line \d+, column \d+/);
+  });
+
+  it('says a newer file needs a newer Portwright', async () => {
+    const { code, err } = await check(tmp.write('newer.json', JSON.stringify({ ...sample(), version: 7 })));
+    expect(code).toBe(1);
+    expect(err).toContain('format version 7, written by a newer Portwright');
+  });
+
+  it('refuses a folder, and a wrong number of arguments', async () => {
+    expect((await check(tmp.dir)).err).toContain('is a folder, not a section file');
+    const io = captureIO();
+    expect(await run(['check'], io)).toBe(1);
+    expect(await run(['check', 'a.json', 'b.json'], io)).toBe(1);
+    expect(io.stderr.join('\n')).toContain('check takes one file (got 2 arguments)');
+  });
+
+  it('prints its own usage for check --help', async () => {
+    const io = captureIO();
+    expect(await run(['check', '--help'], io)).toBe(0);
+    expect(io.stdout[0]).toBe('usage: portwright check FILE');
+  });
+});
