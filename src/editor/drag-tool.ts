@@ -41,11 +41,18 @@ export type ToolEvent =
  */
 export type ToolAction =
   | { readonly type: 'select'; readonly selection: HandleRef | null }
-  | { readonly type: 'drag-start' | 'drag-move' | 'drag-end'; readonly edit: EditRequest; readonly snapped?: SnapResult }
+  | DragAction
   | { readonly type: 'drag-cancel' }
   | { readonly type: 'edit'; readonly edit: EditRequest }
   | { readonly type: 'command'; readonly name: CommandName }
   | { readonly type: 'hint'; readonly message: string };
+
+/** One step of a drag: the edit for the pointer's position, and what the point snapped to (when snapping is on). */
+export interface DragAction {
+  readonly type: 'drag-start' | 'drag-move' | 'drag-end';
+  readonly edit: EditRequest;
+  readonly snapped?: SnapResult;
+}
 
 export interface ToolStep {
   readonly state: ToolState;
@@ -116,7 +123,7 @@ function pointerUp(state: ToolState, at: Point, ctx: ToolContext): ToolStep {
   return { state: { mode: 'idle', selection: state.selection }, actions: [] };
 }
 
-function dragAction(type: 'drag-start' | 'drag-move' | 'drag-end', step: DragEdit): ToolAction {
+function dragAction(type: DragAction['type'], step: DragEdit): DragAction {
   return step.snapped === undefined ? { type, edit: step.edit } : { type, edit: step.edit, snapped: step.snapped };
 }
 

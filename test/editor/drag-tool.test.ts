@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Point } from '../../src/document/types.ts';
-import { IDLE, stepTool, type ToolAction, type ToolContext, type ToolEvent, type ToolState } from '../../src/editor/drag-tool.ts';
+import { IDLE, stepTool, type DragAction, type ToolAction, type ToolContext, type ToolEvent, type ToolState } from '../../src/editor/drag-tool.ts';
 import { applyEdit } from '../../src/editor/edits.ts';
 import { filletHandlePosition, radiusFromHandleDrag } from '../../src/editor/hit-test.ts';
 import { active, boxDocument, boxSection } from './fixtures.ts';
@@ -59,11 +59,11 @@ describe('drag tool: click versus drag', () => {
     const snapping: ToolContext = { ...ctx, snap: { gridStep: 0.5, alignTolerance: 0.3 } };
     const { actions } = run([down([40, 30]), move([41.13, 31.9]), move([41.2, 31.95])], snapping);
     expect(actions.map((a) => a.type)).toEqual(['select', 'drag-start']);
-    const start = actions[1] as Extract<ToolAction, { type: 'drag-start' }>;
+    const start = actions[1] as DragAction;
     // Neighbours of corner 2 are (40, 0) and (0, 30): both more than 0.3 away in x and y, so both go to the grid.
     expect(start.edit).toEqual({ name: 'movePoint', args: { point: { kind: 'vertex', vertex: 2 }, to: [41, 32] } });
     expect(start.snapped?.x).toEqual({ kind: 'grid', step: 0.5 });
-    const aligned = run([down([40, 30]), move([39.8, 20])], snapping).actions[1] as Extract<ToolAction, { type: 'drag-start' }>;
+    const aligned = run([down([40, 30]), move([39.8, 20])], snapping).actions[1] as DragAction;
     expect(aligned.edit.args).toEqual({ point: { kind: 'vertex', vertex: 2 }, to: [40, 20] });
     expect(aligned.snapped?.x).toEqual({ kind: 'aligned', with: [40, 0] });
   });
@@ -73,7 +73,7 @@ describe('drag tool: click versus drag', () => {
     const target: Point = [handle[0] - 1, handle[1] + 1];
     const { actions } = run([down(handle), move(target), up(target)]);
     expect(actions[0]).toEqual({ type: 'select', selection: { kind: 'fillet', vertex: 1 } });
-    const end = actions[actions.length - 1] as Extract<ToolAction, { type: 'drag-end' }>;
+    const end = actions[actions.length - 1] as DragAction;
     expect(end.edit.name).toBe('setFilletRadius');
     expect(end.edit.args).toEqual({ vertex: 1, radius: radiusFromHandleDrag(ctx.section, 1, target) });
     // [derived] 90 degree corner: moving sqrt 2 further along the bisector adds sqrt 2 / (sqrt 2 - 1) to the radius.
