@@ -1,0 +1,107 @@
+/** The solve: rasterise, connect, assemble, warm start, MG-PCG, velocity, flux checks, wall speeds. */
+import { assemble, writeRhs } from './assemble.ts';
+import { connectedCells } from './connectivity.ts';
+import { buildMultigrid } from './multigrid.ts';
+import { pcg } from './pcg.ts';
+import { paddedVector, residual } from './pcg-operator.ts';
+import { rasterise } from './rasterise.ts';
+import { STATION_COUNT, stationFluxes, worstImbalance } from './stations-flux.ts';
+import { MARK_INLET, type CutGrid, type FlowDomain, type PotentialField, type SolveOptions, type SolveResult } from './types.ts';
+import { boundaryFlux, speedRatio } from './velocity.ts';
+import { markedLength } from './rasterise-checks.ts';
+import { peakSpeed, sharpConvexCorners } from './velocity-peak.ts';
+import { wallSpeeds } from './wall-speeds.ts';
+import { warmStartGuess } from './warm-start.ts';
+
+export const DEFAULT_TOLERANCE = 1e-8;
+export const DEFAULT_MAX_ITERATIONS = 200;
+
+/** Thrown when shouldStop ended the solve: a newer request replaced this one. */
+export class SolveSupersededError extends Error {
+  readonly code = 'superseded';
+  constructor(readonly iterations: number) {
+    super('A newer request replaced this solve.');
+    this.name = 'SolveSupersededError';
+  }
+}
+
+export interface GridSolveOptions {
+  /** Total inlet length, length units: mean inlet speed = inlet flux / inletLength. */
+  readonly inletLength: number;
+  /** Relative residual to stop at; default 1e-8. */
+  readonly tolerance?: number;
+  /** Iteration cap; default 200. */
+  readonly maxIterations?: number;
+  readonly warmStart?: PotentialField;
+  readonly shouldStop?: () => boolean;
+  /** Told the relative residual after every iteration. */
+  readonly onIteration?: (iteration: number, relativeResidual: number) => void;
+  /** Cells to solve, i + j * nx; default connectedCells(grid). */
+  readonly mask?: Uint8Array;
+  /** x, y pairs of sharp convex corners kept out of the peak (sharpConvexCorners); default none. */
+  readonly corners?: Float64Array;
+}
+
+/** Everything of a SolveResult but the wall speeds (those need the domain). */
+export type GridSolution = Omit<SolveResult, 'walls'> & {
+  /** False when the iteration cap came first. */
+  readonly converged: boolean;
+  /** Inlet and outlet flux, per unit depth at unit potential drop (their mean is the conductance). */
+  readonly inletFlux: number;
+  readonly outletFlux: number;
+};
+
+/**
+ * Solves a port section: the one entry point of the worker and the command line.
+ * Throws FlowSetupError for a section that cannot be solved, SolveSupersededError when shouldStop fired.
+ */
+export function solveFlow(domain: FlowDomain, options: SolveOptions): SolveResult {
+  const grid = rasterise(domain, options.targetCells);
+  const solution = solveOnGrid(grid, {
+    inletLength: markedLength(domain, MARK_INLET),
+    tolerance: options.tolerance,
+    maxIterations: options.maxIterations,
+    warmStart: options.warmStart,
+    shouldStop: options.shouldStop,
+    mask: connectedCells(grid),
+    corners: sharpConvexCorners(domain),
+  });
+  const walls = wallSpeeds(domain, grid, solution.phi, solution.inletMeanSpeed);
+  return { ...solution, walls };
+}
+
+/** Solves on a ready grid (tests, and solveFlow after rasterising). */
+export function solveOnGrid(grid: CutGrid, options: GridSolveOptions): GridSolution {
+  if (!(options.inletLength > 0)) throw new RangeError(`inletLength must be positive, got ${options.inletLength}`);
+  const { nx, ny } = grid;
+  const mask = options.mask ?? connectedCells(grid);
+  const stencil = assemble(grid, mask);
+  const phi = new Float64Array(nx * ny);
+  if (options.warmStart) warmStartGuess(options.warmStart, grid, mask, phi);
+  const r = new Float64Array(nx * ny);
+  const bNorm = writeRhs(grid, mask, r);
+  const work = { p: paddedVector(nx, ny), z: paddedVector(nx, ny) };
+  const report = pcg(stencil, buildMultigrid(stencil), phi, r, bNorm, work, {
+    tolerance: options.tolerance ?? DEFAULT_TOLERANCE,
+    maxIterations: options.maxIterations ?? DEFAULT_MAX_ITERATIONS,
+    shouldStop: options.shouldStop,
+    onIteration: options.onIteration,
+  });
+  if (report.stopped) throw new SolveSupersededError(report.iterations);
+  // Report the true residual b - A phi, not the recurrence's.
+  writeRhs(grid, mask, r);
+  work.p.set(phi, nx);
+  const trueResidual = bNorm > 0 ? residual(stencil, work.p, r, r) / bNorm : 0;
+  const flux = boundaryFlux(grid, mask, phi);
+  const total = 0.5 * (flux.inlet + flux.outlet);
+  const inletMeanSpeed = flux.inlet / options.inletLength;
+  const fluxImbalance = worstImbalance(stationFluxes(stencil, grid, phi, STATION_COUNT), total);
+  const speed = r;
+  speedRatio(stencil, grid.h, phi, inletMeanSpeed, speed);
+  const peak = peakSpeed(grid, speed, options.corners ?? new Float64Array(0));
+  for (let k = 0; k < phi.length; k++) if (mask[k] !== 1) phi[k] = NaN;
+  return {
+    grid, phi, speedRatio: speed, iterations: report.iterations, residual: trueResidual, converged: report.converged,
+    conductance: total, fluxImbalance, inletMeanSpeed, peak, inletFlux: flux.inlet, outletFlux: flux.outlet,
+  };
+}
