@@ -2,7 +2,7 @@
 
 import type { Edge, Point } from '../document/types.ts';
 import { arcPoints, arcSegmentCount, arcThroughPoints, type CircleArc } from './circle-arc.ts';
-import { catmullRomSpans, flattenSpan, spanDerivative, spanPoint, type FlattenSink } from './catmull-rom.ts';
+import { catmullRomSpans, flattenSpan, spanDerivative, spanPoint, type FlattenSink, type HermiteSpan } from './catmull-rom.ts';
 import { GeometryError, outlineLabel } from './errors.ts';
 
 /** Which edge, for error messages. */
@@ -45,34 +45,59 @@ export function edgePath(start: Point, edge: Edge, end: Point, place: EdgePlace)
 }
 
 function linePath(a: Point, b: Point): EdgePath {
-  const dx = b[0] - a[0], dy = b[1] - a[1];
-  const at = (t: number): [number, number] => (t === 1 ? [b[0], b[1]] : [a[0] + t * dx, a[1] + t * dy]);
-  return {
-    kind: 'line',
-    point: at,
-    derivative: () => [dx, dy],
-    flatten: (t0, t1) => {
-      const p = at(t0), q = at(t1);
-      return { xy: Float64Array.of(p[0], p[1], q[0], q[1]), t: Float64Array.of(t0, t1) };
-    },
-  };
+  return new LinePath(a, b);
+}
+
+class LinePath implements EdgePath {
+  readonly kind = 'line';
+  constructor(private readonly a: Point, private readonly b: Point) {}
+
+  point(t: number): [number, number] {
+    const { a, b } = this;
+    return t === 1 ? [b[0], b[1]] : [a[0] + t * (b[0] - a[0]), a[1] + t * (b[1] - a[1])];
+  }
+
+  derivative(): [number, number] {
+    return [this.b[0] - this.a[0], this.b[1] - this.a[1]];
+  }
+
+  flatten(t0: number, t1: number): PathPolyline {
+    const p = this.point(t0), q = this.point(t1);
+    return { xy: Float64Array.of(p[0], p[1], q[0], q[1]), t: Float64Array.of(t0, t1) };
+  }
 }
 
 function arcPath(arc: CircleArc, start: Point, end: Point): EdgePath {
-  const angle = (t: number): number => arc.startAngle + arc.sweep * t;
-  return {
-    kind: 'arc',
-    point: (t) => [arc.cx + arc.r * Math.cos(angle(t)), arc.cy + arc.r * Math.sin(angle(t))],
-    derivative: (t) => [-arc.r * arc.sweep * Math.sin(angle(t)), arc.r * arc.sweep * Math.cos(angle(t))],
-    flatten: (t0, t1, tol) => {
-      const part: CircleArc = { ...arc, startAngle: angle(t0), sweep: arc.sweep * (t1 - t0) };
-      const count = arcSegmentCount(part, tol);
-      const xy = arcPoints(part, count);
-      if (t0 === 0) { xy[0] = start[0]; xy[1] = start[1]; }
-      if (t1 === 1) { xy[2 * count] = end[0]; xy[2 * count + 1] = end[1]; }
-      return { xy, t: Float64Array.from({ length: count + 1 }, (_, k) => t0 + ((t1 - t0) * k) / count) };
-    },
-  };
+  return new ArcPath(arc, start, end);
+}
+
+class ArcPath implements EdgePath {
+  readonly kind = 'arc';
+  constructor(private readonly arc: CircleArc, private readonly start: Point, private readonly end: Point) {}
+
+  point(t: number): [number, number] {
+    const { cx, cy, r, startAngle, sweep } = this.arc;
+    const angle = startAngle + sweep * t;
+    return [cx + r * Math.cos(angle), cy + r * Math.sin(angle)];
+  }
+
+  derivative(t: number): [number, number] {
+    const { r, startAngle, sweep } = this.arc;
+    const angle = startAngle + sweep * t;
+    return [-r * sweep * Math.sin(angle), r * sweep * Math.cos(angle)];
+  }
+
+  flatten(t0: number, t1: number, tol: number): PathPolyline {
+    const { arc, start, end } = this;
+    const part: CircleArc = { ...arc, startAngle: arc.startAngle + arc.sweep * t0, sweep: arc.sweep * (t1 - t0) };
+    const count = arcSegmentCount(part, tol);
+    const xy = arcPoints(part, count);
+    if (t0 === 0) { xy[0] = start[0]; xy[1] = start[1]; }
+    if (t1 === 1) { xy[2 * count] = end[0]; xy[2 * count + 1] = end[1]; }
+    const t = new Float64Array(count + 1);
+    for (let k = 0; k <= count; k++) t[k] = t0 + ((t1 - t0) * k) / count;
+    return { xy, t };
+  }
 }
 
 function curvePath(points: readonly Point[], place: EdgePlace): EdgePath {
@@ -84,34 +109,52 @@ function curvePath(points: readonly Point[], place: EdgePlace): EdgePath {
         { where: a, edgeIndex: place.edgeIndex, islandName: place.islandName });
     }
   }
-  const spans = catmullRomSpans(points);
-  const m = spans.length;
-  // Span k covers t in [k / m, (k + 1) / m].
-  const locate = (t: number): [number, number] => {
+  return new CurvePath(points, catmullRomSpans(points));
+}
+
+/** Span k of m covers t in [k / m, (k + 1) / m]. */
+class CurvePath implements EdgePath {
+  readonly kind = 'curve';
+  constructor(private readonly points: readonly Point[], private readonly spans: readonly HermiteSpan[]) {}
+
+  /** [span index, u within the span] at t; outside [0, 1] the end spans continue. */
+  private locate(t: number): [number, number] {
+    const m = this.spans.length;
     const k = Math.min(m - 1, Math.max(0, Math.floor(t * m)));
     return [k, t * m - k];
-  };
-  return {
-    kind: 'curve',
-    point: (t) => { const [k, u] = locate(t); return spanPoint(spans[k], u, [0, 0]); },
-    derivative: (t) => { const [k, u] = locate(t); const d = spanDerivative(spans[k], u, [0, 0]); return [d[0] * m, d[1] * m]; },
-    flatten: (t0, t1, tol) => {
-      const [k0, u0] = locate(t0);
-      let [k1, u1] = t1 >= 1 ? [m - 1, 1] : locate(t1);
-      if (u1 === 0 && k1 > k0) { k1 -= 1; u1 = 1; } // ending on a span boundary: finish the span before
-      const first = spanPoint(spans[k0], u0, [0, 0]);
-      const sink: FlattenSink = { xy: [first[0], first[1]], u: [t0 * m] };
-      for (let k = k0; k <= k1; k++) {
-        const before = sink.u.length;
-        flattenSpan(spans[k], tol, sink, k === k0 ? u0 : 0, k === k1 ? u1 : 1);
-        for (let j = before; j < sink.u.length; j++) sink.u[j] += k; // span u to curve parameter x m
-      }
-      const xy = Float64Array.from(sink.xy);
-      if (t0 === 0) { xy[0] = points[0][0]; xy[1] = points[0][1]; }
-      if (t1 >= 1) { xy[xy.length - 2] = points[m][0]; xy[xy.length - 1] = points[m][1]; }
-      return { xy, t: Float64Array.from(sink.u, (x) => x / m) };
-    },
-  };
+  }
+
+  point(t: number): [number, number] {
+    const [k, u] = this.locate(t);
+    return spanPoint(this.spans[k], u, [0, 0]);
+  }
+
+  derivative(t: number): [number, number] {
+    const [k, u] = this.locate(t);
+    const m = this.spans.length, d = spanDerivative(this.spans[k], u, [0, 0]);
+    return [d[0] * m, d[1] * m];
+  }
+
+  flatten(t0: number, t1: number, tol: number): PathPolyline {
+    const { spans, points } = this;
+    const m = spans.length;
+    const [k0, u0] = this.locate(t0);
+    let [k1, u1] = t1 >= 1 ? [m - 1, 1] : this.locate(t1);
+    if (u1 === 0 && k1 > k0) { k1 -= 1; u1 = 1; } // ending on a span boundary: finish the span before
+    const first = spanPoint(spans[k0], u0, [0, 0]);
+    const sink: FlattenSink = { xy: [first[0], first[1]], u: [t0 * m] };
+    for (let k = k0; k <= k1; k++) {
+      const before = sink.u.length;
+      flattenSpan(spans[k], tol, sink, k === k0 ? u0 : 0, k === k1 ? u1 : 1);
+      for (let j = before; j < sink.u.length; j++) sink.u[j] += k; // span u to curve parameter x m
+    }
+    const xy = Float64Array.from(sink.xy);
+    if (t0 === 0) { xy[0] = points[0][0]; xy[1] = points[0][1]; }
+    if (t1 >= 1) { xy[xy.length - 2] = points[m][0]; xy[xy.length - 1] = points[m][1]; }
+    const t = Float64Array.from(sink.u);
+    for (let j = 0; j < t.length; j++) t[j] /= m;
+    return { xy, t };
+  }
 }
 
 /** The arc of an arc edge, or null when its three points are collinear with `through` between the ends (a line). */
