@@ -1,4 +1,4 @@
-/** Circular arcs: the circle through three points, chordal flattening, end tangents. */
+/** Circular arcs: the circle through three points, chordal flattening, whether an angle lies on an arc. */
 
 import type { Point } from '../document/types.ts';
 

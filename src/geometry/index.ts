@@ -1,6 +1,6 @@
 /** Public API of the geometry kernel: pure functions from section documents to flattened, checked flow domains. */
 
-export { GeometryError, type GeometryErrorCode, type GeometryErrorDetail } from './errors.ts';
+export { GeometryError, formatLength, formatPoint, outlineLabel, type GeometryErrorCode, type GeometryErrorDetail } from './errors.ts';
 export { sectionToDomain } from './to-domain.ts';
 export { sectionBounds, defaultTolerance, type Bounds } from './bounds.ts';
 export { signedArea, regionArea } from './area.ts';
