@@ -100,7 +100,10 @@ export const setFilletRadiusArgs = z.strictObject({
 });
 export type SetFilletRadiusArgs = z.infer<typeof setFilletRadiusArgs>;
 
-/** Sets the fillet radius (document units) of a corner; 0 makes it sharp (the field is then left out). */
+/**
+ * Sets the fillet radius (document units) of a corner; 0 makes it sharp (the field is then left out).
+ * On the corner where the short side turns into the seat this is the short-side radius.
+ */
 export function setFilletRadius(doc: PortDocument, { vertex, island, radius }: SetFilletRadiusArgs): PortDocument {
   const edit = 'setFilletRadius';
   if (!(radius >= 0) || !Number.isFinite(radius)) throw new EditError(edit, 'A fillet radius must be a length of 0 or more.');

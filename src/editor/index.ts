@@ -1,0 +1,24 @@
+/** The section editor's public face: pure edits, picking, snapping, the drag tool and the shortcut table. */
+
+export { applyEdit, EDITS, EDIT_LIST, isEditName } from './edits.ts';
+export type { EditArgs, EditName, EditRequest, EditShortcut, EditSpec } from './edits.ts';
+export { EditError } from './errors.ts';
+export type { HandleKind, HandleRef, PointRef } from './refs.ts';
+export { sameHandle } from './refs.ts';
+export { hitTest, filletHandlePosition, radiusFromHandleDrag } from './hit-test.ts';
+export type { Hit, HitOptions } from './hit-test.ts';
+export { handlePosition, listHandles, HANDLE_ORDER } from './handles.ts';
+export type { Handle } from './handles.ts';
+export { cornerShape, handleDistance, radiusForHandleDistance } from './fillet-handle.ts';
+export type { CornerShape } from './fillet-handle.ts';
+export { DEFAULT_GRID_STEP, roundToStep, snapNeighbours, snapPoint } from './snap.ts';
+export type { AxisSnap, SnapResult, SnapSettings } from './snap.ts';
+export { DRAG_THRESHOLD_PX, IDLE, stepTool } from './drag-tool.ts';
+export type { DragAction, ToolAction, ToolContext, ToolEvent, ToolState, ToolStep } from './drag-tool.ts';
+export { chordOf, findShortcut, INSERT_MODIFIER, POINTER_HINTS, SHORTCUTS } from './shortcuts.ts';
+export type { CommandName, KeyPress, Shortcut, ShortcutRun } from './shortcuts.ts';
+export { editForSelection } from './selection-edits.ts';
+export type { SelectionEdit } from './selection-edits.ts';
+export { activeSection } from './section-access.ts';
+export { NEW_ARC_BULGE, WALL_NAME_MAX } from './edits-edges.ts';
+export { VARIANT_NAME_MAX, copyName } from './edits-variants.ts';
