@@ -12,6 +12,12 @@ export const MAX_JSON_DEPTH = 32;
 /** Keys that name or reach an object's prototype; a section file never needs them. */
 const HOSTILE_KEYS = new Set(['__proto__', 'constructor', 'prototype']);
 
+const LITERALS = [['true', true], ['false', false], ['null', null]] as const;
+/** A JSON number, matched where it starts (sticky). */
+const NUMBER = /-?(?:0|[1-9][0-9]*)(?:\.[0-9]+)?(?:[eE][+-]?[0-9]+)?/y;
+/** Characters that cannot follow a complete number. */
+const NUMBER_TAIL = new Set([...'0123456789.eE+-']);
+
 const ESCAPES: Record<string, string> = { '"': '"', '\\': '\\', '/': '/', b: '\b', f: '\f', n: '\n', r: '\r', t: '\t' };
 
 /** Parse `text` as one JSON value; throws DocumentError. A leading byte-order mark is skipped. */
@@ -46,7 +52,7 @@ class JsonReader {
     if (c === '[') return this.array(depth);
     if (c === '"') return this.string();
     if (c === '-' || (c >= '0' && c <= '9')) return this.number();
-    for (const [word, v] of [['true', true], ['false', false], ['null', null]] as const) {
+    for (const [word, v] of LITERALS) {
       if (this.text.startsWith(word, this.pos)) {
         this.pos += word.length;
         return v;
@@ -63,9 +69,10 @@ class JsonReader {
     for (;;) {
       if (this.text[this.pos] !== '"') this.fail('expected a field name in double quotes');
       const key = this.string();
-      const keyPath = formatPath([...this.path, key]);
-      if (HOSTILE_KEYS.has(key)) throw documentError(keyPath, `the field name "${key}" is not allowed in a section file`);
-      if (Object.prototype.hasOwnProperty.call(out, key)) throw documentError(keyPath, 'appears twice in the same object');
+      if (HOSTILE_KEYS.has(key)) {
+        throw documentError(formatPath([...this.path, key]), `the field name "${key}" is not allowed in a section file`);
+      }
+      if (Object.prototype.hasOwnProperty.call(out, key)) throw documentError(formatPath([...this.path, key]), 'appears twice in the same object');
       this.skipSpace();
       if (!this.eat(':')) this.fail(`expected ':' after the field name "${key}"`);
       this.skipSpace();
@@ -144,16 +151,12 @@ class JsonReader {
   }
 
   private number(): number {
-    const match = /-?(?:0|[1-9][0-9]*)(?:\.[0-9]+)?(?:[eE][+-]?[0-9]+)?/y;
-    match.lastIndex = this.pos;
-    const found = match.exec(this.text);
+    NUMBER.lastIndex = this.pos;
+    const found = NUMBER.exec(this.text);
     if (found === null) this.fail('a number is malformed');
-    const after = this.text[this.pos + found[0].length];
-    if (after !== undefined && /[0-9.eE+\-]/.test(after)) {
-      this.pos += found[0].length;
-      this.fail('a number is malformed');
-    }
     this.pos += found[0].length;
+    // "1.5.2", "01" or "1e" would otherwise read as a number followed by junk; name the number instead.
+    if (NUMBER_TAIL.has(this.text[this.pos])) this.fail('a number is malformed');
     return Number(found[0]);
   }
 

@@ -20,7 +20,7 @@ function write(value: unknown, indent: string): string {
 /** -0 is written as -0 so that a save and load gives back exactly the same numbers. */
 function writeNumber(n: number): string {
   if (!Number.isFinite(n)) throw new TypeError(`cannot write ${n} as JSON`);
-  return Object.is(n, -0) ? '-0' : JSON.stringify(n);
+  return Object.is(n, -0) ? '-0' : String(n); // String and JSON.stringify agree on every other finite number
 }
 
 function writeArray(items: readonly unknown[], indent: string): string {
@@ -41,11 +41,11 @@ function writeObject(record: Record<string, unknown>, indent: string): string {
   if (keys.length === 0) return '{}';
   // A small flat record (a vertex, an edge) reads best on one line: { "at": [12.5, 40] }.
   if (keys.every((key) => isFlat(record[key]))) {
-    const line = `{ ${keys.map((key) => `${JSON.stringify(key)}: ${write(record[key], indent)}`).join(', ')} }`;
+    const line = `{ ${keys.map((key) => `${quoteKey(key)}: ${write(record[key], indent)}`).join(', ')} }`;
     if (indent.length + line.length <= LINE_WIDTH) return line;
   }
   const inner = indent + INDENT;
-  const fields = keys.map((key) => `${inner}${JSON.stringify(key)}: ${write(record[key], inner)}`);
+  const fields = keys.map((key) => `${inner}${quoteKey(key)}: ${write(record[key], inner)}`);
   return `{\n${fields.join(',\n')}\n${indent}}`;
 }
 
@@ -57,4 +57,15 @@ function isFlat(value: unknown): boolean {
 
 function isPoint(value: unknown): boolean {
   return Array.isArray(value) && value.every((item) => typeof item === 'number');
+}
+
+/** Field names repeat thousands of times in a big section; quote each once. */
+const quotedKeys = new Map<string, string>();
+function quoteKey(key: string): string {
+  let quoted = quotedKeys.get(key);
+  if (quoted === undefined) {
+    quoted = JSON.stringify(key);
+    if (quotedKeys.size < 256) quotedKeys.set(key, quoted);
+  }
+  return quoted;
 }
