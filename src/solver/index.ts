@@ -11,4 +11,4 @@ export { buildMultigrid, applyMultigrid, type Multigrid, type MultigridOptions }
 export { pcg, type PcgOptions, type PcgReport } from './pcg.ts';
 export { warmStartGuess } from './warm-start.ts';
 export { stationFluxes, worstImbalance, STATION_COUNT } from './stations-flux.ts';
-export { sharpConvexCorners, peakSpeed, SHARP_TURN, CORNER_CLEARANCE_CELLS, type SpeedPeak } from './velocity-peak.ts';
+export { sharpConvexCorners, peakSpeed, SHARP_TURN, CORNER_CLEARANCE_CELLS, CORNER_CLEARANCE_SHARE, type SpeedPeak } from './velocity-peak.ts';

@@ -12,12 +12,16 @@ export interface SpeedPeak {
 export const SHARP_TURN = (20 * Math.PI) / 180;
 
 /**
- * Cells within this many cell sizes of a sharp convex corner are left out of the peak. At a corner where
- * the fluid turns through an angle alpha > 180 deg the ideal speed grows like r^(pi/alpha - 1) without
- * bound, so the value in the corner cell is a property of the grid (it rises as the grid is refined,
- * like h^(-1/3) at a square outside corner), not of the port; reporting it would hide every real peak.
+ * Cells closer to a sharp convex corner than CORNER_CLEARANCE_CELLS cell sizes or CORNER_CLEARANCE_SHARE of the
+ * grid's diagonal, whichever is larger, are left out of the peak. At a corner where the fluid turns through
+ * an angle alpha > 180 deg the ideal speed grows like r^(pi/alpha - 1) without bound (r^(-1/3) at a square
+ * outside corner), so the largest value next to it is a property of the grid, not of the port: a clearance of
+ * a fixed number of cells would still let it grow by 2^(1/3) per halving of the cell size. A clearance of
+ * fixed length makes the peak converge as the grid is refined. 1% is a free choice: small against a port's
+ * passages, large against the cells of a standard grid. The real flow separates at such an edge anyway.
  */
 export const CORNER_CLEARANCE_CELLS = 2;
+export const CORNER_CLEARANCE_SHARE = 0.01;
 
 /**
  * Vertices where the wall turns away from the fluid by more than SHARP_TURN: x, y pairs, length units.
@@ -55,7 +59,7 @@ function collect(ring: Ring, outer: boolean, out: number[]): void {
 
 /**
  * Largest speed ratio over cells with fluid fraction >= 0.5 (partial cells hold a poorly placed centre)
- * that lie further than CORNER_CLEARANCE_CELLS cell sizes from every point in `corners`.
+ * that lie outside the corner clearance (see CORNER_CLEARANCE_SHARE) of every point in `corners`.
  * @param speed speed ratio, i + j * nx, NaN outside the fluid.
  * @param corners x, y pairs (sharpConvexCorners).
  */
@@ -84,14 +88,14 @@ export function peakSpeed(
 function cornerMask(grid: { nx: number; ny: number; h: number; x0: number; y0: number }, corners: Float64Array): Uint8Array {
   const { nx, ny, h, x0, y0 } = grid;
   const out = new Uint8Array(nx * ny);
-  const radius = CORNER_CLEARANCE_CELLS * h;
+  const radiusCells = Math.max(CORNER_CLEARANCE_CELLS, CORNER_CLEARANCE_SHARE * Math.hypot(nx, ny));
+  const reach = Math.ceil(radiusCells) + 1;
   for (let c = 0; c < corners.length; c += 2) {
     const ci = (corners[c] - x0) / h - 0.5;
     const cj = (corners[c + 1] - y0) / h - 0.5;
-    const reach = Math.ceil(CORNER_CLEARANCE_CELLS) + 1;
     for (let j = Math.max(0, Math.floor(cj) - reach); j <= Math.min(ny - 1, Math.ceil(cj) + reach); j++) {
       for (let i = Math.max(0, Math.floor(ci) - reach); i <= Math.min(nx - 1, Math.ceil(ci) + reach); i++) {
-        if (Math.hypot(i - ci, j - cj) * h <= radius) out[i + j * nx] = 1;
+        if (Math.hypot(i - ci, j - cj) <= radiusCells) out[i + j * nx] = 1;
       }
     }
   }
