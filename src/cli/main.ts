@@ -69,11 +69,11 @@ function usage(commands: readonly Command[], write: (line: string) => void): voi
   write('Portwright: ideal-flow checks for cylinder-head port sections.');
   write('');
   write('usage: portwright COMMAND [ARGUMENTS]');
+  write('       portwright COMMAND --help    how to use one command');
   write('');
   write('commands:');
   const width = Math.max(...commands.map((c) => `${c.name} ${c.args}`.length));
   for (const c of commands) write(`  ${`${c.name} ${c.args}`.padEnd(width)}  ${c.summary}`);
   write('');
-  write(`  portwright COMMAND --help   show how to use one command`);
   write('exit codes: 0 all good, 1 a problem you can fix (file, arguments), 2 a fault in Portwright');
 }
