@@ -6,7 +6,7 @@ import { warmStartGuess } from '../../src/solver/warm-start.ts';
 import { channelGrid, fluidMask } from './hand-grids.ts';
 import { bend } from './rasterise-shapes.ts';
 
-const fieldOf = (r: SolveResult): PotentialField => ({ ...r.grid, phi: r.phi });
+const fieldOf = (r: Pick<SolveResult, 'grid' | 'phi'>): PotentialField => ({ ...r.grid, phi: r.phi });
 
 describe('warmStartGuess', () => {
   it('reproduces a linear potential exactly from a coarser grid (bilinear), clamps to 0..1, zeroes excluded cells', () => {
