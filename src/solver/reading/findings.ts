@@ -7,15 +7,18 @@ import { lengthText, opening, percentText, ratioText } from './wording.ts';
 const SLOW_SHARE_WORTH_TELLING = 0.01;
 
 /**
- * Ranked findings. Scores order the list and are a judgement, not physics: a likely detachment first (more for a
- * bigger pressure climb after the peak), then a large slow share, the tightest station, over-wide stations and the
- * fastest wall. `h` is the grid's cell size (document units), the smallest zoom radius worth giving.
+ * Ranked findings. Scores order the list and are a judgement, not physics: a likely detachment on a port wall first
+ * (higher for a bigger pressure climb after the peak, measured in inlet dynamic heads and full at 4), then a large
+ * slow share, the tightest station, over-wide stations and the fastest port wall. Walls past the valve and the valve
+ * head itself are read but not told. `h` is the grid's cell size (document units), the smallest zoom radius given.
  */
 export function findings(reading: Omit<FlowReading, 'findings'>, settings: ReadingSettings, h: number): Finding[] {
   const u = settings.units;
   const out: Finding[] = [];
+  // walls past the valve (deck, test bore) and round the valve head are read but not told: they are not port metal
+  const portWalls = reading.walls.filter((w) => w.inPort);
   for (const d of reading.detachments) {
-    const wall = reading.walls.find((w) => w.name === d.name);
+    const wall = portWalls.find((w) => w.name === d.name);
     if (d.detachment && wall) out.push(detachmentFinding(d, wall, settings, h));
   }
   const { tightest, slow, stations } = reading;
@@ -54,7 +57,7 @@ export function findings(reading: Omit<FlowReading, 'findings'>, settings: Readi
       radius: Math.max(0.6 * run.width, 4 * h),
     });
   }
-  const fastest = reading.walls.reduce<WallReading | null>((best, w) => (best && best.peak.speedRatio >= w.peak.speedRatio ? best : w), null);
+  const fastest = portWalls.reduce<WallReading | null>((best, w) => (best && best.peak.speedRatio >= w.peak.speedRatio ? best : w), null);
   if (fastest) {
     out.push({
       score: 0.2 + 0.05 * Math.min(2, fastest.peak.speedRatio),
@@ -68,21 +71,35 @@ export function findings(reading: Omit<FlowReading, 'findings'>, settings: Readi
   return out.sort((a, b) => b.score - a.score);
 }
 
+/**
+ * The detachment told against the fall that causes it: the highest speed on the wall up to the detachment, and the
+ * lowest after that until the flow is likely back on the wall (or the wall ends).
+ */
 function detachmentFinding(d: WallDetachmentReading, wall: WallReading, settings: ReadingSettings, h: number): Finding {
   const at = d.detachment!;
   const u = settings.units;
-  const past = at.s - wall.peak.s;
-  const where = past >= 0 ? `${lengthText(past, u)} past the speed peak` : `${lengthText(-past, u)} before the speed peak`;
+  const { samples } = wall;
+  const count = samples.length / 4;
+  const until = d.offWall.length > 0 ? d.offWall[0][1] : Infinity;
+  let peak = -1;
+  for (let q = 0; q < count && samples[4 * q + 2] <= at.s; q++) if (peak < 0 || samples[4 * q + 3] > samples[4 * peak + 3]) peak = q;
+  peak = Math.max(peak, 0);
+  let low = peak;
+  for (let q = peak + 1; q < count && samples[4 * q + 2] <= until; q++) if (samples[4 * q + 3] < samples[4 * low + 3]) low = q;
+  const top = samples[4 * peak + 3], bottom = samples[4 * low + 3];
+  const past = Math.max(0, at.s - samples[4 * peak + 2]);
   const off = d.offWall.length > 0 ? d.offWall[0][1] - d.offWall[0][0] : 0;
   const stretch = off > 0 ? ` and likely stays off for ${lengthText(off, u)}` : '';
+  // the pressure the layer had to climb, in inlet dynamic heads: (U_peak^2 - U_low^2) / U_inlet^2
+  const climb = top * top - bottom * bottom;
   return {
-    score: 0.7 + 0.3 * wall.pressureRecovered,
+    score: 0.7 + 0.3 * Math.min(1, climb / 4),
     kind: 'detachment',
-    text: `${opening(d.name)}: flow likely leaves the wall ${where}${stretch}; speed ratio falls from ` +
-      `${ratioText(wall.peak.speedRatio)} to ${ratioText(wall.low.speedRatio)}`,
+    text: `${opening(d.name)}: flow likely leaves the wall ${lengthText(past, u)} past the speed peak${stretch}; ` +
+      `speed ratio falls from ${ratioText(top)} to ${ratioText(bottom)}`,
     x: at.x,
     y: at.y,
-    radius: Math.max(4 * h, Math.abs(past), 0.5 * off),
+    radius: Math.max(4 * h, past, 0.5 * off),
   };
 }
 

@@ -1,6 +1,6 @@
 /** Flow reading: turns a solved potential into advice a porter can act on (stations, slow zones, walls, findings). */
 import type { FlowDomain, SolveResult } from '../types.ts';
-import { wallDetachment } from './detachment.ts';
+import { wallDetachments } from './detachment.ts';
 import { extendedPhi } from './field.ts';
 import { findings } from './findings.ts';
 import { readingSettings } from './options.ts';
@@ -33,14 +33,15 @@ export function readFlow(domain: FlowDomain, result: SolveResult, options: Readi
   const stations = buildStations(input, evenLevels(settings.stationCount));
   const valvePhi = valvePotential(domain, grid, phi, settings.valveIslandName);
   const paths = downstreamWalls(result.walls, grid, phi);
+  const valve = valvePhi === null ? null : { phi: valvePhi, name: settings.valveIslandName };
   const partial = {
     stations,
     valvePhi,
     tightest: tightestStation(stations, valvePhi),
     slow: slowZones(grid, result.phi, result.speedRatio, stations, settings.slowFraction, valvePhi),
     overWide: overWideStations(stations, valvePhi, settings.overWideThreshold, settings.overWideWindow),
-    walls: paths.map(readWall).filter((w): w is WallReading => w !== null),
-    detachments: paths.map((path) => wallDetachment(path, settings)),
+    walls: paths.map((path) => readWall(path, valve)).filter((w): w is WallReading => w !== null),
+    detachments: wallDetachments(paths, settings),
     streamlines: traceStreamlines(domain, grid, result.phi, index, settings.streamlineCount),
   };
   return { ...partial, findings: findings(partial, settings, grid.h) };

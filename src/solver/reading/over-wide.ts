@@ -21,13 +21,26 @@ export function overWideStations(stations: readonly Station[], valvePhi: number 
   return out;
 }
 
-/** Running maximum of the running minimum over k - half .. k + half (windows cut short at the ends). */
+/**
+ * Running maximum of the running minimum over k - half .. k + half. The sequence is first extended at each end by
+ * its point reflection (w[-m] = 2 w[0] - w[m]), so a straight taper runs on past the ends and is kept exactly;
+ * without that the shortened end windows would pull the envelope down at the first and last stations. A bulge at the
+ * very end looks the same as a trend there and is not flagged.
+ */
 export function opening(values: readonly number[], half: number): number[] {
+  const n = values.length;
+  if (n === 0) return [];
+  const padded = Array.from({ length: n + 2 * half }, (_, p) => {
+    const k = p - half;
+    if (k < 0) return 2 * values[0] - values[Math.min(n - 1, -k)];
+    if (k >= n) return 2 * values[n - 1] - values[Math.max(0, 2 * (n - 1) - k)];
+    return values[k];
+  });
   const slide = (input: readonly number[], pick: (a: number, b: number) => number): number[] =>
     input.map((_, k) => {
       let v = input[k];
       for (let m = Math.max(0, k - half); m <= Math.min(input.length - 1, k + half); m++) v = pick(v, input[m]);
       return v;
     });
-  return slide(slide(values, Math.min), Math.max);
+  return slide(slide(padded, Math.min), Math.max).slice(half, half + n);
 }

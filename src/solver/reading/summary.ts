@@ -1,5 +1,5 @@
 /** A JSON-ready digest of a flow reading, for the headless command's --json output. */
-import type { FlowReading } from './types.ts';
+import type { DetachmentMethod, FlowReading } from './types.ts';
 
 /** Plain numbers and strings only; every number rounded to six significant figures so that output is stable. */
 export interface ReadingSummary {
@@ -13,7 +13,7 @@ export interface ReadingSummary {
     name: string;
     peakSpeedRatio: number;
     pressureRecovered: number;
-    detachment: { s: number; x: number; y: number; method: 'thwaites' | 'head'; shapeFactor: number } | null;
+    detachment: { s: number; x: number; y: number; method: DetachmentMethod; shapeFactor: number } | null;
   }[];
   readonly findings: string[];
 }

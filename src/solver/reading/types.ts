@@ -105,6 +105,8 @@ export interface WallReading {
   readonly name: string;
   /** Samples in downstream order: x, y, s (from the upstream end), speed ratio; 4 numbers a sample. */
   readonly samples: Float64Array;
+  /** True when the wall starts ahead of the valve (upstream end above the valve head's potential), or there is no valve. */
+  readonly inPort: boolean;
   /** Highest speed ratio on the wall and where. */
   readonly peak: WallPoint & { readonly speedRatio: number };
   /** Lowest speed ratio downstream of the peak and where (the peak itself when nothing downstream is slower). */
@@ -115,10 +117,16 @@ export interface WallReading {
   readonly pressureRecovered: number;
 }
 
+/** Which test found the detachment: Thwaites (laminar), Head's shape-factor limit or Stratford's criterion (turbulent). */
+export type DetachmentMethod = 'thwaites' | 'head' | 'stratford';
+
 export interface WallDetachmentReading {
   readonly name: string;
-  /** Where the layer first leaves the wall (document units), or null when it stays on. */
-  readonly detachment: (WallPoint & { readonly method: 'thwaites' | 'head'; readonly shapeFactor: number }) | null;
+  /**
+   * Where the layer first leaves the wall (document units), or null when it stays on: the earlier of the march's
+   * detachment (Thwaites or Head) and Stratford's point. shapeFactor is the marched H there.
+   */
+  readonly detachment: (WallPoint & { readonly method: DetachmentMethod; readonly shapeFactor: number }) | null;
   /** Stratford's separation point (a second opinion), or null. */
   readonly stratford: WallPoint | null;
   /** Stretches [sStart, sEnd] (document units from the upstream end) where the flow is likely off the wall. */

@@ -5,8 +5,14 @@ import { sampleCells } from './field.ts';
 /** One wall read downstream. */
 export interface WallPath {
   readonly name: string;
+  /** Name of the wall (run of samples) the path comes from; differs from `name` only for a split closed wall. */
+  readonly wall: string;
   /** x, y, s (from the upstream end, document units), speed ratio; 4 numbers a sample, downstream order */
   readonly samples: Float64Array;
+  /** True when the path starts where the flow divides on an island (a stagnation point): its layer is born there. */
+  readonly fromStagnation: boolean;
+  /** Potential at the upstream end. */
+  readonly upstreamPhi: number;
 }
 
 /**
@@ -24,7 +30,11 @@ export function downstreamWalls(walls: readonly WallSpeeds[], grid: CutGrid, phi
     if (count < 2) continue;
     const potential = Float64Array.from({ length: count }, (_, q) => sampleCells(grid, phi, wall.samples[4 * q], wall.samples[4 * q + 1]));
     if (isClosed(wall.samples) && count >= 4) out.push(...splitClosed(wall, potential));
-    else out.push({ name: wall.name, samples: potential[count - 1] > potential[0] ? reorder(wall.samples, range(count - 1, 0)) : wall.samples });
+    else {
+      const flip = potential[count - 1] > potential[0];
+      const samples = flip ? reorder(wall.samples, range(count - 1, 0)) : wall.samples;
+      out.push({ name: wall.name, wall: wall.name, samples, fromStagnation: false, upstreamPhi: flip ? potential[count - 1] : potential[0] });
+    }
   }
   return out;
 }
@@ -42,18 +52,23 @@ function splitClosed(wall: WallSpeeds, potential: Float64Array): WallPath[] {
     if (potential[q] > potential[top]) top = q;
     if (potential[q] < potential[bottom]) bottom = q;
   }
-  if (top === bottom) return [{ name: wall.name, samples: wall.samples }];
+  if (top === bottom) return [{ name: wall.name, wall: wall.name, samples: wall.samples, fromStagnation: false, upstreamPhi: potential[0] }];
   // indices unrolled over two turns of the ring, so a path may run past sample 0
   const forward = range(top, bottom > top ? bottom : bottom + cyc);
   const backward = range(top + cyc, bottom < top ? bottom + cyc : bottom);
   const s = wall.samples;
   const dx = s[4 * bottom] - s[4 * top], dy = s[4 * bottom + 1] - s[4 * top + 1];
-  const side = (path: number[]): string => {
-    const mid = path[path.length >> 1] % cyc;
-    const cross = dx * (s[4 * mid + 1] - s[4 * top + 1]) - dy * (s[4 * mid] - s[4 * top]);
-    return cross > 0 ? 'left' : 'right';
-  };
-  return [forward, backward].map((path) => ({ name: `${wall.name}, ${side(path)} of the flow`, samples: reorder(s, path, cyc) }));
+  // how far a path bulges to the left of the line from the upstream to the downstream point (mean cross product)
+  const leftward = (path: number[]): number =>
+    path.reduce((sum, u) => sum + dx * (s[4 * (u % cyc) + 1] - s[4 * top + 1]) - dy * (s[4 * (u % cyc)] - s[4 * top]), 0) / path.length;
+  const forwardLeft = leftward(forward) >= leftward(backward);
+  return [forward, backward].map((path, k) => ({
+    name: `${wall.name}, ${(k === 0) === forwardLeft ? 'left' : 'right'} of the flow`,
+    wall: wall.name,
+    samples: reorder(s, path, cyc),
+    fromStagnation: true,
+    upstreamPhi: potential[top],
+  }));
 }
 
 /** Consecutive integers from a to b inclusive, counting down when b < a. */

@@ -6,9 +6,10 @@ import type { WallReading } from './types.ts';
  * Peak speed ratio on a wall (samples in downstream order, see WallPath) and the lowest ratio downstream of it.
  * fall = low / peak; pressure recovered Cp = 1 - (low / peak)^2, the rise in static pressure after the peak over
  * the peak's dynamic pressure (Bernoulli along the wall). Samples whose ratio is NaN are passed over.
- * Returns null for a wall with no usable sample.
+ * The wall is in the port when it is not the valve head and its upstream end lies ahead of the valve: a potential
+ * above `valve.phi` (every wall is, when there is no valve). Returns null for a wall with no usable sample.
  */
-export function readWall(path: WallPath): WallReading | null {
+export function readWall(path: WallPath, valve: { readonly phi: number; readonly name: string } | null = null): WallReading | null {
   const { samples } = path;
   const count = samples.length / 4;
   let peak = -1;
@@ -26,5 +27,7 @@ export function readWall(path: WallPath): WallReading | null {
   const top = at(peak);
   const bottom = at(low);
   const fall = top.speedRatio > 0 ? bottom.speedRatio / top.speedRatio : 1;
-  return { name: path.name, samples, peak: top, low: bottom, fall, pressureRecovered: 1 - fall * fall };
+  const onValve = valve !== null && (path.wall === valve.name || path.wall.startsWith(`${valve.name} (`));
+  const inPort = valve === null || (!onValve && path.upstreamPhi > valve.phi);
+  return { name: path.name, samples, inPort, peak: top, low: bottom, fall, pressureRecovered: 1 - fall * fall };
 }
