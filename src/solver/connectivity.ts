@@ -49,24 +49,29 @@ export function connectedCells(grid: CutGrid): Uint8Array {
 /** Marks `bit` on every cell reachable through open faces from a cell whose `seed` is positive; returns the count. */
 function flood(grid: CutGrid, seed: Float64Array, bit: number, reached: Uint8Array, stack: Int32Array): number {
   const { nx, openX, openY } = grid;
+  const strideX = nx + 1;
   let top = 0;
-  let count = 0;
-  const push = (c: number): void => {
-    if ((reached[c] & bit) !== 0) return;
-    reached[c] |= bit;
-    stack[top++] = c;
-    count++;
-  };
-  for (let c = 0; c < seed.length; c++) if (seed[c] > 0 && grid.cellFraction[c] > 0) push(c);
+  for (let c = 0; c < seed.length; c++) {
+    if (seed[c] > 0 && (reached[c] & bit) === 0) {
+      reached[c] |= bit;
+      stack[top++] = c;
+    }
+  }
+  let count = top;
   while (top > 0) {
     const c = stack[--top];
-    const i = c % nx;
-    const j = (c - i) / nx;
+    const j = Math.floor(c / nx);
+    const xFace = c + j; // x-face on the left of cell c: i + j * (nx + 1)
     // Rasterise guarantees a face is open only between two fluid cells, and never on the grid border.
-    if (openX[i + j * (nx + 1)] > 0) push(c - 1);
-    if (openX[i + 1 + j * (nx + 1)] > 0) push(c + 1);
-    if (openY[c] > 0) push(c - nx);
-    if (openY[c + nx] > 0) push(c + nx);
+    for (let side = 0; side < 4; side++) {
+      const open = side === 0 ? openX[xFace] : side === 1 ? openX[xFace + 1] : side === 2 ? openY[c] : openY[c + nx];
+      if (!(open > 0)) continue;
+      const next = side === 0 ? c - 1 : side === 1 ? c + 1 : side === 2 ? c - nx : c + nx;
+      if ((reached[next] & bit) !== 0) continue;
+      reached[next] |= bit;
+      stack[top++] = next;
+      count++;
+    }
   }
   return count;
 }

@@ -28,8 +28,9 @@ export interface Couplings {
  * cell centre to the piece's line along the inward normal. The flux Lb (phi_b - phi_c) / dn is exact
  * for a potential that varies linearly across the boundary, so a straight channel whose inlet and
  * outlet lie on grid lines (dn = h / 2) gets the exact linear solution.
+ * `fraction` is the cells' fluid fraction (row-major i + j * nx): cells without fluid get no coupling.
  */
-export function couplings(rings: readonly GridRing[], nx: number, ny: number): Couplings {
+export function couplings(rings: readonly GridRing[], fraction: Float64Array, nx: number, ny: number): Couplings {
   const inletCoupling = new Float64Array(nx * ny);
   const outletCoupling = new Float64Array(nx * ny);
   for (const { uv, ring, sense } of rings) {
@@ -53,6 +54,8 @@ export function couplings(rings: readonly GridRing[], nx: number, ny: number): C
         const vm = 0.5 * (va + vb);
         const i = clamp(Math.floor(um + NUDGE * nu), 0, nx - 1);
         const j = clamp(Math.floor(vm + NUDGE * nv), 0, ny - 1);
+        // A cell whose area rounded to 0 holds no fluid to couple (a sliver below rounding level).
+        if (fraction[i + j * nx] === 0) return;
         const dn = (i + 0.5 - um) * nu + (j + 0.5 - vm) * nv;
         target[i + j * nx] += piece / Math.max(dn, MIN_NORMAL_DISTANCE);
       });

@@ -16,7 +16,8 @@ export interface FaceFractions {
   readonly openY: Float64Array;
 }
 
-export function faceFractions(rings: readonly GridRing[], nx: number, ny: number): FaceFractions {
+/** Open fractions of every face; `fraction` is the cells' fluid fraction (row-major), used to close faces beside solid cells. */
+export function faceFractions(rings: readonly GridRing[], fraction: Float64Array, nx: number, ny: number): FaceFractions {
   const openX = new Float64Array((nx + 1) * ny);
   const openY = new Float64Array(nx * (ny + 1));
   const strideX = nx + 1;
@@ -40,26 +41,33 @@ export function faceFractions(rings: readonly GridRing[], nx: number, ny: number
     });
   }
   closeWallsOnLines(rings, addX, addY);
-  sumUpLines(openX, openY, nx, ny);
+  sumUpLines(openX, openY, fraction, nx, ny);
   return { openX, openY };
 }
 
-/** Turns the stored differences into open fractions: running sums up each u-line and along each v-line, tidied. */
-function sumUpLines(openX: Float64Array, openY: Float64Array, nx: number, ny: number): void {
+/**
+ * Turns the stored differences into open fractions: running sums up each u-line and along each v-line, tidied.
+ * A face beside a cell with no fluid is closed: only slivers below rounding level (a cell whose area
+ * rounded to 0 while the line still grazes the fluid) are affected, and they carry no flow.
+ */
+function sumUpLines(openX: Float64Array, openY: Float64Array, fraction: Float64Array, nx: number, ny: number): void {
   const tidy = tidyFraction;
   const strideX = nx + 1;
   const running = new Float64Array(strideX);
   for (let j = 0; j < ny; j++) {
+    const row = j * nx;
     for (let k = 0, f = j * strideX; k < strideX; k++, f++) {
       running[k] += openX[f];
-      openX[f] = tidy(running[k]);
+      const between = k > 0 && k < nx && fraction[row + k - 1] > 0 && fraction[row + k] > 0;
+      openX[f] = between ? tidy(running[k]) : 0;
     }
   }
   for (let m = 0; m <= ny; m++) {
     let along = 0;
-    for (let f = m * nx, end = f + nx; f < end; f++) {
+    for (let i = 0, f = m * nx; i < nx; i++, f++) {
       along += openY[f];
-      openY[f] = tidy(along);
+      const between = m > 0 && m < ny && fraction[f - nx] > 0 && fraction[f] > 0;
+      openY[f] = between ? tidy(along) : 0;
     }
   }
 }

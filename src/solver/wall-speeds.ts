@@ -45,7 +45,7 @@ export function wallSpeeds(
 }
 
 /** Groups each ring's wall segments into runs of one wall id; a run may wrap past the ring's first point. */
-export function wallRuns(domain: FlowDomain): WallRun[] {
+function wallRuns(domain: FlowDomain): WallRun[] {
   const runs: WallRun[] = [];
   const used = new Map<string, number>();
   let unnamed = 0;
