@@ -1,4 +1,5 @@
 /** Messages between the app and the solver workers: plain data, typed arrays transferred. */
+import type { FlowReading, ReadingOptions } from '../solver/reading/index.ts';
 import type { FlowDomain } from '../solver/types.ts';
 
 export interface SolveRequest {
@@ -11,6 +12,8 @@ export interface SolveRequest {
   readonly tolerance?: number;
   /** Start from the potential this worker computed last (any grid), if it has one. */
   readonly warmStart?: boolean;
+  /** Read the flow (stations, slow zones, detachment, streamlines, findings) with these options; null skips it. */
+  readonly reading?: ReadingOptions | null;
 }
 
 /** Speed-ratio samples along a wall: x, y, s, speed ratio per sample (4 numbers each). */
@@ -36,6 +39,10 @@ export interface FieldReply {
   readonly fluxImbalance: number;
   readonly peak: { readonly speedRatio: number; readonly x: number; readonly y: number };
   readonly walls: readonly WallSpeedsReply[];
+  /** Mean inlet speed at a unit potential drop (potential per length). */
+  readonly inletMeanSpeed: number;
+  /** The flow reading, when asked for. */
+  readonly reading: FlowReading | null;
   /** Time the worker spent, ms (measured outside the solver). */
   readonly workerMs: number;
 }

@@ -1,6 +1,8 @@
 /** The solver worker's API: a thin adapter from messages to the pure solver; it owns no physics. */
 import * as Comlink from 'comlink';
+import { readFlow } from '../solver/reading/index.ts';
 import { solveFlow } from '../solver/solve.ts';
+import type { FlowReading } from '../solver/reading/index.ts';
 import type { PotentialField, SolveResult } from '../solver/types.ts';
 import type { FailureReply, FieldReply, SolveReply, SolveRequest, SolverWorkerApi } from './protocol.ts';
 
@@ -24,7 +26,8 @@ export function createSolverApi(): SolverWorkerApi {
         });
         if (superseded()) return failure(request.id, 'superseded', 'A newer request replaced this one.');
         lastPotential = potentialOf(result);
-        return transferReply(toReply(request.id, result, performance.now() - started));
+        const reading = request.reading ? readFlow(request.domain, result, request.reading) : null;
+        return transferReply(toReply(request.id, result, reading, performance.now() - started));
       } catch (error) {
         return failureFrom(request.id, error);
       }
@@ -37,7 +40,7 @@ function potentialOf(result: SolveResult): PotentialField {
   return { nx, ny, h, x0, y0, phi: result.phi };
 }
 
-function toReply(id: number, result: SolveResult, workerMs: number): FieldReply {
+function toReply(id: number, result: SolveResult, reading: FlowReading | null, workerMs: number): FieldReply {
   const { nx, ny, h, x0, y0 } = result.grid;
   return {
     ok: true, id, nx, ny, h, x0, y0,
@@ -48,12 +51,16 @@ function toReply(id: number, result: SolveResult, workerMs: number): FieldReply 
     fluxImbalance: result.fluxImbalance,
     peak: result.peak,
     walls: result.walls.map((w) => ({ name: w.name, samples: Float64Array.from(w.samples) })),
+    inletMeanSpeed: result.inletMeanSpeed,
+    reading,
     workerMs,
   };
 }
 
 function transferReply(reply: FieldReply): SolveReply {
-  const buffers: ArrayBuffer[] = [reply.speedRatio.buffer as ArrayBuffer, ...reply.walls.map((w) => w.samples.buffer as ArrayBuffer)];
+  const arrays: ArrayBufferView[] = [reply.speedRatio, ...reply.walls.map((w) => w.samples)];
+  if (reply.reading) arrays.push(reply.reading.slow.mask, ...reply.reading.streamlines.map((s) => s.xy));
+  const buffers = [...new Set(arrays.map((a) => a.buffer as ArrayBuffer))];
   return Comlink.transfer(reply, buffers);
 }
 

@@ -1,0 +1,111 @@
+/** The worker API in Node over a MessageChannel: replies, transfers, newest-request-wins, typed failures. */
+import { readFileSync } from 'node:fs';
+import { Worker } from 'node:worker_threads';
+import * as Comlink from 'comlink';
+import nodeEndpoint from 'comlink/dist/esm/node-adapter.mjs';
+import { afterEach, describe, expect, it } from 'vitest';
+import { loadDocument } from '../../src/document/load.ts';
+import { defaultTolerance, sectionToDomain } from '../../src/geometry/index.ts';
+import type { FlowDomain } from '../../src/solver/types.ts';
+import { SolverPool } from '../../src/workers/pool.ts';
+import { createSolverApi } from '../../src/workers/solver-api.ts';
+import { SolverClient } from '../../src/workers/solver-client.ts';
+
+function sampleDomain(): FlowDomain {
+  const doc = loadDocument(readFileSync('samples/street-tight-short-side.json', 'utf8'));
+  const section = doc.variants[0].section;
+  return sectionToDomain(section, defaultTolerance(section));
+}
+
+/** A client whose worker is the API exposed on the other end of a MessageChannel. */
+function channelClient(): { client: SolverClient; close: () => void } {
+  const { port1, port2 } = new MessageChannel();
+  Comlink.expose(createSolverApi(), port1 as unknown as Comlink.Endpoint);
+  const client = new SolverClient(port2 as unknown as Comlink.Endpoint);
+  return { client, close: () => { client.dispose(); port1.close(); port2.close(); } };
+}
+
+const open: Array<() => void> = [];
+afterEach(() => open.splice(0).forEach((close) => close()));
+
+describe('solver worker API over a MessageChannel', () => {
+  it('solves a sample and sends the field back as a transferred Float32Array', async () => {
+    const { client, close } = channelClient();
+    open.push(close);
+    const domain = sampleDomain();
+    const reply = await client.solveLatest({ domain, targetCells: 20_000, reading: {} });
+    expect(reply?.ok).toBe(true);
+    if (!reply?.ok) return;
+    expect(reply.speedRatio).toBeInstanceOf(Float32Array);
+    expect(reply.speedRatio.length).toBe(reply.nx * reply.ny);
+    expect(reply.residual).toBeLessThan(1e-7);
+    expect(reply.peak.speedRatio).toBeGreaterThan(1);
+    expect(reply.walls.map((w) => w.name)).toContain('short side');
+    expect(reply.reading?.stations.length).toBeGreaterThan(10);
+    // the caller's domain was copied, not detached, by the transfer
+    expect(domain.outer.xy.length).toBeGreaterThan(0);
+  });
+
+  it('drops an older request when a newer one arrives before its result', async () => {
+    const { client, close } = channelClient();
+    open.push(close);
+    const domain = sampleDomain();
+    const first = client.solveLatest({ domain, targetCells: 40_000 });
+    const second = client.solveLatest({ domain, targetCells: 20_000 });
+    const third = client.solveLatest({ domain, targetCells: 10_000 });
+    const [a, b, c] = await Promise.all([first, second, third]);
+    expect(a).toBeNull();
+    expect(b).toBeNull();
+    expect(c?.ok).toBe(true);
+    if (c?.ok) expect(c.nx * c.ny).toBeLessThan(15_000);
+  });
+
+  it('stops a solve in flight at its next iteration when superseded (shared cancel flag)', async () => {
+    // A real second thread: in one thread the first solve would finish before the second request is even sent.
+    const worker = new Worker(new URL('./node-solver-worker.mjs', import.meta.url));
+    const client = new SolverClient(nodeEndpoint(worker));
+    open.push(() => { client.dispose(); void worker.terminate(); });
+    expect(client.canInterrupt).toBe(true);
+    const domain = sampleDomain();
+    // A tolerance no solve reaches keeps the first request iterating until it is superseded.
+    await client.ready;
+    const started = performance.now();
+    const slow = client.solveLatest({ domain, targetCells: 1_000_000, tolerance: 1e-30 });
+    await new Promise((r) => setTimeout(r, 300));
+    const fast = await client.solveLatest({ domain, targetCells: 5_000 });
+    expect(await slow).toBeNull();
+    expect(fast?.ok).toBe(true);
+    console.log(`superseded 1M-cell solve gave way after ${(performance.now() - started).toFixed(0)} ms in all`);
+  });
+
+  it('returns a blocked passage as a typed failure with a plain message', async () => {
+    const { client, close } = channelClient();
+    open.push(close);
+    const domain = sampleDomain();
+    const walled: FlowDomain = { ...domain, outer: { ...domain.outer, marks: new Uint8Array(domain.outer.marks.length) } };
+    const reply = await client.solveLatest({ domain: walled, targetCells: 5_000 });
+    expect(reply?.ok).toBe(false);
+    if (reply && !reply.ok) {
+      expect(reply.code).toBe('no-inlet');
+      expect(reply.message).toMatch(/inlet/i);
+    }
+  });
+
+  it('sweeps jobs across a pool and keeps their order', async () => {
+    const channels: Array<{ port1: MessagePort; port2: MessagePort }> = [];
+    const pool = new SolverPool(() => {
+      const ch = new MessageChannel();
+      channels.push(ch);
+      Comlink.expose(createSolverApi(), ch.port1 as unknown as Comlink.Endpoint);
+      return ch.port2 as unknown as Comlink.Endpoint;
+    }, 3);
+    open.push(() => { pool.dispose(); channels.forEach((c) => { c.port1.close(); c.port2.close(); }); });
+    const domain = sampleDomain();
+    const sizes = [4_000, 8_000, 12_000, 16_000];
+    const progress: number[] = [];
+    const replies = await pool.sweep(sizes.map((targetCells) => ({ domain, targetCells })), (done) => progress.push(done));
+    expect(progress).toEqual([1, 2, 3, 4]);
+    const cells = replies.map((r) => (r.ok ? r.nx * r.ny : 0));
+    for (let k = 1; k < cells.length; k++) expect(cells[k]).toBeGreaterThan(cells[k - 1]);
+  });
+});
