@@ -4,7 +4,7 @@ import { FlowSetupError } from '../../src/solver/errors.ts';
 import { rasterise } from '../../src/solver/rasterise.ts';
 import { MARK_INLET, MARK_OUTLET, MARK_WALL } from '../../src/solver/types.ts';
 import type { CutGrid } from '../../src/solver/types.ts';
-import { domainOf, ringOf } from './rasterise-shapes.ts';
+import { domainOf, portSection, ringOf } from './rasterise-shapes.ts';
 import type { Pt } from './rasterise-shapes.ts';
 
 const W = MARK_WALL;
@@ -97,5 +97,29 @@ describe('connectedCells: mask of solved cells', () => {
     expect([face(2, 0), face(2, 1), face(2, 2), face(2, 3), face(1, 0), face(3, 2)]).toEqual([0, 0, 0, 1, 1, 1]);
     const mask = connectedCells(grid);
     expect(mask.reduce((a, b) => a + b, 0)).toBe(16);
+  });
+});
+
+describe('connectedCells: a port with its valve', () => {
+  it('shut on its seat is blocked, and the place given is at the valve edge', () => {
+    const grid = rasterise(portSection(0), 200_000);
+    const error = blockedError(grid);
+    expect(error.code).toBe('blocked');
+    const [x, y] = error.where!;
+    const nearEdge = (x > 50 && x < 65) || (x > 95 && x < 110);
+    expect(nearEdge).toBe(true);
+    expect(Math.abs(y)).toBeLessThan(4);
+  });
+
+  it('lifted 1 mm, the port, gap and bore are one passage', () => {
+    const grid = rasterise(portSection(-1), 200_000);
+    const mask = connectedCells(grid);
+    let fluid = 0;
+    let solved = 0;
+    for (let c = 0; c < mask.length; c++) {
+      if (grid.cellFraction[c] > 0) fluid++;
+      solved += mask[c];
+    }
+    expect(solved).toBe(fluid);
   });
 });

@@ -66,3 +66,43 @@ export function bend(r1: number, r2: number, arcSegments: number): FlowDomain {
   }
   return domainOf(ringOf(pts, marks, ids), [], ['long side', 'short side']);
 }
+
+/**
+ * An invented intake port section (mm): inlet on x = 0 (y 40..80), a floor with a 20 mm short-side radius,
+ * a roof on a 60 mm radius, the port opening onto the deck (y = 0) between x = 60 and x = 100, and a test bore
+ * 90 wide and 60 deep below with the outlet at its far end (the deck underside and bore sides are "bore wall"). The valve head is an island: a 50 mm wide
+ * disc section, 3 mm thick, its face at y = `valveFaceY` (0 = shut on the deck edges), chamfered below.
+ */
+export function portSection(valveFaceY: number, arcSegments = 60): FlowDomain {
+  const pts: Pt[] = [];
+  const marks: number[] = [];
+  const ids: number[] = [];
+  const add = (p: Pt, mark: number, id: number) => {
+    pts.push(p);
+    marks.push(mark);
+    ids.push(id);
+  };
+  add([0, 40], MARK_WALL, 0);
+  for (let k = 0; k < arcSegments; k++) {
+    const t = Math.PI / 2 - (k / arcSegments) * (Math.PI / 2);
+    add([40 + 20 * Math.cos(t), 20 + 20 * Math.sin(t)], MARK_WALL, 1);
+  }
+  add([60, 20], MARK_WALL, 2);
+  add([60, 0], MARK_WALL, 3);
+  add([30, 0], MARK_WALL, 3);
+  add([30, -60], MARK_OUTLET, -1);
+  add([120, -60], MARK_WALL, 3);
+  add([120, 0], MARK_WALL, 3);
+  add([100, 0], MARK_WALL, 4);
+  for (let k = 0; k < 2 * arcSegments; k++) {
+    const t = (k / (2 * arcSegments)) * (Math.PI / 2);
+    add([40 + 60 * Math.cos(t), 20 + 60 * Math.sin(t)], MARK_WALL, 4);
+  }
+  add([40, 80], MARK_WALL, 4);
+  add([0, 80], MARK_INLET, -1);
+  const y = valveFaceY;
+  // Clockwise, as islands are.
+  const valve: Pt[] = [[55, y], [105, y], [105, y - 1.5], [102, y - 3], [58, y - 3], [55, y - 1.5]];
+  const names = ['floor', 'short side', 'throat', 'bore wall', 'roof', 'valve head'];
+  return domainOf(ringOf(pts, marks, ids), [ringOf(valve, undefined, valve.map(() => 5))], names);
+}

@@ -3,7 +3,7 @@ import { FlowSetupError, MAX_CELLS } from '../../src/solver/errors.ts';
 import { rasterise } from '../../src/solver/rasterise.ts';
 import { MARK_INLET, MARK_OUTLET, MARK_WALL } from '../../src/solver/types.ts';
 import type { CutGrid, FlowDomain } from '../../src/solver/types.ts';
-import { channel, domainOf, polygonArea, ringOf } from './rasterise-shapes.ts';
+import { channel, domainOf, polygonArea, portSection, ringOf } from './rasterise-shapes.ts';
 import type { Pt } from './rasterise-shapes.ts';
 
 const W = MARK_WALL;
@@ -78,6 +78,15 @@ describe('rasterise: exact area fractions (sum of fraction * h^2 = polygon area)
     const yFace = (x: number, y: number) => grid.openY[x + 1 + (y + 1) * grid.nx];
     expect([xFace(0, 0), xFace(1, 0), xFace(3, 2), xFace(3, 1), xFace(6, 0)]).toEqual([0, 1, 0, 1, 0]);
     expect([yFace(4, 2), yFace(4, 1), yFace(1, 4), yFace(1, 3), yFace(2, 0)]).toEqual([0, 1, 0, 1, 0]);
+  });
+
+  it('port section with its valve island, at coarse and fine grids', () => {
+    const domain = portSection(-1);
+    const points = (xy: Float64Array): Pt[] => Array.from({ length: xy.length / 2 }, (_, k): Pt => [xy[2 * k], xy[2 * k + 1]]);
+    const area = polygonArea(points(domain.outer.xy)) + polygonArea(points(domain.islands[0].xy));
+    for (const target of [5000, 300_000]) {
+      expect(Math.abs(fluidArea(rasterise(domain, target)) / area - 1)).toBeLessThan(1e-9);
+    }
   });
 
   it('does not depend on the rings running the expected way round', () => {

@@ -2,7 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { rasterise } from '../../src/solver/rasterise.ts';
 import { wallSpeeds } from '../../src/solver/wall-speeds.ts';
 import type { CutGrid, FlowDomain, WallSpeeds } from '../../src/solver/types.ts';
-import { bend, channel, domainOf, ringOf } from './rasterise-shapes.ts';
+import { bend, channel, domainOf, portSection, ringOf } from './rasterise-shapes.ts';
+import { connectedCells } from '../../src/solver/connectivity.ts';
 import type { Pt } from './rasterise-shapes.ts';
 import { MARK_INLET, MARK_OUTLET, MARK_WALL } from '../../src/solver/types.ts';
 
@@ -163,6 +164,18 @@ describe('wallSpeeds: walls, names and samples', () => {
     expect(isle.samples[4 * (m - 1) + 2]).toBeCloseTo(6, 12);
     expect(isle.samples[4 * (m - 1)]).toBeCloseTo(4, 12);
     expect(isle.samples[4 * (m - 1) + 1]).toBeCloseTo(1.5, 12);
+  });
+
+  it('gives a finite speed at every sample of a port section, corners and valve gap included', () => {
+    const port = portSection(-1);
+    const portGrid = rasterise(port, 100_000);
+    const mask = connectedCells(portGrid);
+    const field = sampleOnCells(portGrid, (x, y) => x - 2 * y).map((v, c) => (mask[c] ? v : NaN));
+    const portWalls = wallSpeeds(port, portGrid, field, 1);
+    expect(portWalls.map((w) => w.name)).toEqual(['floor', 'short side', 'throat', 'bore wall', 'bore wall (2)', 'roof', 'valve head']);
+    for (const w of portWalls) {
+      for (let q = 0; q < w.samples.length / 4; q++) expect(Number.isFinite(w.samples[4 * q + 3])).toBe(true);
+    }
   });
 
   it('gives NaN where no solved cell lies next to the wall', () => {
