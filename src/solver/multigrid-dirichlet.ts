@@ -15,7 +15,7 @@ export interface TransferPair {
   /** Coarse neighbour towards each fine column / row (see neighbourIndex). */
   readonly colN: Int32Array;
   readonly rowN: Int32Array;
-  /** Active fine cells with a Dirichlet coupling, i + j * nx. */
+  /** Active fine cells with a Dirichlet coupling, i + j * nx, ascending. */
   readonly dirichlet: Int32Array;
 }
 
@@ -33,7 +33,7 @@ export function dirichletCells(s: Stencil): Int32Array {
   return Int32Array.from(out);
 }
 
-/** Bilinear prolongation at fine cell (i, j) from the coarse padded vector (same weights as prolongAddBilinear). */
+/** Bilinear prolongation at fine cell (i, j) from the coarse padded vector (same weights as prolongRow). */
 function bilinearAt(t: TransferPair, i: number, j: number, coarseX: Float64Array): number {
   const ncx = t.coarse.nx;
   const act = t.coarse.active;
@@ -87,34 +87,27 @@ function forNeighbours(s: Stencil, k: number, visit: (ni: number, nj: number, w:
   if (faceY[k + nx] !== 0) visit(i, j + 1, faceY[k + nx] / d);
 }
 
-/** After prolongAddBilinear: replaces the bilinear value at Dirichlet cells by the operator-dependent one. */
-export function correctProlongDirichlet(t: TransferPair, x: Float64Array, coarseX: Float64Array): void {
+/** After prolongRow: replaces the bilinear value at Dirichlet cell k by the operator-dependent one. */
+export function correctProlongCell(t: TransferPair, x: Float64Array, coarseX: Float64Array, k: number): void {
   const nx = t.fine.nx;
-  for (let m = 0; m < t.dirichlet.length; m++) {
-    const k = t.dirichlet[m];
-    const i = k % nx;
-    const j = (k - i) / nx;
-    let value = 0;
-    forNeighbours(t.fine, k, (ni, nj, w) => { value += w * bilinearAt(t, ni, nj, coarseX); });
-    x[k + nx] += value - bilinearAt(t, i, j, coarseX);
-  }
+  const i = k % nx;
+  const j = (k - i) / nx;
+  let value = 0;
+  forNeighbours(t.fine, k, (ni, nj, w) => { value += w * bilinearAt(t, ni, nj, coarseX); });
+  x[k + nx] += value - bilinearAt(t, i, j, coarseX);
 }
 
 /**
- * After restrictResidualBilinear: moves the Dirichlet cells' residual from their bilinear weights to the
- * operator-dependent ones (the transpose of correctProlongDirichlet).
- * @param x fine padded vector; @param b fine rhs, i + j * nx.
+ * After restrictRow: moves Dirichlet cell k's residual from its bilinear weights to the operator-dependent
+ * ones (the transpose of correctProlongCell). @param x fine padded vector; @param b fine rhs, i + j * nx.
  */
-export function correctRestrictDirichlet(t: TransferPair, x: Float64Array, b: Float64Array, coarseB: Float64Array): void {
+export function correctRestrictCell(t: TransferPair, x: Float64Array, b: Float64Array, coarseB: Float64Array, k: number): void {
   const { nx, diag, faceX, faceY } = t.fine;
-  for (let m = 0; m < t.dirichlet.length; m++) {
-    const k = t.dirichlet[m];
-    const i = k % nx;
-    const j = (k - i) / nx;
-    const v = k + nx;
-    const fx = k + j;
-    const r = b[k] - (diag[k] * x[v] - faceX[fx] * x[v - 1] - faceX[fx + 1] * x[v + 1] - faceY[k] * x[v - nx] - faceY[k + nx] * x[v + nx]);
-    scatterBilinear(t, i, j, -r, coarseB);
-    forNeighbours(t.fine, k, (ni, nj, w) => scatterBilinear(t, ni, nj, w * r, coarseB));
-  }
+  const i = k % nx;
+  const j = (k - i) / nx;
+  const v = k + nx;
+  const fx = k + j;
+  const r = b[k] - (diag[k] * x[v] - faceX[fx] * x[v - 1] - faceX[fx + 1] * x[v + 1] - faceY[k] * x[v - nx] - faceY[k + nx] * x[v + nx]);
+  scatterBilinear(t, i, j, -r, coarseB);
+  forNeighbours(t.fine, k, (ni, nj, w) => scatterBilinear(t, ni, nj, w * r, coarseB));
 }

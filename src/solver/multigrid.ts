@@ -1,11 +1,10 @@
 /** Geometric multigrid V-cycle on masked cut-cell levels, used as the conjugate-gradient preconditioner. */
 import type { Stencil } from './assemble.ts';
-import { neighbourIndex, prolongAddBilinear, restrictResidualBilinear } from './multigrid-bilinear.ts';
+import { neighbourIndex, prolongRow, restrictRow } from './multigrid-bilinear.ts';
 import { COARSEST_MAX_CELLS, factorCoarsest, solveCoarsest, type CoarsestSolver } from './multigrid-coarsest.ts';
-import { correctProlongDirichlet, correctRestrictDirichlet, dirichletCells, type TransferPair } from './multigrid-dirichlet.ts';
+import { correctProlongCell, correctRestrictCell, dirichletCells, type TransferPair } from './multigrid-dirichlet.ts';
 import { COARSE_SCALE, coarsen } from './multigrid-levels.ts';
-import { smoothColour, smoothRedFromZero } from './multigrid-smooth.ts';
-import { prolongAdd, restrictResidual } from './multigrid-transfer.ts';
+import { rowDot, smoothColour, smoothRedFromZeroRow, smoothRow } from './multigrid-smooth.ts';
 import { paddedVector } from './pcg-operator.ts';
 
 interface Level {
@@ -25,19 +24,13 @@ export interface Multigrid {
   readonly coarsest: CoarsestSolver | null;
   /** Red-black sweep pairs before and after each coarse correction. */
   readonly sweeps: number;
-  readonly transfer: Transfer;
 }
-
-/** 'bilinear': bilinear transfers with operator-dependent Dirichlet cells; 'constant': piecewise-constant (injection / sum). */
-export type Transfer = 'bilinear' | 'constant';
 
 export interface MultigridOptions {
   /** Sweep pairs before and after the coarse correction; default 1. */
   readonly sweeps?: number;
   /** Coarse coupling scale; default COARSE_SCALE. */
   readonly coarseScale?: number;
-  /** Default 'bilinear'. */
-  readonly transfer?: Transfer;
 }
 
 /** Sweep pairs on the coarsest level when its direct factor is unavailable. */
@@ -61,65 +54,108 @@ export function buildMultigrid(fine: Stencil, options: MultigridOptions = {}): M
     b = new Float64Array(s.nx * s.ny);
   }
   levels.push({ stencil: s, x, b, down: null });
-  return { levels, coarsest: factorCoarsest(s), sweeps: options.sweeps ?? 1, transfer: options.transfer ?? 'bilinear' };
+  return { levels, coarsest: factorCoarsest(s), sweeps: Math.max(1, options.sweeps ?? 1) };
 }
 
 /**
- * z = M^-1 r, one V-cycle from a zero guess. Symmetric: red-black sweeps before, black-red after, and
- * restriction is the transpose of prolongation.
+ * z = M^-1 r, one V-cycle from a zero guess; returns r . z. Symmetric: red-black sweeps before, black-red
+ * after, and restriction is the transpose of prolongation.
  * @param r residual, i + j * nx (0 in excluded cells). @param z padded output (cell k at k + nx).
  */
-export function applyMultigrid(mg: Multigrid, r: Float64Array, z: Float64Array): void {
-  vCycle(mg, 0, z, r);
+export function applyMultigrid(mg: Multigrid, r: Float64Array, z: Float64Array): number {
+  return vCycle(mg, 0, z, r);
 }
 
-function vCycle(mg: Multigrid, depth: number, x: Float64Array, b: Float64Array): void {
+function vCycle(mg: Multigrid, depth: number, x: Float64Array, b: Float64Array): number {
   const level = mg.levels[depth];
   const s = level.stencil;
-  const t = level.down;
-  if (t === null) {
+  if (level.down === null) {
     if (mg.coarsest) solveCoarsest(mg.coarsest, s.nx, b, x);
     else relaxSymmetric(s, x, b, COARSEST_RELAX_PAIRS);
-    return;
+    let dot = 0;
+    for (let j = 0; j < s.ny; j++) dot += rowDot(s.nx, b, x, j);
+    return dot;
   }
   const coarse = mg.levels[depth + 1];
-  relax(s, x, b, mg.sweeps);
-  if (mg.transfer === 'bilinear') {
-    restrictResidualBilinear(s, x, b, t.coarse, coarse.b, t.colN, t.rowN);
-    correctRestrictDirichlet(t, x, b, coarse.b);
-  } else {
-    restrictResidual(s, x, b, coarse.b, t.coarse.nx);
-  }
+  preSmoothAndRestrict(level.down, mg.sweeps, x, b, coarse.b);
   vCycle(mg, depth + 1, coarse.x, coarse.b);
-  if (mg.transfer === 'bilinear') {
-    prolongAddBilinear(s, x, t.coarse, coarse.x, t.colN, t.rowN);
-    correctProlongDirichlet(t, x, coarse.x);
-  } else {
-    prolongAdd(s.nx, s.ny, x, coarse.x, t.coarse.nx);
-  }
-  relaxBack(s, x, b, mg.sweeps);
+  return prolongAndPostSmooth(level.down, mg.sweeps, x, b, coarse.x);
 }
 
-/** Pre-smoothing from a zero guess: `pairs` red-black sweep pairs. */
-function relax(s: Stencil, x: Float64Array, b: Float64Array, pairs: number): void {
-  smoothRedFromZero(s, x, b);
+/**
+ * Pre-smoothing from zero, then coarse rhs = P^T (b - A x), in one pass over the rows for one sweep pair:
+ * red row j, black row j - 1, restrict row j - 2 (each only needs rows already final). Same result as
+ * separate whole-grid passes, with a third of the memory traffic.
+ */
+function preSmoothAndRestrict(t: TransferPair, sweeps: number, x: Float64Array, b: Float64Array, coarseB: Float64Array): void {
+  const s = t.fine;
+  const ny = s.ny;
+  coarseB.fill(0);
+  const cursor = { next: 0 };
+  for (let j = 0; j < ny + 2; j++) {
+    if (j < ny) smoothRedFromZeroRow(s, x, b, j);
+    if (j >= 1 && j <= ny) smoothRow(s, x, b, j - 1, 1);
+    if (sweeps === 1 && j >= 2) restrictWithDirichlet(t, x, b, coarseB, j - 2, cursor);
+  }
+  if (sweeps === 1) return;
+  for (let n = 1; n < sweeps; n++) {
+    smoothColour(s, x, b, 0);
+    smoothColour(s, x, b, 1);
+  }
+  for (let j = 0; j < ny; j++) restrictWithDirichlet(t, x, b, coarseB, j, cursor);
+}
+
+/**
+ * x += P xc, then black-red post-smoothing, in one pass for one sweep pair: prolong row j, black row j - 1,
+ * red row j - 2. Returns b . x (on the finest level that is r . z for the conjugate gradients).
+ */
+function prolongAndPostSmooth(t: TransferPair, sweeps: number, x: Float64Array, b: Float64Array, coarseX: Float64Array): number {
+  const s = t.fine;
+  const { nx, ny } = s;
+  const dirichlet = t.dirichlet;
+  let next = 0;
+  let dot = 0;
+  for (let j = 0; j < ny + 2; j++) {
+    if (j < ny) {
+      prolongRow(s, x, j, t.coarse, coarseX, t.colN, t.rowN);
+      const end = (j + 1) * nx;
+      while (next < dirichlet.length && dirichlet[next] < end) correctProlongCell(t, x, coarseX, dirichlet[next++]);
+    }
+    if (j >= 1 && j <= ny) smoothRow(s, x, b, j - 1, 1);
+    if (j >= 2) {
+      smoothRow(s, x, b, j - 2, 0);
+      if (sweeps === 1) dot += rowDot(nx, b, x, j - 2);
+    }
+  }
+  if (sweeps === 1) return dot;
+  for (let n = 1; n < sweeps; n++) {
+    smoothColour(s, x, b, 1);
+    smoothColour(s, x, b, 0);
+  }
+  for (let j = 0; j < ny; j++) dot += rowDot(nx, b, x, j);
+  return dot;
+}
+
+/** Restricts row j and applies the Dirichlet-cell corrections of that row (cursor walks t.dirichlet). */
+function restrictWithDirichlet(
+  t: TransferPair, x: Float64Array, b: Float64Array, coarseB: Float64Array, j: number, cursor: { next: number },
+): void {
+  restrictRow(t.fine, x, b, j, t.coarse, coarseB, t.colN, t.rowN);
+  const end = (j + 1) * t.fine.nx;
+  const cells = t.dirichlet;
+  while (cursor.next < cells.length && cells[cursor.next] < end) correctRestrictCell(t, x, b, coarseB, cells[cursor.next++]);
+}
+
+/** Symmetric relaxation from zero (red-black pairs, then black-red pairs), a stand-in for the direct solve. */
+function relaxSymmetric(s: Stencil, x: Float64Array, b: Float64Array, pairs: number): void {
+  for (let j = 0; j < s.ny; j++) smoothRedFromZeroRow(s, x, b, j);
   smoothColour(s, x, b, 1);
   for (let n = 1; n < pairs; n++) {
     smoothColour(s, x, b, 0);
     smoothColour(s, x, b, 1);
   }
-}
-
-/** Post-smoothing, the adjoint of `relax`: black-red sweep pairs. */
-function relaxBack(s: Stencil, x: Float64Array, b: Float64Array, pairs: number): void {
   for (let n = 0; n < pairs; n++) {
     smoothColour(s, x, b, 1);
     smoothColour(s, x, b, 0);
   }
-}
-
-/** Symmetric relaxation from zero (forward then backward), a symmetric stand-in for the direct solve. */
-function relaxSymmetric(s: Stencil, x: Float64Array, b: Float64Array, pairs: number): void {
-  relax(s, x, b, pairs);
-  relaxBack(s, x, b, pairs);
 }

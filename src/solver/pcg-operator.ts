@@ -35,6 +35,35 @@ export function applyStencil(s: Stencil, x: Float64Array, out: Float64Array): nu
 }
 
 /**
+ * p = z + beta p, then q = A p written over z; returns p . q. One pass: row j of p is updated, then row
+ * j - 1 of A p (which needs p rows j - 2..j) overwrites row j - 1 of z (already consumed).
+ * @param p padded search direction, updated; @param z padded preconditioned residual, overwritten by A p.
+ */
+export function updateDirectionAndApply(s: Stencil, p: Float64Array, z: Float64Array, beta: number): number {
+  const { nx, ny, diag, faceX, faceY } = s;
+  let energy = 0;
+  for (let j = 0; j <= ny; j++) {
+    if (j < ny) {
+      for (let v = (j + 1) * nx, end = v + nx; v < end; v++) p[v] = z[v] + beta * p[v];
+    }
+    if (j === 0) continue;
+    const rowK = (j - 1) * nx;
+    const rowX = rowK + j - 1;
+    for (let i = 0; i < nx; i++) {
+      const k = rowK + i;
+      const v = k + nx;
+      const pv = p[v];
+      const ap = diag[k] * pv
+        - faceX[rowX + i] * p[v - 1] - faceX[rowX + i + 1] * p[v + 1]
+        - faceY[k] * p[v - nx] - faceY[k + nx] * p[v + nx];
+      z[v] = ap;
+      energy += pv * ap;
+    }
+  }
+  return energy;
+}
+
+/**
  * r = b - A x with x padded and b, r plain (i + j * nx); returns ||r||_2. r may alias b.
  */
 export function residual(s: Stencil, x: Float64Array, b: Float64Array, r: Float64Array): number {

@@ -5,13 +5,6 @@ export function loadPadded(x: Float64Array, p: Float64Array, nx: number): void {
   p.set(x, nx);
 }
 
-/** r . z with r plain and z padded. */
-export function dotPadded(r: Float64Array, z: Float64Array, nx: number): number {
-  let sum = 0;
-  for (let k = 0, n = r.length; k < n; k++) sum += r[k] * z[k + nx];
-  return sum;
-}
-
 /** x += alpha p; r -= alpha q (p, q padded); returns r . r. */
 export function updateSolution(
   x: Float64Array, r: Float64Array, p: Float64Array, q: Float64Array, alpha: number, nx: number,
@@ -24,9 +17,4 @@ export function updateSolution(
     sum += rk * rk;
   }
   return sum;
-}
-
-/** p = z + beta p over the whole padded vectors (padding stays 0). */
-export function updateDirection(p: Float64Array, z: Float64Array, beta: number): void {
-  for (let k = 0, n = p.length; k < n; k++) p[k] = z[k] + beta * p[k];
 }

@@ -1,8 +1,8 @@
 /** Conjugate gradients preconditioned by one multigrid V-cycle per iteration. */
 import type { Stencil } from './assemble.ts';
 import { applyMultigrid, type Multigrid } from './multigrid.ts';
-import { applyStencil, residual } from './pcg-operator.ts';
-import { dotPadded, loadPadded, updateDirection, updateSolution } from './pcg-vectors.ts';
+import { residual, updateDirectionAndApply } from './pcg-operator.ts';
+import { loadPadded, updateSolution } from './pcg-vectors.ts';
 
 export interface PcgOptions {
   /** Stop when ||r|| / ||b|| <= tolerance. */
@@ -48,21 +48,20 @@ export function pcg(
   let rel = residual(s, p, r, r) / bNorm;
   let iterations = 0;
   if (rel <= options.tolerance) return { iterations, residual: rel, converged: true, stopped: false };
-  applyMultigrid(mg, r, z);
-  let rz = dotPadded(r, z, nx);
-  p.set(z);
+  let rz = applyMultigrid(mg, r, z);
+  let beta = 0;
+  p.fill(0);
   while (iterations < options.maxIterations) {
     if (options.shouldStop?.()) return { iterations, residual: rel, converged: false, stopped: true };
-    const pAp = applyStencil(s, p, z);
+    const pAp = updateDirectionAndApply(s, p, z, beta); // p = z + beta p; z = A p
     if (!(pAp > 0) || !(rz > 0)) break; // breakdown: no further progress possible in floating point
     const alpha = rz / pAp;
     rel = Math.sqrt(updateSolution(x, r, p, z, alpha, nx)) / bNorm;
     iterations++;
     options.onIteration?.(iterations, rel);
     if (rel <= options.tolerance) break;
-    applyMultigrid(mg, r, z);
-    const rzNext = dotPadded(r, z, nx);
-    updateDirection(p, z, rzNext / rz);
+    const rzNext = applyMultigrid(mg, r, z);
+    beta = rzNext / rz;
     rz = rzNext;
   }
   return { iterations, residual: rel, converged: rel <= options.tolerance, stopped: false };

@@ -1,7 +1,7 @@
 /** The multigrid preconditioner: coarse operators, symmetry and definiteness, grid-independent contraction. */
 import { describe, expect, it } from 'vitest';
 import { assemble, writeRhs, type Stencil } from '../../src/solver/assemble.ts';
-import { applyMultigrid, buildMultigrid, type Transfer } from '../../src/solver/multigrid.ts';
+import { applyMultigrid, buildMultigrid } from '../../src/solver/multigrid.ts';
 import { coarsen } from '../../src/solver/multigrid-levels.ts';
 import { paddedVector, residual } from '../../src/solver/pcg-operator.ts';
 import { channelGrid, fluidMask } from './hand-grids.ts';
@@ -76,11 +76,11 @@ describe('V-cycle preconditioner', () => {
 });
 
 /** Asymptotic contraction of the stationary iteration x += M (b - A x) on an n x n channel. */
-function contraction(n: number, transfer: Transfer): number {
+function contraction(n: number): number {
   const grid = channelGrid(n, n);
   const mask = fluidMask(grid);
   const s = assemble(grid, mask);
-  const mg = buildMultigrid(s, { transfer });
+  const mg = buildMultigrid(s);
   const b = new Float64Array(n * n);
   writeRhs(grid, mask, b);
   const x = paddedVector(n, n);
@@ -99,12 +99,11 @@ function contraction(n: number, transfer: Transfer): number {
 }
 
 describe('V-cycle contraction on a channel (McAdams, Sifakis & Teran, SCA 2010: about a decade per two PCG iterations)', () => {
-  it('stays grid independent with bilinear transfers; piecewise-constant transfers degrade (printed)', () => {
+  it('stays grid independent: about 0.3 per cycle from 32 to 512 cells across (printed)', () => {
     const sizes = [32, 128, 512];
-    const bilinear = sizes.map((n) => contraction(n, 'bilinear'));
-    const constant = sizes.map((n) => contraction(n, 'constant'));
-    console.log(`V-cycle residual factor per cycle, n = ${sizes.join(', ')}:\n  bilinear ${bilinear.map((f) => f.toFixed(3)).join(', ')}\n  constant ${constant.map((f) => f.toFixed(3)).join(', ')}`);
-    for (const f of bilinear) expect(f).toBeLessThan(0.4);
-    expect(bilinear[2] - bilinear[0]).toBeLessThan(0.05);
+    const factors = sizes.map((n) => contraction(n));
+    console.log(`V-cycle residual factor per cycle at ${sizes.join(', ')} cells across: ${factors.map((f) => f.toFixed(3)).join(', ')}`);
+    for (const f of factors) expect(f).toBeLessThan(0.4);
+    expect(factors[2] - factors[0]).toBeLessThan(0.05);
   });
 });
