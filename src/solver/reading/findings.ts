@@ -13,50 +13,14 @@ const SLOW_SHARE_WORTH_TELLING = 0.01;
  * head itself are read but not told. `h` is the grid's cell size (document units), the smallest zoom radius given.
  */
 export function findings(reading: Omit<FlowReading, 'findings'>, settings: ReadingSettings, h: number): Finding[] {
-  const u = settings.units;
-  const out: Finding[] = [];
   // walls past the valve (deck, test bore) and round the valve head are read but not told: they are not port metal
   const portWalls = reading.walls.filter((w) => w.inPort);
+  const out: Finding[] = [];
   for (const d of reading.detachments) {
     const wall = portWalls.find((w) => w.name === d.name);
     if (d.detachment && wall) out.push(detachmentFinding(d, wall, settings, h));
   }
-  const { tightest, slow, stations } = reading;
-  const inPort = reading.valvePhi !== null;
-  if (tightest) {
-    const where = inPort ? 'Tightest section ahead of the valve' : 'Tightest section';
-    out.push({
-      score: 0.6,
-      kind: 'tightest',
-      text: `${where}: ${lengthText(tightest.width, u)} wide, ${lengthText(tightest.distanceFromInlet, u)} from the manifold face`,
-      x: 0.5 * (tightest.x1 + tightest.x2),
-      y: 0.5 * (tightest.y1 + tightest.y2),
-      radius: Math.max(0.75 * tightest.width, 4 * h),
-    });
-  }
-  if (slow.largest && slow.portShare >= SLOW_SHARE_WORTH_TELLING) {
-    const part = inPort ? 'the port ahead of the valve' : 'the section';
-    out.push({
-      score: 0.5 + 0.4 * Math.min(1, 2 * slow.portShare),
-      kind: 'slow',
-      text: `${percentText(slow.portShare)} of ${part} moves below ${percentText(settings.slowFraction)} of its local mean speed`,
-      x: slow.largest.x,
-      y: slow.largest.y,
-      radius: Math.max(slow.largest.radius, 4 * h),
-    });
-  }
-  for (const run of overWideRuns(reading)) {
-    const s = stations[run.index];
-    out.push({
-      score: 0.3 + Math.min(0.4, run.excess / run.envelope),
-      kind: 'over-wide',
-      text: `Over-wide: the section ${lengthText(s.distanceFromInlet, u)} from the manifold face is ${lengthText(run.excess, u)} ` +
-        `(${percentText(run.excess / run.envelope)}) wider than the sections either side`,
-      x: 0.5 * (run.x1 + run.x2),
-      y: 0.5 * (run.y1 + run.y2),
-      radius: Math.max(0.6 * run.width, 4 * h),
-    });
-  }
+  out.push(...tightestFinding(reading, settings, h), ...slowFinding(reading, settings, h), ...overWideFindings(reading, settings, h));
   const fastest = portWalls.reduce<WallReading | null>((best, w) => (best && best.peak.speedRatio >= w.peak.speedRatio ? best : w), null);
   if (fastest) {
     out.push({
@@ -69,6 +33,48 @@ export function findings(reading: Omit<FlowReading, 'findings'>, settings: Readi
     });
   }
   return out.sort((a, b) => b.score - a.score);
+}
+
+type PartReading = Omit<FlowReading, 'findings'>;
+
+function tightestFinding({ tightest, valvePhi }: PartReading, settings: ReadingSettings, h: number): Finding[] {
+  if (!tightest) return [];
+  const u = settings.units;
+  const where = valvePhi !== null ? 'Tightest section ahead of the valve' : 'Tightest section';
+  return [{
+    score: 0.6,
+    kind: 'tightest',
+    text: `${where}: ${lengthText(tightest.width, u)} wide, ${lengthText(tightest.distanceFromInlet, u)} from the manifold face`,
+    x: 0.5 * (tightest.x1 + tightest.x2),
+    y: 0.5 * (tightest.y1 + tightest.y2),
+    radius: Math.max(0.75 * tightest.width, 4 * h),
+  }];
+}
+
+function slowFinding({ slow, valvePhi }: PartReading, settings: ReadingSettings, h: number): Finding[] {
+  if (!slow.largest || slow.portShare < SLOW_SHARE_WORTH_TELLING) return [];
+  const part = valvePhi !== null ? 'the port ahead of the valve' : 'the section';
+  return [{
+    score: 0.5 + 0.4 * Math.min(1, 2 * slow.portShare),
+    kind: 'slow',
+    text: `${percentText(slow.portShare)} of ${part} moves below ${percentText(settings.slowFraction)} of its local mean speed`,
+    x: slow.largest.x,
+    y: slow.largest.y,
+    radius: Math.max(slow.largest.radius, 4 * h),
+  }];
+}
+
+function overWideFindings(reading: PartReading, settings: ReadingSettings, h: number): Finding[] {
+  const u = settings.units;
+  return overWideRuns(reading).map((run) => ({
+    score: 0.3 + Math.min(0.4, run.excess / run.envelope),
+    kind: 'over-wide',
+    text: `Over-wide: the section ${lengthText(reading.stations[run.index].distanceFromInlet, u)} from the manifold face is ` +
+      `${lengthText(run.excess, u)} (${percentText(run.excess / run.envelope)}) wider than the sections either side`,
+    x: 0.5 * (run.x1 + run.x2),
+    y: 0.5 * (run.y1 + run.y2),
+    radius: Math.max(0.6 * run.width, 4 * h),
+  }));
 }
 
 /**
@@ -104,7 +110,7 @@ function detachmentFinding(d: WallDetachmentReading, wall: WallReading, settings
 }
 
 /** Over-wide stations grouped into runs of consecutive stations; each run is told once, at its widest excess. */
-function overWideRuns(reading: Omit<FlowReading, 'findings'>): FlowReading['overWide'] {
+function overWideRuns(reading: PartReading): FlowReading['overWide'] {
   const runs: FlowReading['overWide'][number][] = [];
   let previous = -2;
   for (const s of reading.overWide) {

@@ -40,6 +40,11 @@ describe('readFlow, straight channel', () => {
     const tight = reading.findings.find((f) => f.kind === 'tightest');
     expect(tight?.text).toMatch(/^Tightest section: 1\.0 mm wide, \d+\.\d mm from the manifold face$/);
   });
+
+  it('words the same reading in inches when the document is in inches', () => {
+    const inches = readFlow(domain, exactResult(domain, 10_000, channelFlow(4, 1)), { units: 'inch', streamlineCount: 0 });
+    expect(inches.findings.find((f) => f.kind === 'tightest')?.text).toMatch(/^Tightest section: 1\.00 in wide, \d\.\d{2,3} in from the manifold face$/);
+  });
 });
 
 describe('readFlow, exact concentric bend (r2/r1 = 2, 90 deg)', () => {
