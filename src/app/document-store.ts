@@ -26,9 +26,9 @@ export class DocumentStore {
     this.set(next, cause);
   }
 
-  /** Replace the whole document (a file was opened). */
-  replace(doc: PortDocument): void {
-    this.set(doc, 'open');
+  /** Replace the whole document (a file was opened, or a cancelled drag goes back to where it started). */
+  replace(doc: PortDocument, cause: ChangeCause = 'open'): void {
+    this.set(doc, cause);
   }
 
   /** Tell listeners again (e.g. a drag ended: the last coarse state now wants the full grid). */

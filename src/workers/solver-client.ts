@@ -1,5 +1,6 @@
 /** Main-thread side of one solver worker: newest request wins, older results are dropped, at most one in flight. */
 import * as Comlink from 'comlink';
+import type { ReadingOptions } from '../solver/reading/index.ts';
 import type { FlowDomain } from '../solver/types.ts';
 import type { SolveReply, SolveRequest, SolverWorkerApi } from './protocol.ts';
 
@@ -8,6 +9,7 @@ export interface SolveJob {
   readonly targetCells: number;
   readonly tolerance?: number;
   readonly warmStart?: boolean;
+  readonly reading?: ReadingOptions | null;
 }
 
 interface Pending {

@@ -1,0 +1,167 @@
+/** Wires pointer and keyboard events to the pure drag tool and sends its edits to the document store. */
+import type { PortDocument, Point } from '../document/types.ts';
+import {
+  activeSection, DEFAULT_GRID_STEP, hitTest, IDLE, listHandles, sameHandle, stepTool,
+  type CommandName, type HandleRef, type ToolAction, type ToolEvent, type ToolState,
+} from '../editor/index.ts';
+import type { FlowView } from '../view/flow-view.ts';
+import { HandleOverlay, type HandleMark } from '../view/handle-overlay.ts';
+import type { DocumentStore } from './document-store.ts';
+
+/** Pick slop around a handle, CSS pixels. */
+const PICK_PX = 9;
+
+export interface EditorHooks {
+  readonly onCommand: (name: CommandName) => void;
+  readonly onMessage: (message: string, level: 'info' | 'error') => void;
+  readonly snapping: () => boolean;
+}
+
+export class EditorController {
+  private state: ToolState = IDLE;
+  private beforeDrag: PortDocument | null = null;
+  private readonly overlay: HandleOverlay;
+  insertMode = false;
+
+  constructor(
+    private readonly host: HTMLElement,
+    private readonly view: FlowView,
+    private readonly store: DocumentStore,
+    private readonly hooks: EditorHooks,
+  ) {
+    this.overlay = new HandleOverlay(host);
+    view.onViewChange((t) => this.overlay.setTransform(t));
+    this.overlay.setTransform(view.transform);
+    view.claimPointer = (ev, x, y) => this.claim(ev, [x, y]);
+    window.addEventListener('keydown', this.onKey);
+    store.subscribe(() => this.drawHandles());
+    this.drawHandles();
+  }
+
+  /** Forget the selection (a file was opened or the variant changed: indices no longer mean the same thing). */
+  reset(): void {
+    this.state = IDLE;
+    this.beforeDrag = null;
+    this.drawHandles();
+  }
+
+  get selection(): HandleRef | null {
+    return this.state.selection;
+  }
+
+  /** Claim a press on a handle or an edge so the view does not pan; a press on empty space pans and clears the selection. */
+  private claim(ev: PointerEvent, at: Point): boolean {
+    const insert = this.insertMode || ev.shiftKey;
+    const hit = hitTest(activeSection(this.store.doc), at, this.tolerance());
+    if (!hit) {
+      if (this.state.selection) this.dispatch({ type: 'key', press: { key: 'Escape' } });
+      return false;
+    }
+    this.dispatch({ type: 'pointer-down', at, screen: [ev.clientX, ev.clientY], insert });
+    const move = (e: PointerEvent) => this.dispatch({ type: 'pointer-move', at: this.sectionPoint(e), screen: [e.clientX, e.clientY] });
+    const up = (e: PointerEvent) => {
+      window.removeEventListener('pointermove', move);
+      window.removeEventListener('pointerup', up);
+      this.dispatch({ type: 'pointer-up', at: this.sectionPoint(e), screen: [e.clientX, e.clientY] });
+    };
+    window.addEventListener('pointermove', move);
+    window.addEventListener('pointerup', up);
+    return true;
+  }
+
+  private readonly onKey = (ev: KeyboardEvent): void => {
+    const target = ev.target as HTMLElement | null;
+    if (target && (target.isContentEditable || ['INPUT', 'SELECT', 'TEXTAREA'].includes(target.tagName))) return;
+    const before = this.state;
+    this.dispatch({ type: 'key', press: { key: ev.key, ctrlKey: ev.ctrlKey, metaKey: ev.metaKey, altKey: ev.altKey, shiftKey: ev.shiftKey } });
+    if (this.state !== before || this.lastHandled) ev.preventDefault();
+  };
+
+  private lastHandled = false;
+
+  private dispatch(event: ToolEvent): void {
+    const step = stepTool(this.state, event, this.context());
+    this.state = step.state;
+    this.lastHandled = step.actions.length > 0;
+    for (const action of step.actions) this.perform(action);
+    this.drawHandles();
+  }
+
+  private perform(action: ToolAction): void {
+    switch (action.type) {
+      case 'select': return;
+      case 'drag-start':
+        this.beforeDrag = this.store.doc;
+        return this.tryEdit(action.edit.name, action.edit.args, 'drag');
+      case 'drag-move': return this.tryEdit(action.edit.name, action.edit.args, 'drag');
+      case 'drag-end':
+        this.beforeDrag = null;
+        this.tryEdit(action.edit.name, action.edit.args, 'drag');
+        return this.store.touch('edit');
+      case 'drag-cancel':
+        if (this.beforeDrag) this.store.replace(this.beforeDrag, 'edit');
+        this.beforeDrag = null;
+        return;
+      case 'edit': return this.tryEdit(action.edit.name, action.edit.args, 'edit');
+      case 'command':
+        if (action.name === 'toggleInsertMode') {
+          this.insertMode = !this.insertMode;
+          return this.hooks.onMessage(this.insertMode ? 'Insert mode: click an edge to add a corner there.' : 'Insert mode off.', 'info');
+        }
+        return this.hooks.onCommand(action.name);
+      case 'hint': return this.hooks.onMessage(action.message, 'info');
+    }
+  }
+
+  /** An edit that fails (e.g. a corner dropped on its neighbour) leaves the document as it was and says why. */
+  private tryEdit(name: string, args: unknown, cause: 'drag' | 'edit'): void {
+    try {
+      this.store.edit(name, args, cause);
+    } catch (error) {
+      this.hooks.onMessage(error instanceof Error ? error.message : String(error), 'error');
+    }
+  }
+
+  private context() {
+    const units = this.store.doc.units;
+    const snap = this.hooks.snapping() ? { gridStep: DEFAULT_GRID_STEP[units], alignTolerance: 4 / this.view.transform.scale } : null;
+    return { section: activeSection(this.store.doc), tolerance: this.tolerance(), snap };
+  }
+
+  private tolerance(): number {
+    return PICK_PX / this.view.transform.scale;
+  }
+
+  private sectionPoint(e: PointerEvent): Point {
+    const r = this.host.getBoundingClientRect();
+    const p = this.view.screenToSection(e.clientX - r.left, e.clientY - r.top);
+    return [p.x, p.y];
+  }
+
+  private drawHandles(): void {
+    const section = activeSection(this.store.doc);
+    const selected = this.state.selection;
+    const units = this.store.doc.units;
+    const marks: HandleMark[] = listHandles(section).map(({ ref, at }) => {
+      const isSelected = sameHandle(selected, ref);
+      const radius = ref.kind === 'fillet' ? filletRadiusOf(section, ref) : 0;
+      return {
+        x: at[0], y: at[1],
+        style: ref.kind === 'vertex' ? 'corner' : ref.kind === 'fillet' ? 'fillet' : 'point',
+        selected: isSelected,
+        label: isSelected && ref.kind === 'fillet' ? `R ${radius.toFixed(units === 'mm' ? 1 : 3)} ${units}` : undefined,
+      };
+    });
+    this.overlay.setHandles(marks);
+  }
+
+  dispose(): void {
+    window.removeEventListener('keydown', this.onKey);
+    this.overlay.dispose();
+  }
+}
+
+function filletRadiusOf(section: ReturnType<typeof activeSection>, ref: Extract<HandleRef, { kind: 'fillet' }>): number {
+  const outline = ref.island === undefined ? section.outline : section.islands[ref.island].outline;
+  return outline.vertices[ref.vertex]?.filletRadius ?? 0;
+}

@@ -1,0 +1,38 @@
+/** Live solving: a coarse grid while a point is dragged, the full grid (warm-started) when it is let go. */
+import type { ReadingOptions } from '../solver/reading/index.ts';
+import type { FlowDomain } from '../solver/types.ts';
+import type { FieldReply, FailureReply } from '../workers/protocol.ts';
+import type { SolverClient } from '../workers/solver-client.ts';
+
+export type SolveKind = 'drag' | 'full';
+
+export interface LiveSolveHooks {
+  readonly onStart: (kind: SolveKind, cells: number) => void;
+  readonly onField: (reply: FieldReply, kind: SolveKind, roundTripMs: number) => void;
+  readonly onFailure: (failure: FailureReply) => void;
+}
+
+export class LiveSolve {
+  constructor(private readonly client: SolverClient, private readonly hooks: LiveSolveHooks) {}
+
+  /** Ask for a solve; an older request still running is stopped and its result dropped. */
+  async request(domain: FlowDomain, kind: SolveKind, cells: number, reading: ReadingOptions | null): Promise<void> {
+    this.hooks.onStart(kind, cells);
+    const started = performance.now();
+    const reply = await this.client.solveLatest({
+      domain,
+      targetCells: cells,
+      // While dragging, a looser tolerance is plenty for the picture; the full solve goes to 1e-8.
+      tolerance: kind === 'drag' ? 1e-5 : 1e-8,
+      warmStart: true,
+      reading,
+    });
+    if (reply === null) return;
+    if (reply.ok) this.hooks.onField(reply, kind, performance.now() - started);
+    else this.hooks.onFailure(reply);
+  }
+
+  get busy(): boolean {
+    return this.client.busy;
+  }
+}

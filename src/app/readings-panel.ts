@@ -1,0 +1,78 @@
+/** The readings beside the field: the numbers the solver and the flow reading computed, and the ranked findings. */
+import type { Finding } from '../solver/reading/index.ts';
+import type { FieldReply } from '../workers/protocol.ts';
+
+export interface ReadingsHooks {
+  /** A finding was clicked: zoom the view to its place. */
+  readonly onFinding: (finding: Finding) => void;
+}
+
+export class ReadingsPanel {
+  constructor(private readonly host: HTMLElement, private readonly hooks: ReadingsHooks) {}
+
+  show(reply: FieldReply, units: string, refineMs: number): void {
+    const digits = units === 'mm' ? 1 : 3;
+    const reading = reply.reading;
+    const rows: Array<[string, string, string?]> = [
+      ['grid', `${reply.nx} × ${reply.ny} cells, ${reply.h.toFixed(units === 'mm' ? 2 : 4)} ${units}`],
+      ['solve', `${reply.iterations} iterations, residual ${reply.residual.toExponential(1)}, ${refineMs.toFixed(0)} ms`],
+      ['peak speed ratio', `${reply.peak.speedRatio.toFixed(2)} at (${reply.peak.x.toFixed(digits)}, ${reply.peak.y.toFixed(digits)})`, 'peak'],
+    ];
+    for (const wall of reading?.walls ?? []) {
+      rows.push([`${wall.name} peak`, `${wall.peak.speedRatio.toFixed(3)}`, `${slug(wall.name)}-peak`]);
+    }
+    if (reading?.tightest) rows.push(['tightest section', `${reading.tightest.width.toFixed(digits)} ${units} wide`, 'tightest']);
+    if (reading) rows.push(['slow share', `${(100 * reading.slow.share).toFixed(1)}% of the section`, 'slow-share']);
+    rows.push(['conductance', `${reply.conductance.toFixed(4)} (per unit depth)`]);
+    this.host.replaceChildren(heading('Readings'), table(rows), ...this.findings(reading?.findings ?? []));
+  }
+
+  showStale(message: string): void {
+    this.host.dataset.stale = 'true';
+    this.host.title = message;
+  }
+
+  clearStale(): void {
+    delete this.host.dataset.stale;
+    this.host.title = '';
+  }
+
+  private findings(findings: readonly Finding[]): HTMLElement[] {
+    if (findings.length === 0) return [];
+    const list = document.createElement('ol');
+    list.className = 'findings';
+    for (const finding of findings) {
+      const item = document.createElement('li');
+      const button = document.createElement('button');
+      button.type = 'button';
+      button.textContent = finding.text;
+      button.title = 'Show this place';
+      button.addEventListener('click', () => this.hooks.onFinding(finding));
+      item.append(button);
+      list.append(item);
+    }
+    return [heading('Findings'), list];
+  }
+}
+
+function heading(text: string): HTMLElement {
+  const h = document.createElement('h3');
+  h.textContent = text;
+  return h;
+}
+
+function table(rows: ReadonlyArray<[string, string, string?]>): HTMLElement {
+  const t = document.createElement('table');
+  for (const [label, value, key] of rows) {
+    const tr = t.insertRow();
+    tr.insertCell().textContent = label;
+    const cell = tr.insertCell();
+    cell.textContent = value;
+    if (key) cell.dataset.reading = key;
+  }
+  return t;
+}
+
+export function slug(name: string): string {
+  return name.toLowerCase().replace(/[^a-z0-9]+/g, '-');
+}

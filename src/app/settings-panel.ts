@@ -1,0 +1,36 @@
+/** The settings panel (lil-gui) over the one settings object; tells the app which group changed. */
+import GUI from 'lil-gui';
+import type { AppSettings } from './settings.ts';
+
+export type SettingsGroup = 'solve' | 'reading' | 'draw' | 'units' | 'edit';
+
+export function buildSettingsPanel(host: HTMLElement, settings: AppSettings, onChange: (group: SettingsGroup) => void): GUI {
+  const gui = new GUI({ container: host, title: 'Settings' });
+  const solve = gui.addFolder('Solve');
+  solve.add(settings, 'gridDetail', { 'preview (60k cells)': 'preview', 'standard (250k cells)': 'standard', 'fine (1M cells)': 'fine' })
+    .name('grid detail').onFinishChange(() => onChange('solve'));
+  solve.add(settings, 'units', { millimetres: 'mm', inches: 'inch' }).name('units').onFinishChange(() => onChange('units'));
+
+  const draw = gui.addFolder('Colours and lines');
+  draw.add(settings, 'reference', ['mean inlet speed', 'tightest station']).name('ratio of speed to').onFinishChange(() => onChange('draw'));
+  draw.add(settings, 'colourMode', { 'automatic': 'auto', 'fixed (compare variants)': 'fixed' }).name('colour range').onFinishChange(() => onChange('draw'));
+  draw.add(settings, 'colourMin', 0, 5, 0.05).name('fixed from').onFinishChange(() => onChange('draw'));
+  draw.add(settings, 'colourMax', 0.1, 10, 0.05).name('fixed to').onFinishChange(() => onChange('draw'));
+  draw.add(settings, 'contourLevels').name('contour levels').onFinishChange(() => onChange('draw'));
+
+  const layers = gui.addFolder('Layers');
+  layers.add(settings.layers, 'field').name('speed field').onChange(() => onChange('draw'));
+  layers.add(settings.layers, 'contours').name('contour lines').onChange(() => onChange('draw'));
+  layers.add(settings.layers, 'streamlines').name('streamlines').onChange(() => onChange('draw'));
+  layers.add(settings.layers, 'walls').name('walls').onChange(() => onChange('draw'));
+  layers.add(settings.layers, 'flags').name('flags').onChange(() => onChange('draw'));
+  layers.close();
+
+  const reading = gui.addFolder('Flow reading');
+  reading.add(settings, 'slowFraction', 0.05, 0.9, 0.05).name('slow below (of local mean)').onFinishChange(() => onChange('reading'));
+  reading.add(settings, 'inletSpeedMs', 5, 150, 1).name('inlet speed, m/s').onFinishChange(() => onChange('reading'));
+  reading.close();
+
+  gui.add(settings, 'snapping').name('snap points').onChange(() => onChange('edit'));
+  return gui;
+}

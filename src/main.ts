@@ -1,0 +1,188 @@
+/** Portwright in the browser: the one file that wires document, editor, workers and view together. */
+import sampleText from '../samples/short-side-compare.json?raw';
+import { acceptDrops, downloadDocument, pickFile, type FileHandlers } from './app/files.ts';
+import { autosaver, restoreAutosave } from './app/autosave.ts';
+import { DocumentStore, type ChangeCause } from './app/document-store.ts';
+import { EditorController } from './app/editor-controller.ts';
+import { flagShapes } from './app/flag-shapes.ts';
+import { CELLS_BY_DETAIL, DRAG_CELLS } from './app/grid-detail.ts';
+import { fillHelp } from './app/help-overlay.ts';
+import { LiveSolve } from './app/live-solve.ts';
+import { ReadingsPanel } from './app/readings-panel.ts';
+import { fluidClip, wallLines } from './app/section-shapes.ts';
+import { defaultSettings, parseLevels } from './app/settings.ts';
+import { buildSettingsPanel, type SettingsGroup } from './app/settings-panel.ts';
+import { StatusLine } from './app/status.ts';
+import { loadDocument } from './document/load.ts';
+import type { PortDocument } from './document/types.ts';
+import { activeSection, applyEdit, type CommandName } from './editor/index.ts';
+import { defaultTolerance, sectionBounds, sectionToDomain } from './geometry/index.ts';
+import type { FlowDomain } from './solver/types.ts';
+import { FlowView } from './view/flow-view.ts';
+import type { FieldImage } from './view/types.ts';
+import { SolverPool } from './workers/pool.ts';
+import type { FieldReply } from './workers/protocol.ts';
+
+const byId = <T extends HTMLElement>(id: string) => document.getElementById(id) as T;
+const viewHost = byId<HTMLElement>('view-host');
+const status = new StatusLine(byId('status'));
+const indicator = byId<HTMLElement>('solve-indicator');
+const helpOverlay = byId<HTMLElement>('help-overlay');
+const variantSelect = byId<HTMLSelectElement>('variant-select');
+
+const settings = defaultSettings();
+const restored = restoreAutosave();
+const store = new DocumentStore(restored ?? loadDocument(sampleText), applyEdit);
+settings.units = store.doc.units;
+settings.gridDetail = store.doc.settings.gridDetail;
+
+const view = new FlowView(viewHost, { units: store.doc.units, contourLevels: parseLevels(settings.contourLevels) });
+const pool = new SolverPool(() => new Worker(new URL('./workers/solver.worker.ts', import.meta.url), { type: 'module' }));
+const readings = new ReadingsPanel(byId('readings'), {
+  onFinding: (f) => view.fitToView({ minX: f.x - f.radius, minY: f.y - f.radius, maxX: f.x + f.radius, maxY: f.y + f.radius }),
+});
+let lastReply: FieldReply | null = null;
+let editTime = 0;
+/** Times from an edit to the repainted field, ms (read by the browser benchmark). */
+const timings: Array<{ kind: string; ms: number; cells: number }> = [];
+
+const live = new LiveSolve(pool.live, {
+  onStart: (kind, cells) => showIndicator('busy', kind === 'drag' ? 'live preview…' : `solving ${(cells / 1000).toFixed(0)}k cells…`),
+  onField: (reply, kind, ms) => {
+    lastReply = reply;
+    drawField(reply);
+    view.renderNow();
+    timings.push({ kind, ms: performance.now() - editTime, cells: reply.nx * reply.ny });
+    if (kind === 'full') {
+      readings.show(reply, store.doc.units, ms);
+      readings.clearStale();
+      status.clear();
+    }
+    showIndicator(live.busy ? 'busy' : 'idle', `${reply.nx * reply.ny > 1e6 ? (reply.nx * reply.ny / 1e6).toFixed(1) + 'M' : Math.round(reply.nx * reply.ny / 1000) + 'k'} cells, ${ms.toFixed(0)} ms`);
+  },
+  onFailure: (failure) => {
+    showIndicator('error', 'not solved');
+    const where = failure.where ? ` (near x = ${failure.where[0].toFixed(1)}, y = ${failure.where[1].toFixed(1)})` : '';
+    status.show(`${failure.message}${failure.message.includes('near') ? '' : where}`, 'error');
+    readings.showStale('This reading belongs to the last shape that solved.');
+  },
+});
+
+function showIndicator(state: 'busy' | 'idle' | 'error', text: string): void {
+  indicator.dataset.state = state;
+  indicator.textContent = text;
+}
+
+/** The field as the view wants it, with speed ratios against the chosen reference. */
+function drawField(reply: FieldReply): void {
+  const tightest = reply.reading?.tightest ? reply.reading.stations[reply.reading.tightest.index] : null;
+  const scale = settings.reference === 'tightest station' && tightest ? 1 / tightest.meanSpeedRatio : 1;
+  const values = scale === 1 ? reply.speedRatio : reply.speedRatio.map((v) => v * scale);
+  const field: FieldImage = { nx: reply.nx, ny: reply.ny, x0: reply.x0, y0: reply.y0, h: reply.h, values };
+  view.setField(field);
+  if (reply.reading) {
+    view.setStreamlines(reply.reading.streamlines.map((s) => ({ xy: s.xy, closed: false })));
+    view.setFlags(flagShapes(reply, store.doc.units));
+  }
+}
+
+function currentDomain(doc: PortDocument): FlowDomain | null {
+  const section = activeSection(doc);
+  try {
+    return sectionToDomain(section, defaultTolerance(section), doc.units);
+  } catch (error) {
+    status.show(error instanceof Error ? error.message : String(error), 'error');
+    readings.showStale('This reading belongs to the last shape that solved.');
+    return null;
+  }
+}
+
+function solve(doc: PortDocument, cause: ChangeCause): void {
+  editTime = performance.now();
+  const domain = currentDomain(doc);
+  if (!domain) return;
+  view.setWalls(wallLines(domain));
+  view.setClip(fluidClip(domain));
+  const reading = { units: doc.units, slowFraction: settings.slowFraction, inletMeanSpeedMs: settings.inletSpeedMs };
+  if (cause === 'drag') void live.request(domain, 'drag', DRAG_CELLS, null);
+  else void live.request(domain, 'full', CELLS_BY_DETAIL[settings.gridDetail], reading);
+}
+
+function showDocument(doc: PortDocument): void {
+  byId('doc-title').textContent = doc.title;
+  variantSelect.replaceChildren(...doc.variants.map((v) => new Option(v.name, v.name, false, v.name === doc.activeVariant)));
+}
+
+const autosave = autosaver();
+store.subscribe((doc, cause) => {
+  showDocument(doc);
+  autosave(doc);
+  solve(doc, cause);
+  if (cause === 'open') {
+    editor.reset();
+    view.setUnits(doc.units);
+    view.fitToView(sectionBounds(activeSection(doc)));
+  }
+});
+
+const fileHandlers: FileHandlers = {
+  onOpened: (doc, name) => {
+    store.replace(doc);
+    status.show(`Opened "${name}".`);
+  },
+  onRejected: (message) => status.show(`${message} Your current work is unchanged.`, 'error'),
+};
+
+function runCommand(name: CommandName): void {
+  switch (name) {
+    case 'fitView': return view.fitToView(sectionBounds(activeSection(store.doc)));
+    case 'toggleSnapping':
+      settings.snapping = !settings.snapping;
+      gui.controllersRecursive().forEach((c) => c.updateDisplay());
+      return status.show(settings.snapping ? 'Snapping on.' : 'Snapping off.');
+    case 'toggleHelp': helpOverlay.hidden = !helpOverlay.hidden; return;
+    case 'save': return status.show(`Saved as ${downloadDocument(store.doc)}.`);
+    case 'open': return pickFile(byId('file-input'), fileHandlers);
+    case 'cancel': helpOverlay.hidden = true; return;
+    case 'toggleInsertMode': return;
+  }
+}
+
+const editor = new EditorController(viewHost, view, store, {
+  onCommand: runCommand,
+  onMessage: (message, level) => status.show(message, level),
+  snapping: () => settings.snapping,
+});
+
+function applySettings(group: SettingsGroup): void {
+  view.setLayers(settings.layers);
+  view.setContourLevels(parseLevels(settings.contourLevels));
+  view.setColourRange({ mode: settings.colourMode, min: settings.colourMin, max: settings.colourMax });
+  if (group === 'draw' && lastReply) drawField(lastReply);
+  if (group === 'solve' || group === 'reading') solve(store.doc, 'edit');
+  if (group === 'units' && settings.units !== store.doc.units) {
+    status.show(`This section is drawn in ${store.doc.units}; converting a drawing between units is not offered yet.`, 'warn');
+    settings.units = store.doc.units;
+    gui.controllersRecursive().forEach((c) => c.updateDisplay());
+  }
+}
+const gui = buildSettingsPanel(byId('settings-host'), settings, applySettings);
+
+fillHelp(helpOverlay);
+helpOverlay.addEventListener('click', () => (helpOverlay.hidden = true));
+byId('help-button').addEventListener('click', () => runCommand('toggleHelp'));
+byId('open-button').addEventListener('click', () => runCommand('open'));
+byId('save-button').addEventListener('click', () => runCommand('save'));
+variantSelect.addEventListener('change', () => {
+  store.edit('setActiveVariant', { name: variantSelect.value });
+  editor.reset();
+});
+acceptDrops(document.body, fileHandlers);
+
+showDocument(store.doc);
+view.fitToView(sectionBounds(activeSection(store.doc)));
+solve(store.doc, 'open');
+if (restored) status.show('Restored the work from your last visit. Open a sample or a file to start afresh.');
+
+// For browser tests and the interaction benchmark: read-only handles on the running app.
+Object.assign(window, { portwright: { store, view, timings, get lastReply() { return lastReply; } } });

@@ -1,0 +1,65 @@
+/** Editor handles (corners, arc and curve points, fillet-radius handles) drawn as SVG above the field. */
+import type { SectionToScreen } from './types.ts';
+
+export type HandleStyle = 'corner' | 'point' | 'fillet';
+
+/** A handle to draw, section units. */
+export interface HandleMark {
+  readonly x: number;
+  readonly y: number;
+  readonly style: HandleStyle;
+  readonly selected: boolean;
+  /** Shown beside a selected handle, e.g. "R 4.0 mm". */
+  readonly label?: string;
+}
+
+const SVG_NS = 'http://www.w3.org/2000/svg';
+const RADIUS_PX: Readonly<Record<HandleStyle, number>> = { corner: 4.5, point: 4, fillet: 5 };
+
+export class HandleOverlay {
+  private readonly svg: SVGSVGElement;
+  private marks: readonly HandleMark[] = [];
+  private transform: SectionToScreen = { scale: 1, offsetX: 0, offsetY: 0 };
+
+  constructor(container: HTMLElement) {
+    this.svg = document.createElementNS(SVG_NS, 'svg');
+    this.svg.setAttribute('class', 'editor-overlay');
+    this.svg.style.cssText = 'position:absolute;inset:0;width:100%;height:100%;pointer-events:none;z-index:3';
+    container.appendChild(this.svg);
+  }
+
+  setHandles(marks: readonly HandleMark[]): void {
+    this.marks = marks;
+    this.draw();
+  }
+
+  setTransform(transform: SectionToScreen): void {
+    this.transform = transform;
+    this.draw();
+  }
+
+  private draw(): void {
+    const { scale, offsetX, offsetY } = this.transform;
+    const parts: string[] = [];
+    for (const m of this.marks) {
+      const sx = offsetX + scale * m.x;
+      const sy = offsetY - scale * m.y;
+      const r = RADIUS_PX[m.style] + (m.selected ? 1.5 : 0);
+      const fill = m.selected ? '#e8a33d' : m.style === 'fillet' ? '#1d2127' : '#f2f4f6';
+      const stroke = m.style === 'fillet' ? '#e8a33d' : '#1d2127';
+      parts.push(m.style === 'corner'
+        ? `<rect x="${sx - r}" y="${sy - r}" width="${2 * r}" height="${2 * r}" fill="${fill}" stroke="${stroke}" stroke-width="1.5"/>`
+        : `<circle cx="${sx}" cy="${sy}" r="${r}" fill="${fill}" stroke="${stroke}" stroke-width="2"/>`);
+      if (m.label) parts.push(`<text x="${sx + 9}" y="${sy - 9}" fill="#e8a33d" font-size="12" font-family="system-ui" paint-order="stroke" stroke="#15181d" stroke-width="3">${escapeText(m.label)}</text>`);
+    }
+    this.svg.innerHTML = parts.join('');
+  }
+
+  dispose(): void {
+    this.svg.remove();
+  }
+}
+
+function escapeText(text: string): string {
+  return text.replace(/[&<>]/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;' })[c] ?? c);
+}
