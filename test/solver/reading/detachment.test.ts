@@ -76,4 +76,22 @@ describe('detachment', () => {
     console.log(`whole wall ${whole.s.toFixed(2)} mm, split ${(side.detachment!.s + 30).toFixed(2)} mm, fresh start ${(fresh.s + 30).toFixed(2)} mm`);
     expect(Math.abs(side.detachment!.s + 30 - whole.s)).toBeLessThan(Math.abs(fresh.s + 30 - whole.s));
   });
+
+  it('keeps the flow off the next wall until the speed climbs back past the speed where it left', () => {
+    // leaves near 47 mm on the first wall and is still off at its end (50 mm), where the speed is still falling
+    const rising = (sMm: number): number => (sMm <= 60 ? bendLike(sMm) : 1 + (sMm - 60) / 20);
+    const first = wallOf('short side', 0, 50, 0.5, 1, rising);
+    const next = wallOf('bowl', 50, 100, 0.5, 1, rising);
+    const [bowl, side] = wallDetachments([next, first], mm);
+    const left = side.detachment!;
+    expect(side.offWall[side.offWall.length - 1][1]).toBe(50);
+    // speed where it left, as a ratio: the bend-like fall 2 - (s - 40) / 20
+    const leftRatio = 2 - (left.s - 40) / 20;
+    // the speed passes that ratio again at 60 + 20 (leftRatio - 1) mm; the bowl is off from its start until then
+    const back = 60 + 20 * (leftRatio - 1) - 50;
+    expect(bowl.offWall[0][0]).toBe(0);
+    assertInDelta(bowl.offWall[0][1], back, 0.5);
+    // no new detachment on the bowl: the speed only rises after the flow comes back
+    expect(bowl.detachment).toBeNull();
+  });
 });
