@@ -88,6 +88,10 @@ export interface LabelAnchor {
   readonly x: number;
   readonly y: number;
   readonly level: number;
+  /** 0 for the place nearest the middle of its line, then 1, 2... outward: labels are placed in this order. */
+  readonly rank: number;
+  /** Index of the line in the list given to labelAnchors. */
+  readonly line: number;
 }
 
 /**
@@ -96,17 +100,18 @@ export interface LabelAnchor {
  */
 export function labelAnchors(lines: readonly ContourLine[], spacing: number, minLength: number): LabelAnchor[] {
   const anchors: LabelAnchor[] = [];
-  for (const line of lines) {
+  lines.forEach((line, index) => {
     const cum = cumulativeLength(line.xy);
     const total = cum[cum.length - 1];
-    if (total < minLength) continue;
+    if (total < minLength) return;
     const count = Math.max(1, Math.floor(total / spacing));
     for (let k = 0; k < count; k++) {
       const p = pointAt(line.xy, cum, ((k + 0.5) * total) / count);
-      anchors.push({ x: p[0], y: p[1], level: line.level });
+      anchors.push({ x: p[0], y: p[1], level: line.level, rank: Math.floor(Math.abs(k - (count - 1) / 2)), line: index });
     }
-  }
-  return anchors;
+  });
+  // Every line's middle label first, so each level gets one before any gets a second (sort is stable).
+  return anchors.sort((a, b) => a.rank - b.rank);
 }
 
 function cumulativeLength(xy: Float64Array): Float64Array {

@@ -39,7 +39,7 @@ export function scaleBar(pxPerUnit: number, maxPx: number, units: LengthUnits): 
 }
 
 /**
- * Round tick values on [min, max]: the step is the smallest 1, 2 or 5 x 10^k not below (max - min) / intervals.
+ * Round tick values on [min, max]: the step is the smallest 1, 2, 2.5 or 5 x 10^k not below (max - min) / intervals.
  * Example: ticks(0, 1.44, 8) -> step 0.2, values 0, 0.2, ..., 1.4.
  */
 export function ticks(min: number, max: number, intervals: number): { step: number; values: number[] } {
@@ -53,11 +53,12 @@ export function ticks(min: number, max: number, intervals: number): { step: numb
   return { step, values };
 }
 
-/** The next round step above a round step: 1 -> 2 -> 5 -> 10. */
+/** The next tick step above a round step: 1 -> 2 -> 2.5 -> 5 -> 10 (2.5 fills the wide gap between 2 and 5). */
 function nextNice(step: number): number {
   const power = 10 ** Math.floor(Math.log10(step) + 1e-9);
-  const mant = Math.round(step / power);
-  return (mant === 1 ? 2 : mant === 2 ? 5 : 10) * power;
+  const mant = step / power;
+  const next = [2, 2.5, 5, 10].find((m) => m > mant + 1e-9) ?? 10;
+  return next * power;
 }
 
 /** Remove binary noise such as 0.30000000000000004 by rounding to the step's decimals. */

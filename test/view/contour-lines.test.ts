@@ -79,8 +79,23 @@ describe('contour label places', () => {
     const long = { level: 1.2, xy: Float64Array.from([0, 0, 10, 0]) };
     const short = { level: 0.8, xy: Float64Array.from([0, 5, 1, 5]) };
     expect(labelAnchors([long, short], 4, 2)).toEqual([
-      { x: 2.5, y: 0, level: 1.2 },
-      { x: 7.5, y: 0, level: 1.2 },
+      { x: 2.5, y: 0, level: 1.2, rank: 0, line: 0 },
+      { x: 7.5, y: 0, level: 1.2, rank: 0, line: 0 },
     ]);
+  });
+
+  it('offers every line its middle label before any line gets another', () => {
+    const a = { level: 1, xy: Float64Array.from([0, 0, 50, 0]) };
+    const b = { level: 2, xy: Float64Array.from([0, 9, 10, 9]) };
+    const anchors = labelAnchors([a, b], 10, 2);
+    expect(anchors.map((p) => [p.level, p.rank])).toEqual([
+      [1, 0],
+      [2, 0],
+      [1, 1],
+      [1, 1],
+      [1, 2],
+      [1, 2],
+    ]);
+    expect(anchors[0].x).toBe(25);
   });
 });

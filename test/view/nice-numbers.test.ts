@@ -22,5 +22,7 @@ describe('round numbers', () => {
     expect(ticks(0, 1.44, 8)).toEqual({ step: 0.2, values: [0, 0.2, 0.4, 0.6, 0.8, 1, 1.2, 1.4] });
     expect(ticks(0.7, 1.45, 4)).toEqual({ step: 0.2, values: [0.8, 1, 1.2, 1.4] });
     expect(ticks(0, 1, 5).values).toEqual([0, 0.2, 0.4, 0.6, 0.8, 1]);
+    // 1.44 / 6 = 0.24: a 2.5 step rather than jumping to 0.5.
+    expect(ticks(0, 1.44, 6)).toEqual({ step: 0.25, values: [0, 0.25, 0.5, 0.75, 1, 1.25] });
   });
 });

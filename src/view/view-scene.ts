@@ -1,0 +1,138 @@
+/** The WebGL side of the view: renderer, orthographic camera in section units, and the drawn layers in order. */
+
+import { Color, Group, OrthographicCamera, Scene, WebGLRenderer, type Object3D } from 'three';
+import type { ContourLine } from './contour-lines.ts';
+import { FieldLayer } from './field-layer.ts';
+import { FlagLayer } from './flag-layer.ts';
+import { LineLayer } from './line-layer.ts';
+import type { FlagShapes, FluidClip, FieldImage, Polyline, ValueRange, ViewLayers, WallLine } from './types.ts';
+import {
+  BACKGROUND,
+  CONTOUR_CASING_STYLE,
+  CONTOUR_STYLE,
+  INLET_STYLE,
+  OUTLET_STYLE,
+  STREAMLINE_STYLE,
+  WALL_STYLE,
+} from './view-style.ts';
+import { visibleBounds, type ViewState } from './view-transform.ts';
+
+/** Draw order, bottom to top: field, contours, streamlines, flags, walls (walls stay crisp on top of everything). */
+const ORDER = { field: 0, casing: 1, contours: 2, streamlines: 3, flags: 4, walls: 10 } as const;
+
+export class ViewScene {
+  readonly renderer: WebGLRenderer;
+  private readonly scene = new Scene();
+  private readonly camera = new OrthographicCamera(-1, 1, 1, -1, -1, 1);
+  private readonly field = new FieldLayer(ORDER.field);
+  private readonly casing = new LineLayer(CONTOUR_CASING_STYLE, ORDER.casing);
+  private readonly contours = new LineLayer(CONTOUR_STYLE, ORDER.contours);
+  private readonly streamlines = new LineLayer(STREAMLINE_STYLE, ORDER.streamlines);
+  private readonly flags = new FlagLayer(ORDER.flags);
+  private readonly walls = new LineLayer(WALL_STYLE, ORDER.walls);
+  private readonly inlets = new LineLayer(INLET_STYLE, ORDER.walls + 1);
+  private readonly outlets = new LineLayer(OUTLET_STYLE, ORDER.walls + 2);
+  private readonly groups: Record<keyof ViewLayers, Group>;
+
+  constructor(parent: HTMLElement) {
+    this.renderer = new WebGLRenderer({ antialias: true, alpha: false });
+    this.renderer.setClearColor(new Color(BACKGROUND), 1);
+    const canvas = this.renderer.domElement;
+    canvas.style.position = 'absolute';
+    canvas.style.left = canvas.style.top = '0';
+    canvas.style.display = 'block';
+    parent.appendChild(canvas);
+    this.groups = {
+      field: group(this.field.object),
+      contours: group(this.casing.object, this.contours.object),
+      streamlines: group(this.streamlines.object),
+      flags: group(this.flags.group),
+      walls: group(this.walls.object, this.inlets.object, this.outlets.object),
+    };
+    for (const g of Object.values(this.groups)) this.scene.add(g);
+  }
+
+  setField(field: FieldImage | null): void {
+    this.field.setField(field);
+  }
+
+  setClip(clip: FluidClip | null): void {
+    this.field.setClip(clip);
+    this.flags.setClip(clip);
+  }
+
+  setRange(range: ValueRange): void {
+    this.field.setRange(range);
+  }
+
+  setContours(lines: readonly ContourLine[]): void {
+    const flat = lines.map((l) => ({ xy: l.xy, closed: false }));
+    this.casing.setLines(flat);
+    this.contours.setLines(flat);
+  }
+
+  setStreamlines(lines: readonly Polyline[]): void {
+    this.streamlines.setLines(lines);
+  }
+
+  setWalls(walls: readonly WallLine[]): void {
+    this.walls.setLines(walls.filter((w) => w.kind === 'wall'));
+    this.inlets.setLines(walls.filter((w) => w.kind === 'inlet'));
+    this.outlets.setLines(walls.filter((w) => w.kind === 'outlet'));
+  }
+
+  setFlags(flags: FlagShapes): void {
+    this.flags.setFlags(flags);
+  }
+
+  setLayers(layers: ViewLayers): void {
+    for (const key of Object.keys(this.groups) as (keyof ViewLayers)[]) this.groups[key].visible = layers[key];
+  }
+
+  /** Container size in CSS px and the device pixel ratio; lines keep their CSS px widths. */
+  setSize(width: number, height: number, pixelRatio: number): void {
+    this.renderer.setPixelRatio(pixelRatio);
+    this.renderer.setSize(width, height, true);
+    this.flags.setPixelRatio(pixelRatio);
+  }
+
+  render(view: ViewState): void {
+    const b = visibleBounds(view);
+    this.camera.left = b.minX;
+    this.camera.right = b.maxX;
+    this.camera.bottom = b.minY;
+    this.camera.top = b.maxY;
+    this.camera.updateProjectionMatrix();
+    for (const l of [this.inlets, this.outlets]) l.setScale(view.scale);
+    this.flags.setScale(view.scale);
+    this.renderer.render(this.scene, this.camera);
+  }
+
+  /** GPU objects still alive, for leak checks: three counts them as they are created and disposed. */
+  get memory(): { geometries: number; textures: number } {
+    return { ...this.renderer.info.memory };
+  }
+
+  /** Free every geometry, material and texture; the renderer and its canvas go last. */
+  disposeLayers(): void {
+    for (const l of [this.field, this.casing, this.contours, this.streamlines, this.flags, this.walls, this.inlets, this.outlets]) {
+      l.dispose();
+    }
+    this.scene.clear();
+  }
+
+  disposeRenderer(): void {
+    const gl = this.renderer.getContext();
+    this.renderer.renderLists.dispose();
+    this.renderer.dispose();
+    // Browsers keep only a few WebGL contexts alive; give this one back now rather than at garbage collection.
+    gl.getExtension('WEBGL_lose_context')?.loseContext();
+    this.renderer.domElement.remove();
+  }
+}
+
+function group(...objects: Object3D[]): Group {
+  const g = new Group();
+  g.add(...objects);
+  return g;
+}
