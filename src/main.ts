@@ -8,6 +8,7 @@ import { flagShapes } from './app/flag-shapes.ts';
 import { CELLS_BY_DETAIL, DRAG_CELLS } from './app/grid-detail.ts';
 import { fillHelp } from './app/help-overlay.ts';
 import { LiveSolve } from './app/live-solve.ts';
+import { PlotsPanel } from './app/plots-panel.ts';
 import { ReadingsPanel } from './app/readings-panel.ts';
 import { fluidClip, wallLines } from './app/section-shapes.ts';
 import { defaultSettings, parseLevels } from './app/settings.ts';
@@ -41,6 +42,7 @@ const pool = new SolverPool(() => new Worker(new URL('./workers/solver.worker.ts
 const readings = new ReadingsPanel(byId('readings'), {
   onFinding: (f) => view.fitToView({ minX: f.x - f.radius, minY: f.y - f.radius, maxX: f.x + f.radius, maxY: f.y + f.radius }),
 });
+const plots = new PlotsPanel(byId('plots'));
 let lastReply: FieldReply | null = null;
 let editTime = 0;
 /** Times from an edit to the repainted field, ms (read by the browser benchmark). */
@@ -55,6 +57,7 @@ const live = new LiveSolve(pool.live, {
     timings.push({ kind, ms: performance.now() - editTime, cells: reply.nx * reply.ny });
     if (kind === 'full') {
       readings.show(reply, store.doc.units, ms);
+      if (reply.reading) plots.show(reply.reading, store.doc.units);
       readings.clearStale();
       status.clear();
     }
@@ -161,9 +164,8 @@ function applySettings(group: SettingsGroup): void {
   if (group === 'draw' && lastReply) drawField(lastReply);
   if (group === 'solve' || group === 'reading') solve(store.doc, 'edit');
   if (group === 'units' && settings.units !== store.doc.units) {
-    status.show(`This section is drawn in ${store.doc.units}; converting a drawing between units is not offered yet.`, 'warn');
-    settings.units = store.doc.units;
-    gui.controllersRecursive().forEach((c) => c.updateDisplay());
+    store.edit('setUnits', { units: settings.units }, 'open');
+    status.show(`The drawing is now in ${settings.units === 'mm' ? 'millimetres' : 'inches'}.`);
   }
 }
 const gui = buildSettingsPanel(byId('settings-host'), settings, applySettings);

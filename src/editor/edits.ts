@@ -16,6 +16,7 @@ import {
   addVariant, addVariantArgs, deleteVariant, deleteVariantArgs, renameVariant, renameVariantArgs,
   setActiveVariant, setActiveVariantArgs,
 } from './edits-variants.ts';
+import { setUnits, setUnitsArgs } from './edits-units.ts';
 
 /** A key that runs an edit on the current selection. */
 export interface EditShortcut {
@@ -78,6 +79,7 @@ export const EDITS = {
   renameVariant: spec({ name: 'renameVariant', label: 'Rename variant', args: renameVariantArgs, run: renameVariant }),
   setActiveVariant: spec({ name: 'setActiveVariant', label: 'Switch variant', args: setActiveVariantArgs, run: setActiveVariant }),
   deleteVariant: spec({ name: 'deleteVariant', label: 'Delete variant', args: deleteVariantArgs, run: deleteVariant }),
+  setUnits: spec({ name: 'setUnits', label: 'Change units', args: setUnitsArgs, run: setUnits }),
 } as const;
 
 export type EditName = keyof typeof EDITS;

@@ -1,0 +1,74 @@
+/** Plots beside the field: station width and mean speed along the port, and speed along a chosen wall. */
+import type { FlowReading } from '../solver/reading/index.ts';
+import { drawPlot, type PlotSeries } from '../view/line-plot.ts';
+
+const WALL_COLOURS = ['#e8a33d', '#5ec8e5', '#b59cff'];
+
+export class PlotsPanel {
+  private readonly stationsCanvas = document.createElement('canvas');
+  private readonly wallCanvas = document.createElement('canvas');
+  private readonly wallPick = document.createElement('select');
+  private reading: FlowReading | null = null;
+  private units = 'mm';
+
+  constructor(host: HTMLElement) {
+    for (const c of [this.stationsCanvas, this.wallCanvas]) c.style.cssText = 'width:100%;height:150px;display:block';
+    this.wallPick.addEventListener('change', () => this.drawWalls());
+    const pickRow = document.createElement('label');
+    pickRow.className = 'plot-pick';
+    pickRow.append('Wall speed along ', this.wallPick);
+    host.replaceChildren(this.stationsCanvas, pickRow, this.wallCanvas);
+  }
+
+  show(reading: FlowReading, units: string): void {
+    this.reading = reading;
+    this.units = units;
+    const names = reading.walls.map((w) => w.name);
+    const keep = names.includes(this.wallPick.value) ? this.wallPick.value : names.find((n) => n === 'short side') ?? names[0] ?? '';
+    this.wallPick.replaceChildren(...names.map((n) => new Option(n, n, false, n === keep)));
+    this.drawStations();
+    this.drawWalls();
+  }
+
+  private drawStations(): void {
+    const stations = this.reading?.stations ?? [];
+    const width = stations.flatMap((s) => [s.distanceFromInlet, s.width]);
+    const speed = stations.flatMap((s) => [s.distanceFromInlet, s.meanSpeedRatio]);
+    const t = this.reading?.tightest;
+    drawPlot(this.stationsCanvas, {
+      title: 'Along the port (equipotential stations)',
+      xLabel: `distance from inlet, ${this.units}`,
+      leftLabel: `width, ${this.units}`,
+      rightLabel: 'mean speed ratio',
+      series: [
+        { label: `width (${this.units})`, xy: width, colour: '#5ec8e5' },
+        { label: 'mean speed ratio', xy: speed, colour: '#e8a33d', axis: 'right' },
+      ],
+      marks: t ? [{ x: t.distanceFromInlet, label: 'tightest' }] : [],
+    });
+  }
+
+  private drawWalls(): void {
+    const name = this.wallPick.value;
+    const wall = this.reading?.walls.find((w) => w.name === name);
+    const detachment = this.reading?.detachments.find((d) => d.name === name)?.detachment;
+    const series: PlotSeries[] = wall ? [{ label: `${name}`, xy: sAndRatio(wall.samples), colour: WALL_COLOURS[0] }] : [];
+    drawPlot(this.wallCanvas, {
+      title: `Speed ratio along the ${name || 'wall'}`,
+      xLabel: `arc length from upstream end, ${this.units}`,
+      leftLabel: 'speed ratio',
+      series,
+      marks: detachment ? [{ x: detachment.s, label: 'leaves wall' }] : [],
+    });
+  }
+}
+
+/** Wall samples (x, y, s, ratio per sample) as (s, ratio) pairs. */
+function sAndRatio(samples: Float64Array): Float64Array {
+  const out = new Float64Array((samples.length / 4) * 2);
+  for (let k = 0, j = 0; k + 3 < samples.length; k += 4, j += 2) {
+    out[j] = samples[k + 2];
+    out[j + 1] = samples[k + 3];
+  }
+  return out;
+}
