@@ -5,9 +5,10 @@ import { GeometryError } from '../geometry/index.ts';
 import { EXIT_INTERNAL_ERROR, EXIT_OK, EXIT_USER_ERROR, type CliIO, type Command } from './command.ts';
 import { UserError } from './errors.ts';
 import { checkCommand } from './check.ts';
+import { solveCommand } from './solve.ts';
 
 /** Every subcommand; a new one (e.g. solve) is one file and one entry here. */
-export const COMMANDS: readonly Command[] = [checkCommand];
+export const COMMANDS: readonly Command[] = [checkCommand, solveCommand];
 
 const HELP_FLAGS = new Set(['-h', '--help', 'help']);
 

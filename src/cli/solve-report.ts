@@ -1,0 +1,139 @@
+/** What `portwright solve` reports about one solved variant: plain data shared by the readable and the JSON output. */
+
+import type { Units } from '../document/types.ts';
+import { pointInRegion } from '../geometry/index.ts';
+import { probeFlow } from '../solver/probe.ts';
+import type { ReadingSummary } from '../solver/reading/index.ts';
+import type { FlowDomain, SolveResult, WallSpeeds } from '../solver/types.ts';
+
+type Detachment = ReadingSummary['walls'][number]['detachment'];
+
+/** One side of a closed wall (an island), read from where the flow divides on it to where it leaves. */
+export interface WallSideReport {
+  /** "left of the flow" or "right of the flow", looking downstream. */
+  readonly side: string;
+  readonly peakSpeedRatio: number;
+  readonly detachment: Detachment;
+}
+
+export interface WallReport {
+  readonly name: string;
+  /** Highest speed ratio over the wall's samples (NaN when none is solved). */
+  readonly peakSpeedRatio: number;
+  /** Cp recovered after the peak, for an open wall (undefined for a closed island wall, see sides). */
+  readonly pressureRecovered: number | undefined;
+  /** Where the boundary layer likely leaves the wall (s from the wall's upstream end); for an island, the earlier side. */
+  readonly detachment: Detachment;
+  /** Both sides of a closed island wall; undefined for an open wall. */
+  readonly sides: readonly WallSideReport[] | undefined;
+  /** [x, y, s, speed ratio] in ring order, s from the wall's first point; lengths in document units. */
+  readonly samples: readonly (readonly number[])[];
+}
+
+export interface ProbeReport {
+  readonly x: number;
+  readonly y: number;
+  /** False when the point lies in solid metal or outside the section. */
+  readonly inFluid: boolean;
+  /** NaN outside the fluid (null in JSON). */
+  readonly potential: number;
+  readonly speedRatio: number;
+}
+
+/** Everything solve prints; lengths in the document's units, speeds as ratios to the mean inlet speed. */
+export interface SolveReport {
+  readonly title: string;
+  readonly variant: string;
+  readonly units: Units;
+  readonly grid: { readonly nx: number; readonly ny: number; readonly cells: number; readonly solvedCells: number; readonly spacing: number };
+  /** False when the iteration cap came before the tolerance. */
+  readonly converged: boolean;
+  readonly iterations: number;
+  readonly residual: number;
+  /** Flux per unit potential drop, per unit depth (dimensionless in 2D). */
+  readonly conductance: number;
+  readonly fluxImbalance: number;
+  /** Potential drop per length unit at the inlet (flux / inlet length) at a unit potential drop. */
+  readonly inletMeanSpeed: number;
+  readonly peak: SolveResult['peak'];
+  readonly probes: readonly ProbeReport[];
+  readonly tightest: ReadingSummary['tightest'];
+  readonly slowShare: number;
+  readonly portSlowShare: number;
+  readonly findings: readonly string[];
+  readonly stations: ReadingSummary['stations'];
+  readonly walls: readonly WallReport[];
+}
+
+export interface SolvedVariant {
+  readonly title: string;
+  readonly variant: string;
+  readonly units: Units;
+  readonly domain: FlowDomain;
+  readonly result: SolveResult;
+  readonly summary: ReadingSummary;
+  readonly converged: boolean;
+}
+
+/** The report of a solved variant, with `probes` (document units) read from the field. */
+export function buildSolveReport(solved: SolvedVariant, probes: readonly (readonly [number, number])[]): SolveReport {
+  const { result, summary } = solved;
+  const { grid } = result;
+  return {
+    title: solved.title,
+    variant: solved.variant,
+    units: solved.units,
+    grid: { nx: grid.nx, ny: grid.ny, cells: grid.nx * grid.ny, solvedCells: countFinite(result.phi), spacing: grid.h },
+    converged: solved.converged,
+    iterations: result.iterations,
+    residual: result.residual,
+    conductance: result.conductance,
+    fluxImbalance: result.fluxImbalance,
+    inletMeanSpeed: result.inletMeanSpeed,
+    peak: result.peak,
+    probes: probes.map(([x, y]) => probeReport(solved.domain, result, x, y)),
+    tightest: summary.tightest,
+    slowShare: summary.slowShare,
+    portSlowShare: summary.portSlowShare,
+    findings: summary.findings,
+    stations: summary.stations,
+    walls: result.walls.map((wall) => wallReport(wall, summary)),
+  };
+}
+
+function probeReport(domain: FlowDomain, result: SolveResult, x: number, y: number): ProbeReport {
+  if (!pointInRegion(domain, x, y)) return { x, y, inFluid: false, potential: NaN, speedRatio: NaN };
+  return { x, y, inFluid: true, ...probeFlow(result, x, y) };
+}
+
+/**
+ * The wall's samples with the reading's verdict. The reading names an open wall as the solver does; a closed island
+ * wall it reads as two paths, "<name>, left of the flow" and "<name>, right of the flow", both measured from the
+ * point where the flow divides, so the side with the smaller s leaves the wall first.
+ */
+function wallReport(wall: WallSpeeds, summary: ReadingSummary): WallReport {
+  const samples: number[][] = [];
+  let peak = NaN;
+  for (let k = 0; k < wall.samples.length; k += 4) {
+    samples.push([wall.samples[k], wall.samples[k + 1], wall.samples[k + 2], wall.samples[k + 3]]);
+    if (Number.isFinite(wall.samples[k + 3]) && !(wall.samples[k + 3] <= peak)) peak = wall.samples[k + 3];
+  }
+  const open = summary.walls.find((w) => w.name === wall.name);
+  if (open !== undefined) {
+    return { name: wall.name, peakSpeedRatio: peak, pressureRecovered: open.pressureRecovered, detachment: open.detachment, sides: undefined, samples };
+  }
+  const prefix = `${wall.name}, `;
+  const sides = summary.walls
+    .filter((w) => w.name.startsWith(prefix))
+    .map((w) => ({ side: w.name.slice(prefix.length), peakSpeedRatio: w.peakSpeedRatio, detachment: w.detachment }));
+  const first = sides
+    .map((s) => s.detachment)
+    .reduce<Detachment>((best, d) => (d !== null && (best === null || d.s < best.s) ? d : best), null);
+  return { name: wall.name, peakSpeedRatio: peak, pressureRecovered: undefined, detachment: first, sides: sides.length > 0 ? sides : undefined, samples };
+}
+
+function countFinite(values: Float64Array): number {
+  let n = 0;
+  for (const v of values) if (Number.isFinite(v)) n++;
+  return n;
+}

@@ -1,0 +1,98 @@
+/** The readable summary `portwright solve` prints: the solve, the flow reading, each wall, findings and probes. */
+
+import type { DetachmentMethod } from '../solver/reading/index.ts';
+import type { ProbeReport, SolveReport, WallReport } from './solve-report.ts';
+
+/** Printed last, every time: what the numbers are and are not. */
+export const IDEAL_FLOW_CAUTION =
+  'Caution: ideal 2D flow (no viscosity, per unit depth); confirm on a flow bench before removing metal.';
+
+const METHOD_WORDS: Readonly<Record<DetachmentMethod, string>> = {
+  thwaites: 'laminar layer, Thwaites',
+  head: 'turbulent layer, Head',
+  stratford: 'turbulent layer, Stratford',
+};
+
+/** The summary as lines. */
+export function solveReportLines(report: SolveReport): string[] {
+  const f = placeFormat(report.units);
+  const g = report.grid;
+  const lines = [
+    report.title,
+    `  variant: "${report.variant}", units: ${report.units}`,
+    `  grid: ${g.nx} x ${g.ny} (${g.cells.toLocaleString('en-US')} cells, ${g.solvedCells.toLocaleString('en-US')} in the flow), ` +
+      `spacing ${sig(g.spacing, 3)} ${report.units}`,
+    `  solve: ${report.iterations} iterations, relative residual ${report.residual.toExponential(1)}` +
+      (report.converged ? '' : ' (stopped at the iteration cap before reaching the tolerance)'),
+    `  conductance: ${sig(report.conductance, 4)} per unit depth (flux per unit potential drop)`,
+    `  flux imbalance: ${report.fluxImbalance.toExponential(1)} (worst station against the total)`,
+    `  peak speed ratio: ${ratio(report.peak.speedRatio)} at ${f.at(report.peak.x, report.peak.y)} (kept clear of sharp corners)`,
+    `  tightest section ahead of the valve: ${tightestText(report, f)}`,
+    `  slow share: ${percent(report.slowShare)} of the section, ${percent(report.portSlowShare)} of the port`,
+    '',
+    'walls (peak speed ratio; where the flow likely leaves the wall, measured from its upstream end):',
+  ];
+  const nameWidth = Math.max(...report.walls.map((w) => w.name.length));
+  for (const wall of report.walls) lines.push(...wallLines(wall, nameWidth, f));
+  lines.push('', report.findings.length > 0 ? 'findings:' : 'findings: none');
+  for (const finding of report.findings) lines.push(`  - ${finding}`);
+  if (report.probes.length > 0) {
+    lines.push('', 'probes (potential 1 at the inlet, 0 at the outlet):');
+    for (const probe of report.probes) lines.push(`  ${f.at(probe.x, probe.y)}: ${probeText(probe)}`);
+  }
+  lines.push('', IDEAL_FLOW_CAUTION);
+  return lines;
+}
+
+/** Lengths and points in the document's units. */
+interface PlaceFormat {
+  /** A bare number: mm to 0.1, inch to 0.001, as fine as a tracing is accurate. */
+  readonly len: (value: number) => string;
+  /** A length with its unit. */
+  readonly dist: (value: number) => string;
+  /** A point with its unit. */
+  readonly at: (x: number, y: number) => string;
+}
+
+function placeFormat(units: SolveReport['units']): PlaceFormat {
+  const digits = units === 'mm' ? 1 : 3;
+  const len = (value: number): string => (Number.isFinite(value) ? value.toFixed(digits) : '-');
+  return { len, dist: (value) => `${len(value)} ${units}`, at: (x, y) => `(${len(x)}, ${len(y)}) ${units}` };
+}
+
+function wallLines(wall: WallReport, nameWidth: number, f: PlaceFormat): string[] {
+  const head = `  ${wall.name.padEnd(nameWidth)}  ${ratio(wall.peakSpeedRatio).padStart(5)}`;
+  if (wall.sides === undefined) return [`${head}  ${detachmentText(wall.detachment, f)}`];
+  return [head, ...wall.sides.map((side) => `    ${side.side}: peak ${ratio(side.peakSpeedRatio)}, ${detachmentText(side.detachment, f)}`)];
+}
+
+function detachmentText(d: WallReport['detachment'], f: PlaceFormat): string {
+  if (d === null) return 'stays on';
+  return `leaves at ${f.at(d.x, d.y)}, ${f.dist(d.s)} along (${METHOD_WORDS[d.method]})`;
+}
+
+function tightestText(report: SolveReport, f: PlaceFormat): string {
+  const t = report.tightest;
+  if (t === null) return 'none found';
+  return `${f.dist(t.width)} wide, ${f.dist(t.distanceFromInlet)} from the inlet, from ${f.at(t.x1, t.y1)} to ${f.at(t.x2, t.y2)}`;
+}
+
+function probeText(probe: ProbeReport): string {
+  if (!probe.inFluid) return 'outside the fluid';
+  if (!Number.isFinite(probe.potential)) return 'no solved flow here (a pocket the flow does not reach)';
+  return `potential ${probe.potential.toFixed(4)}, speed ratio ${ratio(probe.speedRatio)}`;
+}
+
+function ratio(value: number): string {
+  return Number.isFinite(value) ? value.toFixed(2) : '-';
+}
+
+function sig(value: number, digits: number): string {
+  return Number.isFinite(value) ? String(Number(value.toPrecision(digits))) : '-';
+}
+
+function percent(share: number): string {
+  if (!Number.isFinite(share)) return '-';
+  const p = share * 100;
+  return `${p >= 1 ? p.toFixed(1) : p.toPrecision(2)}%`;
+}
