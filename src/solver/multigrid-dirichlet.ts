@@ -7,13 +7,13 @@
  * linearly to zero at the boundary. Restriction applies the transpose, so the V-cycle stays symmetric.
  */
 import type { Stencil } from './assemble.ts';
+import { bilinearWeights } from './multigrid-bilinear.ts';
 
 /** Transfer context of one fine level and its coarse level. */
 export interface TransferPair {
   readonly fine: Stencil;
   readonly coarse: Stencil;
-  /** Coarse neighbour towards each fine column / row (see neighbourIndex). */
-  readonly colN: Int32Array;
+  /** Coarse neighbour row towards each fine row (see neighbourIndex). */
   readonly rowN: Int32Array;
   /** Active fine cells with a Dirichlet coupling, i + j * nx, ascending. */
   readonly dirichlet: Int32Array;
@@ -33,42 +33,22 @@ export function dirichletCells(s: Stencil): Int32Array {
   return Int32Array.from(out);
 }
 
-/** Bilinear prolongation at fine cell (i, j) from the coarse padded vector (same weights as prolongRow). */
+/** Scratch for bilinearWeights (at most 4 terms). */
+const CELLS = new Int32Array(4);
+const WEIGHTS = new Float64Array(4);
+
+/** Bilinear prolongation at fine cell (i, j) from the coarse padded vector (same operator as prolongRow). */
 function bilinearAt(t: TransferPair, i: number, j: number, coarseX: Float64Array): number {
-  const ncx = t.coarse.nx;
-  const act = t.coarse.active;
-  const rowC = (j >> 1) * ncx;
-  const rowD = t.rowN[j] * ncx;
-  const c0 = rowC + (i >> 1);
-  if (act[c0] === 0) return 0;
-  const c1 = rowC + t.colN[i];
-  const c2 = rowD + (i >> 1);
-  const c3 = rowD + t.colN[i];
-  const a1 = 3 * act[c1];
-  const a2 = 3 * act[c2];
-  const a3 = act[c3];
-  return (9 * coarseX[c0 + ncx] + a1 * coarseX[c1 + ncx] + a2 * coarseX[c2 + ncx] + a3 * coarseX[c3 + ncx]) / (9 + a1 + a2 + a3);
+  const n = bilinearWeights(t.coarse, i, j, t.rowN[j], CELLS, WEIGHTS);
+  let value = 0;
+  for (let m = 0; m < n; m++) value += WEIGHTS[m] * coarseX[CELLS[m] + t.coarse.nx];
+  return value;
 }
 
 /** Transpose of bilinearAt: adds amount * weight to each coarse cell fine cell (i, j) draws from. */
 function scatterBilinear(t: TransferPair, i: number, j: number, amount: number, coarseB: Float64Array): void {
-  const ncx = t.coarse.nx;
-  const act = t.coarse.active;
-  const rowC = (j >> 1) * ncx;
-  const rowD = t.rowN[j] * ncx;
-  const c0 = rowC + (i >> 1);
-  if (act[c0] === 0) return;
-  const c1 = rowC + t.colN[i];
-  const c2 = rowD + (i >> 1);
-  const c3 = rowD + t.colN[i];
-  const a1 = 3 * act[c1];
-  const a2 = 3 * act[c2];
-  const a3 = act[c3];
-  const scale = amount / (9 + a1 + a2 + a3);
-  coarseB[c0] += 9 * scale;
-  coarseB[c1] += a1 * scale;
-  coarseB[c2] += a2 * scale;
-  coarseB[c3] += a3 * scale;
+  const n = bilinearWeights(t.coarse, i, j, t.rowN[j], CELLS, WEIGHTS);
+  for (let m = 0; m < n; m++) coarseB[CELLS[m]] += WEIGHTS[m] * amount;
 }
 
 /**

@@ -46,7 +46,7 @@ export function buildMultigrid(fine: Stencil, options: MultigridOptions = {}): M
   while (s.nx * s.ny > COARSEST_MAX_CELLS && (s.nx > 1 || s.ny > 1)) {
     const c = coarsen(s, scale);
     const down: TransferPair = {
-      fine: s, coarse: c, colN: neighbourIndex(s.nx, c.nx), rowN: neighbourIndex(s.ny, c.ny), dirichlet: dirichletCells(s),
+      fine: s, coarse: c, rowN: neighbourIndex(s.ny, c.ny), dirichlet: dirichletCells(s),
     };
     levels.push({ stencil: s, x, b, down });
     s = c;
@@ -117,7 +117,7 @@ function prolongAndPostSmooth(t: TransferPair, sweeps: number, x: Float64Array, 
   let dot = 0;
   for (let j = 0; j < ny + 2; j++) {
     if (j < ny) {
-      prolongRow(s, x, j, t.coarse, coarseX, t.colN, t.rowN);
+      prolongRow(s, x, j, t.coarse, coarseX, t.rowN[j]);
       const end = (j + 1) * nx;
       while (next < dirichlet.length && dirichlet[next] < end) correctProlongCell(t, x, coarseX, dirichlet[next++]);
     }
@@ -140,7 +140,7 @@ function prolongAndPostSmooth(t: TransferPair, sweeps: number, x: Float64Array, 
 function restrictWithDirichlet(
   t: TransferPair, x: Float64Array, b: Float64Array, coarseB: Float64Array, j: number, cursor: { next: number },
 ): void {
-  restrictRow(t.fine, x, b, j, t.coarse, coarseB, t.colN, t.rowN);
+  restrictRow(t.fine, x, b, j, t.coarse, coarseB, t.rowN[j]);
   const end = (j + 1) * t.fine.nx;
   const cells = t.dirichlet;
   while (cursor.next < cells.length && cells[cursor.next] < end) correctRestrictCell(t, x, b, coarseB, cells[cursor.next++]);
