@@ -8,6 +8,17 @@ import { COLOUR_BAR, LABEL_FONT, LABEL_TEXT, SMALL_FONT } from './view-style.ts'
 
 export const COLOUR_BAR_TITLE = 'speed ratio';
 
+/** Height of the colour bar panel in a container `containerHeight` CSS px tall. */
+export function colourBarHeight(containerHeight: number): number {
+  return Math.max(120, Math.min(COLOUR_BAR.maxHeight, containerHeight * 0.55));
+}
+
+/** Where the panel sits in a container of the given size, CSS px (labels keep out of it). */
+export function colourBarBox(width: number, height: number): { x0: number; y0: number; x1: number; y1: number } {
+  const m = COLOUR_BAR.margin;
+  return { x0: width - m - COLOUR_BAR.width, y0: m, x1: width - m, y1: m + colourBarHeight(height) };
+}
+
 export class ColourBar {
   readonly canvas: HTMLCanvasElement;
   private readonly ctx: CanvasRenderingContext2D;
@@ -31,7 +42,7 @@ export class ColourBar {
    */
   draw(range: ValueRange, peak: number, containerHeight: number, pixelRatio: number): void {
     const width = COLOUR_BAR.width;
-    const height = Math.max(120, Math.min(COLOUR_BAR.maxHeight, containerHeight * 0.55));
+    const height = colourBarHeight(containerHeight);
     this.canvas.width = Math.round(width * pixelRatio);
     this.canvas.height = Math.round(height * pixelRatio);
     this.canvas.style.width = `${width}px`;

@@ -26,6 +26,13 @@ export interface FlowViewOptions {
   readonly layers?: Partial<T.ViewLayers>;
 }
 
+export interface ViewDiagnostics {
+  readonly scaleBarLabel: string;
+  readonly contourLabels: number;
+  readonly frames: number;
+  readonly memory: { readonly geometries: number; readonly textures: number };
+}
+
 export class FlowView {
   /** False stops all drag panning (wheel zoom still works). */
   panEnabled = true;
@@ -193,12 +200,12 @@ export class FlowView {
   }
 
   /**
-   * What the last frame drew, for checks and status lines: the scale bar text (e.g. "10 mm"), the number of contour
-   * labels placed, and the GPU geometries and textures alive (three's count; both 0 after dispose()).
+   * What the view has drawn, for checks and status lines: the scale bar text (e.g. "10 mm"), contour labels placed
+   * in the last frame, frames rendered so far, and GPU geometries and textures alive (both 0 after dispose()).
    */
-  get diagnostics(): { scaleBarLabel: string; contourLabels: number; memory: { geometries: number; textures: number } } {
+  get diagnostics(): ViewDiagnostics {
     const o = this.overlay;
-    return { scaleBarLabel: o.scaleBarLabel, contourLabels: o.contourLabelCount, memory: this.scene.memory };
+    return { scaleBarLabel: o.scaleBarLabel, contourLabels: o.contourLabelCount, frames: this.scene.frames, memory: this.scene.memory };
   }
 
   /** Free every GPU object, remove the canvases and every listener. The view cannot be used afterwards. */

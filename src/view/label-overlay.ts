@@ -1,5 +1,6 @@
 /** A 2D canvas over the WebGL canvas for text and markers, redrawn with every frame of the view. */
 
+import { colourBarBox } from './colour-bar.ts';
 import type { LabelAnchor } from './contour-lines.ts';
 import { drawContourLabels } from './contour-labels.ts';
 import { drawEndLabels, drawFlagLineLabels, drawMarkers, drawScaleBar, type Box } from './overlay-draw.ts';
@@ -52,8 +53,8 @@ export class LabelOverlay {
     // Draw in CSS px; the transform scales to device px so text is sharp on high-DPI screens.
     ctx.setTransform(this.pixelRatio, 0, 0, this.pixelRatio, 0, 0);
     const { layers } = content;
-    // Flags and end labels first: contour labels then keep clear of the boxes they cover.
-    const blocked: Box[] = [];
+    // Flags, end labels, scale bar and colour bar first: contour labels then keep clear of the boxes they cover.
+    const blocked: Box[] = [colourBarBox(view.width, view.height)];
     if (layers.walls && content.wallBounds) {
       const b = content.wallBounds;
       const centre = sectionToScreen(view, (b.minX + b.maxX) / 2, (b.minY + b.maxY) / 2);
@@ -63,7 +64,9 @@ export class LabelOverlay {
       blocked.push(...drawFlagLineLabels(ctx, view, content.flags.lines));
       blocked.push(...drawMarkers(ctx, view, content.flags.markers));
     }
-    this.scaleBarLabel = drawScaleBar(ctx, view, content.units);
+    const scale = drawScaleBar(ctx, view, content.units);
+    this.scaleBarLabel = scale.label;
+    blocked.push(scale.box);
     this.contourLabelCount = layers.contours ? drawContourLabels(ctx, view, content.anchors, blocked) : 0;
   }
 

@@ -141,13 +141,16 @@ export function drawEndLabels(ctx: Ctx, view: ViewState, walls: readonly WallLin
       ny = -ny;
     }
     const colour = w.kind === 'inlet' ? INLET_STYLE.colour : OUTLET_STYLE.colour;
-    boxes.push(haloText(ctx, w.kind, m.x + nx * 16, m.y + ny * 16, colour, LABEL_FONT));
+    // Clear of the line by 8 px whatever the direction: half the text's extent along the normal, plus the gap.
+    ctx.font = LABEL_FONT;
+    const off = 8 + Math.abs(nx) * (ctx.measureText(w.kind).width / 2) + Math.abs(ny) * 7;
+    boxes.push(haloText(ctx, w.kind, m.x + nx * off, m.y + ny * off, colour, LABEL_FONT));
   }
   return boxes;
 }
 
-/** Scale bar in the lower left corner: a round length in the document's units. */
-export function drawScaleBar(ctx: Ctx, view: ViewState, units: LengthUnits): string {
+/** Scale bar in the lower left corner: a round length in the document's units. Returns its text and its box. */
+export function drawScaleBar(ctx: Ctx, view: ViewState, units: LengthUnits): { label: string; box: Box } {
   const bar = scaleBar(view.scale, SCALE_BAR_MAX_PX, units);
   const x = 16;
   const y = view.height - 16;
@@ -167,6 +170,6 @@ export function drawScaleBar(ctx: Ctx, view: ViewState, units: LengthUnits): str
   }
   ctx.textAlign = 'left';
   ctx.textBaseline = 'bottom';
-  haloText(ctx, bar.label, x, y - 8, LABEL_TEXT, SMALL_FONT);
-  return bar.label;
+  const text = haloText(ctx, bar.label, x, y - 8, LABEL_TEXT, SMALL_FONT);
+  return { label: bar.label, box: { x0: x - 3, y0: text.y0, x1: Math.max(x + bar.px, text.x1) + 3, y1: y + 3 } };
 }

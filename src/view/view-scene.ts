@@ -108,6 +108,11 @@ export class ViewScene {
     this.renderer.render(this.scene, this.camera);
   }
 
+  /** Frames rendered so far (three's count). */
+  get frames(): number {
+    return this.renderer.info.render.frame;
+  }
+
   /** GPU objects still alive, for leak checks: three counts them as they are created and disposed. */
   get memory(): { geometries: number; textures: number } {
     return { ...this.renderer.info.memory };

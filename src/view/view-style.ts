@@ -40,7 +40,7 @@ export const LABEL_GAP_PX = 150;
 export const LABEL_CLEAR_PX = 34;
 
 /** Colour bar box, CSS px. */
-export const COLOUR_BAR = { width: 84, barWidth: 16, maxHeight: 260, margin: 12, panel: 'rgba(23, 25, 28, 0.88)' } as const;
+export const COLOUR_BAR = { width: 96, barWidth: 16, maxHeight: 260, margin: 12, panel: 'rgba(23, 25, 28, 0.88)' } as const;
 
 /** Space kept free when fitting the section to the view, CSS px. */
 export const FIT_INSETS = { left: 24, right: COLOUR_BAR.width + 2 * COLOUR_BAR.margin, top: 24, bottom: 44 } as const;

@@ -156,6 +156,44 @@ describe('flow view in a browser', () => {
     });
   });
 
+  it('pinches with two fingers so the picture stays under both of them', async () => {
+    const r = await inPage(async (h) => {
+      const c = h.container as HTMLElement;
+      const fire = (type: string, id: number, x: number): void => {
+        c.dispatchEvent(new PointerEvent(type, { pointerId: id, pointerType: 'touch', clientX: x, clientY: 300, bubbles: true, cancelable: true }));
+      };
+      const t0 = h.view.transform;
+      const a = h.view.screenToSection(300, 300);
+      const b = h.view.screenToSection(500, 300);
+      fire('pointerdown', 11, 300);
+      fire('pointerdown', 12, 500);
+      fire('pointermove', 12, 600);
+      fire('pointerup', 12, 600);
+      fire('pointerup', 11, 300);
+      await h.nextFrame();
+      return { ratio: h.view.transform.scale / t0.scale, a: h.view.sectionToScreen(a.x, a.y), b: h.view.sectionToScreen(b.x, b.y) };
+    });
+    // Fingers 200 px apart, then 300 px: 1.5 times closer.
+    expect(r.ratio).toBeCloseTo(1.5, 9);
+    expect(r.a.x).toBeCloseTo(300, 6);
+    expect(r.b.x).toBeCloseTo(600, 6);
+    expect(r.a.y).toBeCloseTo(300, 6);
+  });
+
+  it('renders on demand: many requests before a frame make one render', async () => {
+    const frames = await inPage(async (h) => {
+      await h.nextFrame();
+      const before = h.view.diagnostics.frames;
+      for (let k = 0; k < 10; k++) h.view.requestRender();
+      await h.nextFrame();
+      const afterRequests = h.view.diagnostics.frames - before;
+      await h.nextFrame();
+      const idle = h.view.diagnostics.frames - before - afterRequests;
+      return { afterRequests, idle };
+    });
+    expect(frames).toEqual({ afterRequests: 1, idle: 0 });
+  });
+
   it('fits the section back into view and saves a screenshot', async () => {
     const scale = await inPage(async (h) => {
       h.view.fitToView();
