@@ -1,0 +1,72 @@
+/**
+ * Solver benchmark (npm run bench): the full solve of a realistic port section at 64k to 4M cells, each size in
+ * its own process so its peak memory is its own, against plain SOR on the same system. Times are medians of
+ * wall-clock time (other work on the machine shows up in them; CPU time is printed beside them).
+ * Environment: BENCH_SIZES=65536,262144 to pick sizes; BENCH_SOR=0 to skip the SOR baseline.
+ */
+import { spawnSync } from 'node:child_process';
+import { loadavg } from 'node:os';
+import { fileURLToPath } from 'node:url';
+import { SAMPLE } from './bench-problem.ts';
+import { runSize, type SizeReport } from './bench-size.ts';
+
+const SIZES = [65_536, 262_144, 1_048_576, 4_194_304];
+const RUNS = (cells: number) => (cells > 2_000_000 ? 3 : 5);
+/** SOR factor spans are scanned up to this size; larger sizes reuse the best span found. */
+const SCAN_UP_TO = 262_144;
+
+if (process.argv[2] === '--child') {
+  const args = JSON.parse(process.argv[3]) as Parameters<typeof runSize>[0];
+  console.log(JSON.stringify(runSize(args)));
+} else {
+  main();
+}
+
+function main(): void {
+  const sizes = process.env.BENCH_SIZES ? process.env.BENCH_SIZES.split(',').map(Number) : SIZES;
+  const withSor = process.env.BENCH_SOR !== '0';
+  console.log(`Portwright solver benchmark: ${SAMPLE}, tolerance 1e-8, load average ${loadavg().map((l) => l.toFixed(1)).join(' ')}`);
+  const reports: SizeReport[] = [];
+  let spans = 0;
+  for (const cells of sizes) {
+    const report = inChild({ cells, runs: RUNS(cells), sor: withSor ? (cells <= SCAN_UP_TO || spans === 0 ? 'scan' : spans) : 'skip' });
+    if (report.sor && cells <= SCAN_UP_TO) spans = report.sor.spans;
+    reports.push(report);
+    console.log(describe(report));
+  }
+  console.log(`\n${table(reports)}\nload average at the end ${loadavg().map((l) => l.toFixed(1)).join(' ')}`);
+}
+
+function inChild(args: Parameters<typeof runSize>[0]): SizeReport {
+  const script = fileURLToPath(import.meta.url);
+  const out = spawnSync(process.execPath, [...process.execArgv, script, '--child', JSON.stringify(args)], { encoding: 'utf8', maxBuffer: 1 << 24 });
+  if (out.status !== 0) throw new Error(`benchmark child for ${args.cells} cells failed:\n${out.stderr}`);
+  const lines = out.stdout.trim().split('\n');
+  return JSON.parse(lines[lines.length - 1]) as SizeReport;
+}
+
+function describe(r: SizeReport): string {
+  const p = r.phases;
+  const sor = r.sor
+    ? `SOR (omega ${r.sor.omega.toFixed(5)}, ${r.sor.sweeps} sweeps) ${r.sor.converged ? `${fmtMs(r.sor.ms)}` : `stopped at ${fmtMs(r.sor.ms)} with residual ${r.sor.residual.toExponential(1)}`}`
+    : 'SOR skipped';
+  return `${r.nx} x ${r.ny}: phases rasterise ${fmtMs(p.rasterise)}, connect ${fmtMs(p.connect)}, solve ${fmtMs(p.solve)} ` +
+    `(setup ${fmtMs(p.setup)} + MG-PCG ${fmtMs(p.pcg)}), wall speeds ${fmtMs(p.walls)}; ${sor}`;
+}
+
+function table(reports: readonly SizeReport[]): string {
+  const head = ['cells', 'grid', 'iter', 'median ms', 'cpu ms', 'ns/cell', 'peak MB', 'buffers MB', 'MG-PCG ms', 'SOR ms', 'SOR residual', 'SOR / MG-PCG'];
+  const rows = reports.map((r) => [
+    r.cells.toLocaleString('en-US'), `${r.nx}x${r.ny}`, String(r.iterations), r.medianMs.toFixed(0), r.medianCpuMs.toFixed(0),
+    ((r.medianMs * 1e6) / (r.nx * r.ny)).toFixed(0), r.peakRssMb.toFixed(0), r.arrayBuffersMb.toFixed(0), r.linearMs.toFixed(0),
+    r.sor ? `${r.sor.converged ? '' : '>'}${r.sor.ms.toFixed(0)}` : '-', r.sor ? r.sor.residual.toExponential(1) : '-',
+    r.sor ? `${r.sor.converged ? '' : '>'}${(r.sor.ms / r.linearMs).toFixed(0)}x` : '-',
+  ]);
+  const widths = head.map((h, c) => Math.max(h.length, ...rows.map((row) => row[c].length)));
+  const line = (cells: readonly string[]) => cells.map((cell, c) => cell.padStart(widths[c])).join('  ');
+  return [line(head), ...rows.map(line)].join('\n');
+}
+
+function fmtMs(ms: number): string {
+  return ms >= 10_000 ? `${(ms / 1000).toFixed(1)} s` : `${ms.toFixed(0)} ms`;
+}
