@@ -38,3 +38,10 @@ export function utf8Length(text: string): number {
   }
   return bytes;
 }
+
+/** Longest length a part may have (diameters, widths, lift), document units: the same bound as a coordinate. */
+export const MAX_PART_LENGTH = MAX_COORDINATE;
+/** Largest measured port area, document units squared. */
+export const MAX_PORT_AREA = MAX_COORDINATE * MAX_COORDINATE;
+/** Largest lean of the valve axis from straight down, degrees (real heads lean well under this). */
+export const MAX_VALVE_INCLINATION_DEG = 75;

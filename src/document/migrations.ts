@@ -5,7 +5,7 @@
 
 import { z } from 'zod';
 import { FORMAT_NAME, type Section, type Settings, type Units } from './types.ts';
-import { sectionSchema, titleSchema, unitsSchema } from './schema.ts';
+import { documentV2Schema, sectionSchemaBeforeParts, titleSchema, unitsSchema } from './schema.ts';
 
 /** Format version 1: one section at the top level, no variants, no settings. */
 export const documentV1Schema = z.strictObject(
@@ -14,7 +14,7 @@ export const documentV1Schema = z.strictObject(
     version: z.literal(1, { error: 'must be 1' }),
     title: titleSchema,
     units: unitsSchema,
-    section: sectionSchema,
+    section: sectionSchemaBeforeParts,
   },
   { error: 'must be a section document (an object)' },
 );
@@ -47,6 +47,14 @@ function v1ToV2(doc: z.output<typeof documentV1Schema>): DocumentV2Shape {
   };
 }
 
+/**
+ * Version 2 to 3: variants may carry parametric parts and outlines anchor corners, both optional,
+ * so a version-2 document is already a version-3 one once its version says so.
+ */
+function v2ToV3(doc: z.output<typeof documentV2Schema>): unknown {
+  return { ...doc, version: 3 };
+}
+
 /** One step: the schema of version `from` and the lift to version `from + 1`. */
 export interface Migration {
   readonly from: number;
@@ -55,4 +63,7 @@ export interface Migration {
 }
 
 /** Every older version in order; MIGRATIONS[i].from === i + 1. */
-export const MIGRATIONS: readonly Migration[] = [{ from: 1, schema: documentV1Schema, up: v1ToV2 }];
+export const MIGRATIONS: readonly Migration[] = [
+  { from: 1, schema: documentV1Schema, up: v1ToV2 },
+  { from: 2, schema: documentV2Schema, up: v2ToV3 },
+];

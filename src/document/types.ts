@@ -41,6 +41,11 @@ export interface Vertex {
   readonly at: Point;
   /** Fillet radius in document units; absent or 0 means a sharp corner. */
   readonly filletRadius?: number;
+  /**
+   * Marks one of the two corners of the section outline where the generated seat, deck and test bore join the
+   * hand-drawn port (see `Parts`). Only outline corners carry it, and an outline has none or exactly two.
+   */
+  readonly anchor?: true;
 }
 
 /**
@@ -64,10 +69,89 @@ export interface Section {
   readonly islands: readonly Island[];
 }
 
+/**
+ * The valve axis in the section: the centre of the seat's gauge line and the direction the valve opens.
+ * The gauge line is where the outer edge of the valve's seat face meets the seat when the valve is shut.
+ */
+export interface ValveAxis {
+  /** Centre of the gauge line, document units. */
+  readonly x: number;
+  readonly y: number;
+  /** Lean of the opening direction from straight down (-y), degrees, counter-clockwise positive: 10 opens down and to +x. */
+  readonly inclinationDeg: number;
+}
+
+/** The valve head, generated as the island "valve head". Lengths in document units, angles in degrees. */
+export interface ValvePart {
+  /** Head diameter. */
+  readonly diameter: number;
+  /** Seat face angle from the plane of the head (45 usual); the seat is cut to the same angle. */
+  readonly seatAngleDeg: number;
+  /** Width of the valve's seat face, measured along the face. */
+  readonly seatFaceWidth: number;
+  /** Cylindrical edge between the face and the seat face, along the axis. */
+  readonly margin: number;
+  /** Angle of the back cut above the seat face, from the plane of the head. */
+  readonly backCutAngleDeg: number;
+  /** Thickness of the head from its face to its back, along the axis. */
+  readonly headThickness: number;
+  readonly stemDiameter: number;
+  /** Length of stem drawn, from the valve face up the axis (the section shows a stub, not the whole stem). */
+  readonly stemLength: number;
+  readonly axis: ValveAxis;
+  /** Lift off the seat along the opening direction; 0 is shut. */
+  readonly lift: number;
+}
+
+/** The seat cut and the throat under it, generated round the valve axis. Lengths in document units, angles in degrees. */
+export interface SeatPart {
+  /** Throat diameter as a percentage of the valve head diameter (90 to 91 the usual choice). */
+  readonly throatPct: number;
+  /** Seat width along the seat face (the face is at the valve's seat angle). */
+  readonly seatWidth: number;
+  /** Cut between the seat and the deck (chamber side), from the plane of the head (30 usual). */
+  readonly topCutAngleDeg: number;
+  /** Cut between the seat and the throat (port side), from the plane of the head (60 usual). */
+  readonly bottomCutAngleDeg: number;
+  /** Throat moved sideways, % of the throat radius, positive toward the valve's +x side (its right when it opens down). */
+  readonly throatOffsetPct: number;
+  /** Height of the gauge line above the deck face, along the cylinder axis (y); the top cut runs down to the deck. */
+  readonly recess: number;
+}
+
+/** The flow-bench test bore under the deck, with the outlet at its far end. Lengths in document units. */
+export interface BorePart {
+  readonly diameter: number;
+  readonly depth: number;
+  /** Distance from the valve edge to the nearer bore wall, which is on the manifold side (the inlet's side of the axis). */
+  readonly valveEdgeToWall: number;
+}
+
+/** Port-side numbers the porter measured; the 2D section cannot give an area by itself. */
+export interface PortPart {
+  /** Flow area of the port at its tightest cross-section, document units squared. */
+  readonly tightestArea: number;
+}
+
+/**
+ * Parametric parts of a variant. The section holds their generated geometry, so any reader sees the real shape;
+ * the parts are the source, and regenerating (src/parts applyParts) replaces the island named "valve head" and,
+ * with a seat and bore, the outline's edges from one anchor corner to the other (the stretch with no inlet).
+ * A seat or bore needs the valve; the seat and bore come together.
+ */
+export interface Parts {
+  readonly valve?: ValvePart;
+  readonly seat?: SeatPart;
+  readonly bore?: BorePart;
+  readonly port?: PortPart;
+}
+
 /** A named alternative of the section, e.g. "tight short side" and "generous short side". */
 export interface Variant {
   readonly name: string;
   readonly note?: string;
+  /** Parametric valve, seat, test bore and port numbers; their geometry is already in `section`. */
+  readonly parts?: Parts;
   readonly section: Section;
 }
 
@@ -79,7 +163,7 @@ export interface Settings {
 }
 
 export const FORMAT_NAME = 'portwright-section';
-export const FORMAT_VERSION = 2;
+export const FORMAT_VERSION = 3;
 
 /** The saved file, current version. */
 export interface PortDocument {

@@ -2,6 +2,7 @@
 
 import fc from 'fast-check';
 import type { Edge, Island, Outline, PortDocument, Section, Variant, Vertex } from '../../src/document/types.ts';
+import { FORMAT_VERSION } from '../../src/document/types.ts';
 import { MAX_COORDINATE, MAX_FILLET_RADIUS, MAX_NAME_LENGTH } from '../../src/document/limits.ts';
 
 /** Plain objects, as a loaded file gives (fc.record may otherwise build null-prototype ones). */
@@ -59,7 +60,7 @@ export const documentArb: fc.Arbitrary<PortDocument> = fc
   .chain((variants) =>
     fc.record({
       format: fc.constant('portwright-section' as const),
-      version: fc.constant(2 as const),
+      version: fc.constant(FORMAT_VERSION),
       title: labelArb(120),
       units: fc.constantFrom('mm', 'inch') as fc.Arbitrary<PortDocument['units']>,
       variants: fc.constant(variants),

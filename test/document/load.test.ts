@@ -4,7 +4,7 @@ import fc from 'fast-check';
 import { DocumentError } from '../../src/document/errors.ts';
 import { loadDocument, readDocument, saveDocument } from '../../src/document/load.ts';
 import { MAX_FILE_BYTES } from '../../src/document/limits.ts';
-import type { PortDocument } from '../../src/document/types.ts';
+import { FORMAT_VERSION, type PortDocument } from '../../src/document/types.ts';
 import { documentArb } from './arbitraries.ts';
 
 const samplePath = (name: string) => new URL(`../../samples/${name}`, import.meta.url);
@@ -123,9 +123,9 @@ describe('what is not a current section file', () => {
   });
 
   it('refuses a file from a newer version, saying so', () => {
-    const newer = { ...base(), version: 3 };
+    const newer = { ...base(), version: FORMAT_VERSION + 1 };
     const message = documentErrorOf(() => loadDocument(JSON.stringify(newer))).message;
-    expect(message).toContain('format version 3');
+    expect(message).toContain(`format version ${FORMAT_VERSION + 1}`);
     expect(message).toContain('newer Portwright');
   });
 

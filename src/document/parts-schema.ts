@@ -1,0 +1,130 @@
+/**
+ * The zod schema of a variant's parametric parts (format version 3): per-field bounds with plain requirements,
+ * and the rules that tie the parts together and to the outline's anchor corners.
+ * Geometry that only shows when the parts are built (a throat wider than the seat, a head too thin) is checked
+ * where it is built, in src/parts, not here: a file stays loadable while its parts are being changed.
+ */
+
+import { z } from 'zod';
+import type { Outline } from './types.ts';
+import { MAX_COORDINATE, MAX_PART_LENGTH, MAX_PORT_AREA, MAX_VALVE_INCLINATION_DEG } from './limits.ts';
+
+function number(error: string) {
+  return z.number({ error });
+}
+
+/** A length above zero (a diameter, a width). */
+function positiveLength() {
+  const error = `must be a length above 0 and at most ${MAX_PART_LENGTH}`;
+  return number(error).gt(0, { error }).max(MAX_PART_LENGTH, { error });
+}
+
+/** A length of zero or more (a margin, a lift, a clearance). */
+function lengthFromZero() {
+  const error = `must be a length from 0 to ${MAX_PART_LENGTH}`;
+  return number(error).min(0, { error }).max(MAX_PART_LENGTH, { error });
+}
+
+/** An angle strictly between 0 and 90 degrees from the plane of the valve head. */
+function cutAngle() {
+  const error = 'must be an angle above 0 and below 90 degrees, measured from the plane of the valve head';
+  return number(error).gt(0, { error }).lt(90, { error });
+}
+
+const coordinate = (() => {
+  const error = `must be a number from -${MAX_COORDINATE} to ${MAX_COORDINATE}`;
+  return number(error).min(-MAX_COORDINATE, { error }).max(MAX_COORDINATE, { error });
+})();
+
+const inclination = (() => {
+  const lean = MAX_VALVE_INCLINATION_DEG;
+  const error = `must be an angle from -${lean} to ${lean} degrees (the lean of the opening direction from straight down)`;
+  return number(error).min(-lean, { error }).max(lean, { error });
+})();
+
+export const valveAxisSchema = z.strictObject(
+  { x: coordinate, y: coordinate, inclinationDeg: inclination },
+  { error: 'must be a valve axis { x, y, inclinationDeg }' },
+);
+
+export const valvePartSchema = z.strictObject(
+  {
+    diameter: positiveLength(),
+    seatAngleDeg: cutAngle(),
+    seatFaceWidth: positiveLength(),
+    margin: lengthFromZero(),
+    backCutAngleDeg: cutAngle(),
+    headThickness: positiveLength(),
+    stemDiameter: positiveLength(),
+    stemLength: positiveLength(),
+    axis: valveAxisSchema,
+    lift: lengthFromZero(),
+  },
+  { error: 'must be a valve { diameter, seatAngleDeg, seatFaceWidth, margin, backCutAngleDeg, headThickness, stemDiameter, stemLength, axis, lift }' },
+);
+
+const throatPct = (() => {
+  const error = 'must be a percentage above 0 and below 100 (the throat diameter as a share of the valve diameter)';
+  return number(error).gt(0, { error }).lt(100, { error });
+})();
+
+const throatOffsetPct = (() => {
+  const error = 'must be a percentage from -100 to 100 of the throat radius';
+  return number(error).min(-100, { error }).max(100, { error });
+})();
+
+export const seatPartSchema = z.strictObject(
+  {
+    throatPct,
+    seatWidth: positiveLength(),
+    topCutAngleDeg: cutAngle(),
+    bottomCutAngleDeg: cutAngle(),
+    throatOffsetPct,
+    recess: lengthFromZero(),
+  },
+  { error: 'must be a seat { throatPct, seatWidth, topCutAngleDeg, bottomCutAngleDeg, throatOffsetPct, recess }' },
+);
+
+export const borePartSchema = z.strictObject(
+  { diameter: positiveLength(), depth: positiveLength(), valveEdgeToWall: lengthFromZero() },
+  { error: 'must be a test bore { diameter, depth, valveEdgeToWall }' },
+);
+
+const portArea = (() => {
+  const error = `must be an area above 0 and at most ${MAX_PORT_AREA}`;
+  return number(error).gt(0, { error }).max(MAX_PORT_AREA, { error });
+})();
+
+export const portPartSchema = z.strictObject({ tightestArea: portArea }, { error: 'must be port numbers { tightestArea }' });
+
+export const partsSchema = z.strictObject(
+  {
+    valve: valvePartSchema.optional(),
+    seat: seatPartSchema.optional(),
+    bore: borePartSchema.optional(),
+    port: portPartSchema.optional(),
+  },
+  { error: 'must be parts { valve, seat, bore, port } (each optional)' },
+);
+
+type PartsShape = z.output<typeof partsSchema>;
+
+/** Ties the parts to each other and to the outline: what needs what, and the two anchor corners a seat needs. */
+export function checkParts(parts: PartsShape, outline: Outline, ctx: z.core.$RefinementCtx): void {
+  const issue = (path: (string | number)[], message: string): void => {
+    ctx.addIssue({ code: 'custom', path: ['parts', ...path], message });
+  };
+  if (parts.seat && !parts.valve) issue(['seat'], 'needs a valve: the seat is cut round the valve axis (add parts.valve)');
+  if (parts.bore && !parts.valve) issue(['bore'], 'needs a valve: the test bore is placed from the valve edge (add parts.valve)');
+  if (Boolean(parts.seat) !== Boolean(parts.bore)) {
+    const [has, lacks] = parts.seat ? ['seat', 'bore'] : ['bore', 'seat'];
+    issue([has], `needs parts.${lacks} too: the seat, deck and test bore are generated together between the outline's anchor corners`);
+  }
+  const anchors = outline.vertices.filter((v) => v.anchor).length;
+  if ((parts.seat || parts.bore) && anchors !== 2) {
+    issue(
+      [parts.seat ? 'seat' : 'bore'],
+      `needs two anchor corners on the section outline (found ${anchors}): mark the corners where the bowl meets the throat on either side with "anchor": true`,
+    );
+  }
+}
