@@ -80,13 +80,15 @@ export class FieldLayer {
 
   /** Upload a new field. NaN cells become value 0 with mask 0; the mask keeps them out of every pixel. */
   setField(field: FieldImage | null): void {
+    if (field && field.values.length !== field.nx * field.ny) {
+      throw new RangeError(`Field has ${field.values.length} values for ${field.nx} x ${field.ny} cells.`);
+    }
     this.field = field;
     this.values?.dispose();
     this.mask?.dispose();
     this.values = this.mask = null;
     if (field) {
       const { nx, ny } = field;
-      if (field.values.length !== nx * ny) throw new RangeError(`Field has ${field.values.length} values for ${nx} x ${ny} cells.`);
       const vals = new Float32Array(nx * ny);
       const mask = new Uint8Array(nx * ny);
       for (let k = 0; k < nx * ny; k++) {

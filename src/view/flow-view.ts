@@ -78,10 +78,11 @@ export class FlowView {
     this.resize();
   }
 
-  /** Show a field (or none). Contours and the automatic colour range follow it. */
+  /** Show a field (or none). Contours and the automatic colour range follow it. Throws RangeError for a field
+   * whose values do not fill its grid or that is too large for the GPU; the previous field then stays. */
   setField(field: T.FieldImage | null): void {
-    this.content.field = field;
     this.scene.setField(field);
+    this.content.field = field;
     this.refreshContours();
     this.applyRange();
     this.contentChanged();

@@ -52,7 +52,14 @@ export class ViewScene {
     for (const g of Object.values(this.groups)) this.scene.add(g);
   }
 
+  /** Throws RangeError when the grid is larger than this GPU's biggest texture. */
   setField(field: FieldImage | null): void {
+    const limit = this.renderer.capabilities.maxTextureSize;
+    if (field && Math.max(field.nx, field.ny) > limit) {
+      throw new RangeError(
+        `The grid is too fine to draw here (${Math.max(field.nx, field.ny)} cells across; this screen allows ${limit}). Choose a coarser grid detail.`,
+      );
+    }
     this.field.setField(field);
   }
 

@@ -205,6 +205,21 @@ describe('flow view in a browser', () => {
     await page.screenshot({ path: '/tmp/view-harness.png' });
   });
 
+  it('rejects a field whose values do not fill its grid and keeps the one it shows', async () => {
+    const r = await inPage((h) => {
+      const before = h.view.colourRange;
+      let message = '';
+      try {
+        h.view.setField({ nx: 4, ny: 4, x0: 0, y0: 0, h: 1, values: new Float32Array(15) });
+      } catch (e) {
+        message = `${(e as Error).name}: ${(e as Error).message}`;
+      }
+      return { message, same: JSON.stringify(before) === JSON.stringify(h.view.colourRange) };
+    });
+    expect(r.message).toBe('RangeError: Field has 15 values for 4 x 4 cells.');
+    expect(r.same).toBe(true);
+  });
+
   it('frees every GPU object on dispose and leaves the container empty, with no errors', async () => {
     const result = await inPage((h) => {
       const before = h.view.diagnostics.memory;
