@@ -120,7 +120,7 @@ function variant(name: string, shortSideRadius: number): Variant {
 
 function document(title: string, variants: Variant[]): PortDocument {
   return {
-    format: 'portwright-section', version: 2, title, units: 'mm',
+    format: 'portwright-section', version: 3, title, units: 'mm',
     activeVariant: variants[0].name, settings: { gridDetail: 'standard' }, variants,
   };
 }
