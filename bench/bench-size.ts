@@ -1,4 +1,6 @@
 /** One benchmark size, run inside its own process: full-solve timings, phases, peak memory, SOR baseline. */
+import { runInNewContext } from 'node:vm';
+import { setFlagsFromString } from 'node:v8';
 import { assemble, writeRhs, type Stencil } from '../src/solver/assemble.ts';
 import { connectedCells } from '../src/solver/connectivity.ts';
 import { buildMultigrid } from '../src/solver/multigrid.ts';
@@ -7,7 +9,7 @@ import { paddedVector } from '../src/solver/pcg-operator.ts';
 import { rasterise } from '../src/solver/rasterise.ts';
 import { markedLength } from '../src/solver/rasterise-checks.ts';
 import { solveFlow, solveOnGrid } from '../src/solver/solve.ts';
-import { MARK_INLET, type CutGrid } from '../src/solver/types.ts';
+import { MARK_INLET, type CutGrid, type SolveResult } from '../src/solver/types.ts';
 import { wallSpeeds } from '../src/solver/wall-speeds.ts';
 import { benchDomain } from './bench-problem.ts';
 import { sor, sorFactor } from './sor.ts';
@@ -38,6 +40,10 @@ export interface SizeReport {
 }
 
 const TOLERANCE = 1e-8;
+
+setFlagsFromString('--expose-gc');
+/** Full garbage collection between runs, so that a run's peak memory is its own and not its predecessors'. */
+const collectGarbage = runInNewContext('gc') as () => void;
 const SOR_LIMIT_MS = 60_000;
 const MB = 1024 * 1024;
 
@@ -46,8 +52,10 @@ export function runSize(args: SizeArgs): SizeReport {
   solveFlow(domain, { targetCells: 16_384 }); // compile the hot loops before timing
   const wall: number[] = [];
   const cpu: number[] = [];
-  let last = solveFlow(domain, { targetCells: 1024 });
+  let last: SolveResult | null = null;
   for (let run = 0; run < args.runs; run++) {
+    last = null;
+    collectGarbage();
     const t0 = performance.now();
     const c0 = process.cpuUsage();
     last = solveFlow(domain, { targetCells: args.cells, tolerance: TOLERANCE });
@@ -57,6 +65,7 @@ export function runSize(args: SizeArgs): SizeReport {
   }
   const peakRssMb = process.resourceUsage().maxRSS / 1024;
   const arrayBuffersMb = process.memoryUsage().arrayBuffers / MB;
+  if (last === null) throw new Error('no benchmark runs');
   const { grid, iterations, residual } = last;
   const phases = timePhases(args.cells);
   const { stencil, b, bNorm, linearMs } = timeLinear(grid, args.runs);
@@ -110,6 +119,7 @@ function timeLinear(grid: CutGrid, runs: number): { stencil: Stencil; b: Float64
   const times: number[] = [];
   let last = timeLinearOnce(grid, mask);
   for (let run = 0; run < runs; run++) {
+    collectGarbage();
     last = timeLinearOnce(grid, mask);
     times.push(last.setupMs + last.pcgMs);
   }

@@ -19,6 +19,34 @@ export interface Stencil {
   readonly faceY: Float64Array;
   /** 1 = cell takes part in the solve, 0 = excluded; i + j * nx. */
   readonly active: Uint8Array;
+  /**
+   * Per row j: the active cells lie in columns rowStart[j] <= i < rowEnd[j] (both 0 for a row without any).
+   * Kernels loop over these spans only, so the solid margin around a port costs nothing; vector entries
+   * outside them are never written and stay 0.
+   */
+  readonly rowStart: Int32Array;
+  readonly rowEnd: Int32Array;
+}
+
+/** Row spans of the active cells (see Stencil.rowStart). */
+export function rowSpans(active: Uint8Array, nx: number, ny: number): { rowStart: Int32Array; rowEnd: Int32Array } {
+  const rowStart = new Int32Array(ny);
+  const rowEnd = new Int32Array(ny);
+  for (let j = 0; j < ny; j++) {
+    const row = j * nx;
+    let first = -1;
+    let last = -1;
+    for (let i = 0; i < nx; i++) {
+      if (active[row + i] !== 1) continue;
+      if (first < 0) first = i;
+      last = i;
+    }
+    if (first >= 0) {
+      rowStart[j] = first;
+      rowEnd[j] = last + 1;
+    }
+  }
+  return { rowStart, rowEnd };
 }
 
 /**
@@ -45,7 +73,7 @@ export function assemble(grid: CutGrid, mask: Uint8Array): Stencil {
         : 1;
     }
   }
-  return { nx, ny, diag, faceX, faceY, active: mask };
+  return { nx, ny, diag, faceX, faceY, active: mask, ...rowSpans(mask, nx, ny) };
 }
 
 /**

@@ -28,38 +28,46 @@ export function neighbourIndex(n: number, nc: number): Int32Array {
   return out;
 }
 
+/** Across-row interpolation at coarse column I for a fine row between coarse rows rowC and rowD (offsets). */
+function acrossRows(act: Uint8Array, coarseX: Float64Array, rowC: number, rowD: number, ncx: number, I: number): number {
+  const a0 = 3 * act[rowC + I];
+  const an = act[rowD + I];
+  return (a0 * coarseX[rowC + I + ncx] + an * coarseX[rowD + I + ncx]) * INV_ROW_WEIGHT[a0 + an];
+}
+
 /**
- * x += P xc on fine row j, in one pass over the coarse columns with a sliding window (left, centre, right)
- * of the across-row values t and their activity ta. Fine cells under an excluded parent are skipped; other
- * excluded fine cells pick up values that the next smoothing sweep resets to 0.
+ * x += P xc on the active span of fine row j, in one pass over the coarse columns with a sliding window
+ * (left, centre, right) of the across-row values t and their activity ta (1 where t holds a value).
+ * Excluded fine cells inside the span may pick up values; the next smoothing sweep resets them to 0.
  * @param x fine padded vector; @param coarseX coarse padded vector; @param jn coarse row towards row j (neighbourIndex).
  */
 export function prolongRow(s: Stencil, x: Float64Array, j: number, coarse: Stencil, coarseX: Float64Array, jn: number): void {
-  const nx = s.nx;
+  const fs = s.rowStart[j];
+  const fe = s.rowEnd[j];
+  if (fe === 0) return;
   const ncx = coarse.nx;
   const act = coarse.active;
   const rowC = (j >> 1) * ncx;
   const rowD = jn * ncx;
-  const base = j * nx + nx;
-  let a0 = 3 * act[rowC];
-  let an = act[rowD];
-  let tC = (a0 * coarseX[rowC + ncx] + an * coarseX[rowD + ncx]) * INV_ROW_WEIGHT[a0 + an];
-  let taC = act[rowC] | an;
-  let tL = tC;
-  let taL = taC;
-  for (let I = 0; I < ncx; I++) {
+  const base = j * s.nx + s.nx;
+  const first = fs >> 1;
+  const last = (fe - 1) >> 1;
+  let tC = acrossRows(act, coarseX, rowC, rowD, ncx, first);
+  let taC = act[rowC + first] | act[rowD + first];
+  const left = first > 0 ? first - 1 : first;
+  let tL = acrossRows(act, coarseX, rowC, rowD, ncx, left);
+  let taL = act[rowC + left] | act[rowD + left];
+  for (let I = first; I <= last; I++) {
     let tR = tC;
     let taR = taC;
     if (I + 1 < ncx) {
-      a0 = 3 * act[rowC + I + 1];
-      an = act[rowD + I + 1];
-      tR = (a0 * coarseX[rowC + I + 1 + ncx] + an * coarseX[rowD + I + 1 + ncx]) * INV_ROW_WEIGHT[a0 + an];
-      taR = act[rowC + I + 1] | an;
+      tR = acrossRows(act, coarseX, rowC, rowD, ncx, I + 1);
+      taR = act[rowC + I + 1] | act[rowD + I + 1];
     }
     if (act[rowC + I] !== 0) {
-      const i0 = base + 2 * I;
-      x[i0] += SELF_WEIGHT[taL] * tC + SIDE_WEIGHT[taL] * tL;
-      if (2 * I + 1 < nx) x[i0 + 1] += SELF_WEIGHT[taR] * tC + SIDE_WEIGHT[taR] * tR;
+      const i0 = 2 * I;
+      if (i0 >= fs) x[base + i0] += SELF_WEIGHT[taL] * tC + SIDE_WEIGHT[taL] * tL;
+      if (i0 + 1 < fe) x[base + i0 + 1] += SELF_WEIGHT[taR] * tC + SIDE_WEIGHT[taR] * tR;
     }
     tL = tC;
     taL = taC;
@@ -70,13 +78,16 @@ export function prolongRow(s: Stencil, x: Float64Array, j: number, coarse: Stenc
 
 /**
  * Adds P^T (b - A x) of fine row j to coarseB (I + J * ncx; the caller zeroes it before the first row).
- * Needs x final in rows j - 1..j + 1. One pass over the coarse columns: the residual of the two children,
- * then the along-row shares (u of column I - 1 is complete once column I is done), then across rows.
- * Excluded cells, and so every cell under an excluded parent, have a zero residual: no mask is needed.
+ * Needs x final in rows j - 1..j + 1. One pass over the coarse columns under the row's active span and one
+ * beyond each end: the residual of the two children (0 outside the span: excluded cells have none), then
+ * the along-row shares (u of column I - 1 is complete once column I is done), then across rows.
  */
 export function restrictRow(
   s: Stencil, x: Float64Array, b: Float64Array, j: number, coarse: Stencil, coarseB: Float64Array, jn: number,
 ): void {
+  const fs = s.rowStart[j];
+  const fe = s.rowEnd[j];
+  if (fe === 0) return;
   const { nx, diag, faceX, faceY } = s;
   const ncx = coarse.nx;
   const act = coarse.active;
@@ -84,20 +95,25 @@ export function restrictRow(
   const rowD = jn * ncx;
   const rowK = j * nx;
   const rowX = rowK + j;
-  let taC = act[rowC] | act[rowD];
-  let taL = taC;
+  const first = Math.max(0, (fs >> 1) - 1);
+  const last = Math.min(ncx - 1, ((fe - 1) >> 1) + 1);
+  let taC = act[rowC + first] | act[rowD + first];
+  let taL = first > 0 ? act[rowC + first - 1] | act[rowD + first - 1] : taC;
   let uPrev = 0;
   let uCur = 0;
-  for (let I = 0; I < ncx; I++) {
+  for (let I = first; I <= last; I++) {
     const taR = I + 1 < ncx ? act[rowC + I + 1] | act[rowD + I + 1] : taC;
     const i0 = 2 * I;
     const k0 = rowK + i0;
     const v0 = k0 + nx;
     const f0 = rowX + i0;
-    const r0 = b[k0] - (diag[k0] * x[v0] - faceX[f0] * x[v0 - 1] - faceX[f0 + 1] * x[v0 + 1]
-      - faceY[k0] * x[v0 - nx] - faceY[k0 + nx] * x[v0 + nx]);
+    let r0 = 0;
+    if (i0 >= fs && i0 < fe) {
+      r0 = b[k0] - (diag[k0] * x[v0] - faceX[f0] * x[v0 - 1] - faceX[f0 + 1] * x[v0 + 1]
+        - faceY[k0] * x[v0 - nx] - faceY[k0 + nx] * x[v0 + nx]);
+    }
     let r1 = 0;
-    if (i0 + 1 < nx) {
+    if (i0 + 1 >= fs && i0 + 1 < fe) {
       const k1 = k0 + 1;
       const v1 = v0 + 1;
       r1 = b[k1] - (diag[k1] * x[v1] - faceX[f0 + 1] * x[v0] - faceX[f0 + 2] * x[v1 + 1]
@@ -119,7 +135,8 @@ export function restrictRow(
     taL = taC;
     taC = taR;
   }
-  spreadAcrossRows(act, coarseB, rowC + ncx - 1, rowD + ncx - 1, uPrev);
+  spreadAcrossRows(act, coarseB, rowC + last, rowD + last, uPrev);
+  if (last + 1 < ncx) spreadAcrossRows(act, coarseB, rowC + last + 1, rowD + last + 1, uCur);
 }
 
 /** Adds `amount` to coarse cells c (parent row) and d (neighbour row) with the across-row weights 3 a0 : an. */

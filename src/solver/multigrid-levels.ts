@@ -1,5 +1,5 @@
 /** Coarse levels by 2x2 cell agglomeration: face conductances and Dirichlet couplings summed, then scaled. */
-import type { Stencil } from './assemble.ts';
+import { rowSpans, type Stencil } from './assemble.ts';
 
 /**
  * Scale applied to the summed couplings of a coarse level.
@@ -32,7 +32,7 @@ export function coarsen(fine: Stencil, scale: number = COARSE_SCALE): Stencil {
         : 1;
     }
   }
-  return { nx: ncx, ny: ncy, diag, faceX, faceY, active };
+  return { nx: ncx, ny: ncy, diag, faceX, faceY, active, ...rowSpans(active, ncx, ncy) };
 }
 
 /** Coarse x-face I between coarse cells I - 1 and I covers fine x-face 2I in fine rows 2J and 2J + 1. */

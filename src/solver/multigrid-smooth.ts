@@ -12,7 +12,8 @@ export function smoothRow(s: Stencil, x: Float64Array, b: Float64Array, j: numbe
   const { nx, diag, faceX, faceY } = s;
   const rowK = j * nx;
   const rowX = rowK + j;
-  for (let i = (j + colour) & 1; i < nx; i += 2) {
+  const start = s.rowStart[j];
+  for (let i = start + ((start + j + colour) & 1), end = s.rowEnd[j]; i < end; i += 2) {
     const k = rowK + i;
     const v = k + nx;
     x[v] = (b[k]
@@ -29,7 +30,7 @@ export function smoothRedFromZeroRow(s: Stencil, x: Float64Array, b: Float64Arra
   const { nx, diag } = s;
   const rowK = j * nx;
   const first = j & 1;
-  for (let i = 0; i < nx; i++) {
+  for (let i = s.rowStart[j], end = s.rowEnd[j]; i < end; i++) {
     const k = rowK + i;
     x[k + nx] = (i & 1) === first ? b[k] / diag[k] : 0;
   }
@@ -40,9 +41,10 @@ export function smoothColour(s: Stencil, x: Float64Array, b: Float64Array, colou
   for (let j = 0; j < s.ny; j++) smoothRow(s, x, b, j, colour);
 }
 
-/** b . x over row j (x padded), for the preconditioned residual r . z. */
-export function rowDot(nx: number, b: Float64Array, x: Float64Array, j: number): number {
+/** b . x over the active span of row j (x padded), for the preconditioned residual r . z. */
+export function rowDot(s: Stencil, b: Float64Array, x: Float64Array, j: number): number {
+  const nx = s.nx;
   let sum = 0;
-  for (let k = j * nx, end = k + nx; k < end; k++) sum += b[k] * x[k + nx];
+  for (let k = j * nx + s.rowStart[j], end = j * nx + s.rowEnd[j]; k < end; k++) sum += b[k] * x[k + nx];
   return sum;
 }

@@ -73,7 +73,7 @@ function vCycle(mg: Multigrid, depth: number, x: Float64Array, b: Float64Array):
     if (mg.coarsest) solveCoarsest(mg.coarsest, s.nx, b, x);
     else relaxSymmetric(s, x, b, COARSEST_RELAX_PAIRS);
     let dot = 0;
-    for (let j = 0; j < s.ny; j++) dot += rowDot(s.nx, b, x, j);
+    for (let j = 0; j < s.ny; j++) dot += rowDot(s, b, x, j);
     return dot;
   }
   const coarse = mg.levels[depth + 1];
@@ -124,7 +124,7 @@ function prolongAndPostSmooth(t: TransferPair, sweeps: number, x: Float64Array, 
     if (j >= 1 && j <= ny) smoothRow(s, x, b, j - 1, 1);
     if (j >= 2) {
       smoothRow(s, x, b, j - 2, 0);
-      if (sweeps === 1) dot += rowDot(nx, b, x, j - 2);
+      if (sweeps === 1) dot += rowDot(s, b, x, j - 2);
     }
   }
   if (sweeps === 1) return dot;
@@ -132,7 +132,7 @@ function prolongAndPostSmooth(t: TransferPair, sweeps: number, x: Float64Array, 
     smoothColour(s, x, b, 1);
     smoothColour(s, x, b, 0);
   }
-  for (let j = 0; j < ny; j++) dot += rowDot(nx, b, x, j);
+  for (let j = 0; j < ny; j++) dot += rowDot(s, b, x, j);
   return dot;
 }
 

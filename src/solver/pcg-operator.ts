@@ -36,20 +36,22 @@ export function applyStencil(s: Stencil, x: Float64Array, out: Float64Array): nu
 
 /**
  * p = z + beta p, then q = A p written over z; returns p . q. One pass: row j of p is updated, then row
- * j - 1 of A p (which needs p rows j - 2..j) overwrites row j - 1 of z (already consumed).
+ * j - 1 of A p (which needs p rows j - 2..j) overwrites row j - 1 of z (already consumed). Active row
+ * spans only: outside them p, z and A p are all 0.
  * @param p padded search direction, updated; @param z padded preconditioned residual, overwritten by A p.
  */
 export function updateDirectionAndApply(s: Stencil, p: Float64Array, z: Float64Array, beta: number): number {
-  const { nx, ny, diag, faceX, faceY } = s;
+  const { nx, ny, diag, faceX, faceY, rowStart, rowEnd } = s;
   let energy = 0;
   for (let j = 0; j <= ny; j++) {
     if (j < ny) {
-      for (let v = (j + 1) * nx, end = v + nx; v < end; v++) p[v] = z[v] + beta * p[v];
+      const row = (j + 1) * nx;
+      for (let v = row + rowStart[j], end = row + rowEnd[j]; v < end; v++) p[v] = z[v] + beta * p[v];
     }
     if (j === 0) continue;
     const rowK = (j - 1) * nx;
     const rowX = rowK + j - 1;
-    for (let i = 0; i < nx; i++) {
+    for (let i = rowStart[j - 1], end = rowEnd[j - 1]; i < end; i++) {
       const k = rowK + i;
       const v = k + nx;
       const pv = p[v];
