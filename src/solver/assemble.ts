@@ -1,18 +1,27 @@
 /** Finite-volume assembly of div(grad phi) = 0 on a cut-cell grid as a symmetric 5-point stencil. */
+import { dirichletList, type DirichletList } from './assemble-dirichlet.ts';
 import type { CutGrid } from './types.ts';
 
 /**
+ * Added to a face sum before dividing by it, so that excluded cells (no open face, no coupling, zero
+ * right-hand side) relax to 0 / TINY = 0 instead of 0 / 0. It is far below half an ulp of any real
+ * diagonal, so it changes no active cell's value.
+ */
+export const TINY = 1e-300;
+
+/**
  * One grid level's 5-point operator, symmetric positive definite on the active cells:
- *   (A x)_k = diag_k x_k - sum over the four faces f of cell k of coef_f x_(cell across f).
- * Face coefficients are conductances (open face length / centre distance, dimensionless in 2D);
- * on the finest level that is the face's open fraction. Excluded cells get diag 1 and no open face,
- * so their rows are the identity and every vector the solver makes stays 0 there.
+ *   (A x)_k = diag_k x_k - sum over the four faces f of cell k of coef_f x_(cell across f),
+ *   diag_k = sum of the four face coefficients + Dirichlet coupling of k (from the sparse list).
+ * Face coefficients are conductances (open face length / centre distance, dimensionless in 2D); on the
+ * finest level that is the face's open fraction. Excluded cells have no open face and no coupling, so
+ * their rows are zero and every vector the solver makes stays 0 there.
  */
 export interface Stencil {
   readonly nx: number;
   readonly ny: number;
-  /** Diagonal, row-major i + j * nx: sum of the cell's face coefficients plus its Dirichlet couplings; 1 in excluded cells. */
-  readonly diag: Float64Array;
+  /** Inlet and outlet couplings of the active cells (the rest of the diagonal is the face sum). */
+  readonly dirichlet: DirichletList;
   /** x-face coefficients, (nx + 1) * ny, index i + j * (nx + 1) (face between cells i - 1 and i); 0 on the grid edge and beside excluded cells. */
   readonly faceX: Float64Array;
   /** y-face coefficients, nx * (ny + 1), index i + j * nx (face between rows j - 1 and j); 0 on the grid edge and beside excluded cells. */
@@ -51,7 +60,7 @@ export function rowSpans(active: Uint8Array, nx: number, ny: number): { rowStart
 
 /**
  * Builds the finest-level stencil. Walls carry no flux (closed face fraction), inlet and outlet
- * couplings add to the diagonal (the Dirichlet values go to the right-hand side, see `writeRhs`).
+ * couplings go to the sparse Dirichlet list (their potentials to the right-hand side, see `writeRhs`).
  * The grid's face arrays are used as they are when they already satisfy the Stencil rules (the usual
  * case: the grid edge is closed and excluded cells are sealed off); otherwise masked copies are made.
  * @param mask 1 = cell connected to inlet and outlet, i + j * nx (from connectedCells).
@@ -62,18 +71,23 @@ export function assemble(grid: CutGrid, mask: Uint8Array): Stencil {
   const clean = facesSealed(grid, mask);
   const faceX = clean ? grid.openX : maskedFacesX(grid, mask);
   const faceY = clean ? grid.openY : maskedFacesY(grid, mask);
-  const diag = new Float64Array(nx * ny);
+  const cells: number[] = [];
+  const coupling: number[] = [];
   const { inletCoupling, outletCoupling } = grid;
-  for (let j = 0; j < ny; j++) {
-    const rowX = j * (nx + 1);
-    for (let i = 0; i < nx; i++) {
-      const k = i + j * nx;
-      diag[k] = mask[k] === 1
-        ? faceX[rowX + i] + faceX[rowX + i + 1] + faceY[k] + faceY[k + nx] + inletCoupling[k] + outletCoupling[k]
-        : 1;
+  for (let k = 0; k < nx * ny; k++) {
+    const c = inletCoupling[k] + outletCoupling[k];
+    if (c > 0 && mask[k] === 1) {
+      cells.push(k);
+      coupling.push(c);
     }
   }
-  return { nx, ny, diag, faceX, faceY, active: mask, ...rowSpans(mask, nx, ny) };
+  return { nx, ny, dirichlet: dirichletList(cells, coupling, nx, ny), faceX, faceY, active: mask, ...rowSpans(mask, nx, ny) };
+}
+
+/** Diagonal of cell k (face sum plus coupling); for set-up code, not hot loops. */
+export function diagonalOf(s: Stencil, k: number, coupling: number): number {
+  const j = Math.floor(k / s.nx);
+  return s.faceX[k + j] + s.faceX[k + j + 1] + s.faceY[k] + s.faceY[k + s.nx] + coupling;
 }
 
 /**

@@ -77,7 +77,8 @@ export function prolongRow(s: Stencil, x: Float64Array, j: number, coarse: Stenc
 }
 
 /**
- * Adds P^T (b - A x) of fine row j to coarseB (I + J * ncx; the caller zeroes it before the first row).
+ * Adds P^T (b - A' x) of fine row j to coarseB (I + J * ncx; the caller zeroes it before the first row),
+ * A' being A without the Dirichlet couplings: the Dirichlet cells are redone by correctRestrictCell.
  * Needs x final in rows j - 1..j + 1. One pass over the coarse columns under the row's active span and one
  * beyond each end: the residual of the two children (0 outside the span: excluded cells have none), then
  * the along-row shares (u of column I - 1 is complete once column I is done), then across rows.
@@ -88,7 +89,7 @@ export function restrictRow(
   const fs = s.rowStart[j];
   const fe = s.rowEnd[j];
   if (fe === 0) return;
-  const { nx, diag, faceX, faceY } = s;
+  const { nx, faceX, faceY } = s;
   const ncx = coarse.nx;
   const act = coarse.active;
   const rowC = (j >> 1) * ncx;
@@ -109,15 +110,21 @@ export function restrictRow(
     const f0 = rowX + i0;
     let r0 = 0;
     if (i0 >= fs && i0 < fe) {
-      r0 = b[k0] - (diag[k0] * x[v0] - faceX[f0] * x[v0 - 1] - faceX[f0 + 1] * x[v0 + 1]
-        - faceY[k0] * x[v0 - nx] - faceY[k0 + nx] * x[v0 + nx]);
+      const w = faceX[f0];
+      const e = faceX[f0 + 1];
+      const so = faceY[k0];
+      const no = faceY[k0 + nx];
+      r0 = b[k0] - ((w + e + so + no) * x[v0] - w * x[v0 - 1] - e * x[v0 + 1] - so * x[v0 - nx] - no * x[v0 + nx]);
     }
     let r1 = 0;
     if (i0 + 1 >= fs && i0 + 1 < fe) {
       const k1 = k0 + 1;
       const v1 = v0 + 1;
-      r1 = b[k1] - (diag[k1] * x[v1] - faceX[f0 + 1] * x[v0] - faceX[f0 + 2] * x[v1 + 1]
-        - faceY[k1] * x[v1 - nx] - faceY[k1 + nx] * x[v1 + nx]);
+      const w = faceX[f0 + 1];
+      const e = faceX[f0 + 2];
+      const so = faceY[k1];
+      const no = faceY[k1 + nx];
+      r1 = b[k1] - ((w + e + so + no) * x[v1] - w * x[v0] - e * x[v1 + 1] - so * x[v1 - nx] - no * x[v1 + nx]);
     }
     uCur += SELF_WEIGHT[taL] * r0 + SELF_WEIGHT[taR] * r1;
     const sideL = SIDE_WEIGHT[taL] * r0;

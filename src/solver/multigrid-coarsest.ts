@@ -1,5 +1,6 @@
 /** Direct solve on the coarsest multigrid level: dense Cholesky over its active cells. */
 import type { Stencil } from './assemble.ts';
+import { couplingOf } from './assemble-dirichlet.ts';
 
 /** Factorised coarsest level. */
 export interface CoarsestSolver {
@@ -41,14 +42,15 @@ export function factorCoarsest(s: Stencil): CoarsestSolver | null {
 }
 
 function denseMatrix(s: Stencil, index: Int32Array, cells: readonly number[]): Float64Array {
-  const { nx, diag, faceX, faceY } = s;
+  const { nx, faceX, faceY } = s;
   const n = cells.length;
   const a = new Float64Array(n * n);
   for (let r = 0; r < n; r++) {
     const k = cells[r];
     const i = k % nx;
     const j = (k - i) / nx;
-    a[r * n + r] = diag[k];
+    const fx = k + j;
+    a[r * n + r] = faceX[fx] + faceX[fx + 1] + faceY[k] + faceY[k + nx] + couplingOf(s.dirichlet, k);
     const east = faceX[i + 1 + j * (nx + 1)];
     if (east !== 0) setPair(a, n, r, index[k + 1], -east);
     const north = faceY[k + nx];

@@ -15,22 +15,6 @@ export interface TransferPair {
   readonly coarse: Stencil;
   /** Coarse neighbour row towards each fine row (see neighbourIndex). */
   readonly rowN: Int32Array;
-  /** Active fine cells with a Dirichlet coupling, i + j * nx, ascending. */
-  readonly dirichlet: Int32Array;
-}
-
-/** Active cells whose diagonal exceeds their face coefficients (they touch the inlet or outlet). */
-export function dirichletCells(s: Stencil): Int32Array {
-  const { nx, ny, diag, faceX, faceY, active } = s;
-  const out: number[] = [];
-  for (let k = 0; k < nx * ny; k++) {
-    if (active[k] !== 1) continue;
-    const i = k % nx;
-    const fx = k + (k - i) / nx;
-    const faces = faceX[fx] + faceX[fx + 1] + faceY[k] + faceY[k + nx];
-    if (diag[k] - faces > 1e-12 * diag[k]) out.push(k);
-  }
-  return Int32Array.from(out);
 }
 
 /** Scratch for bilinearWeights (at most 4 terms). */
@@ -52,42 +36,51 @@ function scatterBilinear(t: TransferPair, i: number, j: number, amount: number, 
 }
 
 /**
- * Calls visit(ni, nj, coef / diag) for each open face of Dirichlet cell k. Returns nothing; the weights
- * are those of the Jacobi step in the module comment.
+ * Calls visit(ni, nj, coef / diag) for each open face of Dirichlet cell k (diag = face sum + coupling):
+ * the weights of the Jacobi step in the module comment.
  */
-function forNeighbours(s: Stencil, k: number, visit: (ni: number, nj: number, w: number) => void): void {
-  const { nx, diag, faceX, faceY } = s;
+function forNeighbours(s: Stencil, k: number, coupling: number, visit: (ni: number, nj: number, w: number) => void): void {
+  const { nx, faceX, faceY } = s;
   const i = k % nx;
   const j = (k - i) / nx;
   const fx = k + j;
-  const d = diag[k];
+  const d = faceX[fx] + faceX[fx + 1] + faceY[k] + faceY[k + nx] + coupling;
   if (faceX[fx] !== 0) visit(i - 1, j, faceX[fx] / d);
   if (faceX[fx + 1] !== 0) visit(i + 1, j, faceX[fx + 1] / d);
   if (faceY[k] !== 0) visit(i, j - 1, faceY[k] / d);
   if (faceY[k + nx] !== 0) visit(i, j + 1, faceY[k + nx] / d);
 }
 
-/** After prolongRow: replaces the bilinear value at Dirichlet cell k by the operator-dependent one. */
-export function correctProlongCell(t: TransferPair, x: Float64Array, coarseX: Float64Array, k: number): void {
+/** After prolongRow: replaces the bilinear value at Dirichlet entry m of the fine level by the operator-dependent one. */
+export function correctProlongCell(t: TransferPair, x: Float64Array, coarseX: Float64Array, m: number): void {
   const nx = t.fine.nx;
+  const k = t.fine.dirichlet.cells[m];
   const i = k % nx;
   const j = (k - i) / nx;
   let value = 0;
-  forNeighbours(t.fine, k, (ni, nj, w) => { value += w * bilinearAt(t, ni, nj, coarseX); });
+  forNeighbours(t.fine, k, t.fine.dirichlet.coupling[m], (ni, nj, w) => { value += w * bilinearAt(t, ni, nj, coarseX); });
   x[k + nx] += value - bilinearAt(t, i, j, coarseX);
 }
 
 /**
- * After restrictRow: moves Dirichlet cell k's residual from its bilinear weights to the operator-dependent
- * ones (the transpose of correctProlongCell). @param x fine padded vector; @param b fine rhs, i + j * nx.
+ * After restrictRow: restrictRow spread this cell's residual without its coupling term, r + D x, by the
+ * bilinear weights; this takes that back and spreads the true residual r by the operator-dependent weights
+ * (the transpose of correctProlongCell). @param x fine padded vector; @param b fine rhs, i + j * nx.
  */
-export function correctRestrictCell(t: TransferPair, x: Float64Array, b: Float64Array, coarseB: Float64Array, k: number): void {
-  const { nx, diag, faceX, faceY } = t.fine;
+export function correctRestrictCell(t: TransferPair, x: Float64Array, b: Float64Array, coarseB: Float64Array, m: number): void {
+  const { nx, faceX, faceY, dirichlet } = t.fine;
+  const k = dirichlet.cells[m];
+  const coupling = dirichlet.coupling[m];
   const i = k % nx;
   const j = (k - i) / nx;
   const v = k + nx;
   const fx = k + j;
-  const r = b[k] - (diag[k] * x[v] - faceX[fx] * x[v - 1] - faceX[fx + 1] * x[v + 1] - faceY[k] * x[v - nx] - faceY[k + nx] * x[v + nx]);
-  scatterBilinear(t, i, j, -r, coarseB);
-  forNeighbours(t.fine, k, (ni, nj, w) => scatterBilinear(t, ni, nj, w * r, coarseB));
+  const w = faceX[fx];
+  const e = faceX[fx + 1];
+  const so = faceY[k];
+  const no = faceY[k + nx];
+  const spread = b[k] - ((w + e + so + no) * x[v] - w * x[v - 1] - e * x[v + 1] - so * x[v - nx] - no * x[v + nx]);
+  const r = spread - coupling * x[v];
+  scatterBilinear(t, i, j, -spread, coarseB);
+  forNeighbours(t.fine, k, coupling, (ni, nj, wn) => scatterBilinear(t, ni, nj, wn * r, coarseB));
 }

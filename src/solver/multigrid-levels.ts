@@ -1,5 +1,6 @@
 /** Coarse levels by 2x2 cell agglomeration: face conductances and Dirichlet couplings summed, then scaled. */
 import { rowSpans, type Stencil } from './assemble.ts';
+import { dirichletList } from './assemble-dirichlet.ts';
 
 /**
  * Scale applied to the summed couplings of a coarse level.
@@ -21,18 +22,23 @@ export function coarsen(fine: Stencil, scale: number = COARSE_SCALE): Stencil {
   const faceX = coarseFacesX(fine, ncx, ncy, scale);
   const faceY = coarseFacesY(fine, ncx, ncy, scale);
   const active = new Uint8Array(ncx * ncy);
-  const dirichlet = childDirichlet(fine, active, ncx);
-  const diag = new Float64Array(ncx * ncy);
-  for (let J = 0; J < ncy; J++) {
-    for (let I = 0; I < ncx; I++) {
-      const c = I + J * ncx;
-      const fx = I + J * (ncx + 1);
-      diag[c] = active[c] === 1
-        ? faceX[fx] + faceX[fx + 1] + faceY[c] + faceY[c + ncx] + scale * dirichlet[c]
-        : 1;
-    }
+  for (let j = 0; j < ny; j++) {
+    for (let i = 0; i < nx; i++) if (fine.active[i + j * nx] === 1) active[(i >> 1) + (j >> 1) * ncx] = 1;
   }
-  return { nx: ncx, ny: ncy, diag, faceX, faceY, active, ...rowSpans(active, ncx, ncy) };
+  return { nx: ncx, ny: ncy, dirichlet: coarseDirichlet(fine, ncx, ncy, scale), faceX, faceY, active, ...rowSpans(active, ncx, ncy) };
+}
+
+/** Sums the children's Dirichlet couplings into their parents, scaled like the faces. */
+function coarseDirichlet(fine: Stencil, ncx: number, ncy: number, scale: number) {
+  const sums = new Map<number, number>();
+  const { cells, coupling } = fine.dirichlet;
+  for (let m = 0; m < cells.length; m++) {
+    const i = cells[m] % fine.nx;
+    const j = (cells[m] - i) / fine.nx;
+    const c = (i >> 1) + (j >> 1) * ncx;
+    sums.set(c, (sums.get(c) ?? 0) + scale * coupling[m]);
+  }
+  return dirichletList([...sums.keys()], [...sums.values()], ncx, ncy);
 }
 
 /** Coarse x-face I between coarse cells I - 1 and I covers fine x-face 2I in fine rows 2J and 2J + 1. */
@@ -61,27 +67,6 @@ function coarseFacesY(fine: Stencil, ncx: number, ncy: number, scale: number): F
       let sum = faceY[i + row];
       if (i + 1 < nx) sum += faceY[i + 1 + row];
       out[I + J * ncx] = scale * sum;
-    }
-  }
-  return out;
-}
-
-/**
- * Marks coarse cells with at least one active child and returns, per coarse cell, the summed Dirichlet
- * coupling of its active children (fine diagonal minus fine face coefficients).
- */
-function childDirichlet(fine: Stencil, activeOut: Uint8Array, ncx: number): Float64Array {
-  const { nx, ny, diag, faceX, faceY, active } = fine;
-  const out = new Float64Array(activeOut.length);
-  for (let j = 0; j < ny; j++) {
-    const rowX = j * (nx + 1);
-    for (let i = 0; i < nx; i++) {
-      const k = i + j * nx;
-      if (active[k] !== 1) continue;
-      const c = (i >> 1) + (j >> 1) * ncx;
-      activeOut[c] = 1;
-      const faces = faceX[rowX + i] + faceX[rowX + i + 1] + faceY[k] + faceY[k + nx];
-      out[c] += Math.max(0, diag[k] - faces);
     }
   }
   return out;

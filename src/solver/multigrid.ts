@@ -2,7 +2,7 @@
 import type { Stencil } from './assemble.ts';
 import { neighbourIndex, prolongRow, restrictRow } from './multigrid-bilinear.ts';
 import { COARSEST_MAX_CELLS, factorCoarsest, solveCoarsest, type CoarsestSolver } from './multigrid-coarsest.ts';
-import { correctProlongCell, correctRestrictCell, dirichletCells, type TransferPair } from './multigrid-dirichlet.ts';
+import { correctProlongCell, correctRestrictCell, type TransferPair } from './multigrid-dirichlet.ts';
 import { COARSE_SCALE, coarsen } from './multigrid-levels.ts';
 import { rowDot, smoothColour, smoothRedFromZeroRow, smoothRow } from './multigrid-smooth.ts';
 import { paddedVector } from './pcg-operator.ts';
@@ -46,7 +46,7 @@ export function buildMultigrid(fine: Stencil, options: MultigridOptions = {}): M
   while (s.nx * s.ny > COARSEST_MAX_CELLS && (s.nx > 1 || s.ny > 1)) {
     const c = coarsen(s, scale);
     const down: TransferPair = {
-      fine: s, coarse: c, rowN: neighbourIndex(s.ny, c.ny), dirichlet: dirichletCells(s),
+      fine: s, coarse: c, rowN: neighbourIndex(s.ny, c.ny),
     };
     levels.push({ stencil: s, x, b, down });
     s = c;
@@ -91,18 +91,17 @@ function preSmoothAndRestrict(t: TransferPair, sweeps: number, x: Float64Array, 
   const s = t.fine;
   const ny = s.ny;
   coarseB.fill(0);
-  const cursor = { next: 0 };
   for (let j = 0; j < ny + 2; j++) {
     if (j < ny) smoothRedFromZeroRow(s, x, b, j);
     if (j >= 1 && j <= ny) smoothRow(s, x, b, j - 1, 1);
-    if (sweeps === 1 && j >= 2) restrictWithDirichlet(t, x, b, coarseB, j - 2, cursor);
+    if (sweeps === 1 && j >= 2) restrictWithDirichlet(t, x, b, coarseB, j - 2);
   }
   if (sweeps === 1) return;
   for (let n = 1; n < sweeps; n++) {
     smoothColour(s, x, b, 0);
     smoothColour(s, x, b, 1);
   }
-  for (let j = 0; j < ny; j++) restrictWithDirichlet(t, x, b, coarseB, j, cursor);
+  for (let j = 0; j < ny; j++) restrictWithDirichlet(t, x, b, coarseB, j);
 }
 
 /**
@@ -111,15 +110,13 @@ function preSmoothAndRestrict(t: TransferPair, sweeps: number, x: Float64Array, 
  */
 function prolongAndPostSmooth(t: TransferPair, sweeps: number, x: Float64Array, b: Float64Array, coarseX: Float64Array): number {
   const s = t.fine;
-  const { nx, ny } = s;
-  const dirichlet = t.dirichlet;
-  let next = 0;
+  const ny = s.ny;
+  const rowPtr = s.dirichlet.rowPtr;
   let dot = 0;
   for (let j = 0; j < ny + 2; j++) {
     if (j < ny) {
       prolongRow(s, x, j, t.coarse, coarseX, t.rowN[j]);
-      const end = (j + 1) * nx;
-      while (next < dirichlet.length && dirichlet[next] < end) correctProlongCell(t, x, coarseX, dirichlet[next++]);
+      for (let m = rowPtr[j]; m < rowPtr[j + 1]; m++) correctProlongCell(t, x, coarseX, m);
     }
     if (j >= 1 && j <= ny) smoothRow(s, x, b, j - 1, 1);
     if (j >= 2) {
@@ -136,14 +133,11 @@ function prolongAndPostSmooth(t: TransferPair, sweeps: number, x: Float64Array, 
   return dot;
 }
 
-/** Restricts row j and applies the Dirichlet-cell corrections of that row (cursor walks t.dirichlet). */
-function restrictWithDirichlet(
-  t: TransferPair, x: Float64Array, b: Float64Array, coarseB: Float64Array, j: number, cursor: { next: number },
-): void {
+/** Restricts row j and applies the Dirichlet-cell corrections of that row. */
+function restrictWithDirichlet(t: TransferPair, x: Float64Array, b: Float64Array, coarseB: Float64Array, j: number): void {
   restrictRow(t.fine, x, b, j, t.coarse, coarseB, t.rowN[j]);
-  const end = (j + 1) * t.fine.nx;
-  const cells = t.dirichlet;
-  while (cursor.next < cells.length && cells[cursor.next] < end) correctRestrictCell(t, x, b, coarseB, cells[cursor.next++]);
+  const rowPtr = t.fine.dirichlet.rowPtr;
+  for (let m = rowPtr[j]; m < rowPtr[j + 1]; m++) correctRestrictCell(t, x, b, coarseB, m);
 }
 
 /** Symmetric relaxation from zero (red-black pairs, then black-red pairs), a stand-in for the direct solve. */

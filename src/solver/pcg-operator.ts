@@ -1,4 +1,4 @@
-/** Applying a 5-point stencil to a padded grid vector (the solver's matrix-vector product). */
+/** Applying a 5-point stencil to a padded grid vector (the solver's matrix-vector products). */
 import type { Stencil } from './assemble.ts';
 
 /**
@@ -10,12 +10,11 @@ export function paddedVector(nx: number, ny: number): Float64Array {
 }
 
 /**
- * out = A x on every cell, and returns x . out (the energy x^T A x).
- * @param x padded vector (see paddedVector), read.
- * @param out padded vector, written (padding rows untouched); must not alias x.
+ * out = A x on every cell (whole rows), and returns x . out (the energy x^T A x).
+ * @param x padded vector (see paddedVector), read. @param out padded vector, written; must not alias x.
  */
 export function applyStencil(s: Stencil, x: Float64Array, out: Float64Array): number {
-  const { nx, ny, diag, faceX, faceY } = s;
+  const { nx, ny, faceX, faceY } = s;
   let energy = 0;
   for (let j = 0; j < ny; j++) {
     const rowK = j * nx;
@@ -24,12 +23,27 @@ export function applyStencil(s: Stencil, x: Float64Array, out: Float64Array): nu
       const k = rowK + i;
       const v = k + nx;
       const xv = x[v];
-      const ax = diag[k] * xv
-        - faceX[rowX + i] * x[v - 1] - faceX[rowX + i + 1] * x[v + 1]
-        - faceY[k] * x[v - nx] - faceY[k + nx] * x[v + nx];
+      const w = faceX[rowX + i];
+      const e = faceX[rowX + i + 1];
+      const so = faceY[k];
+      const no = faceY[k + nx];
+      const ax = (w + e + so + no) * xv - w * x[v - 1] - e * x[v + 1] - so * x[v - nx] - no * x[v + nx];
       out[v] = ax;
       energy += xv * ax;
     }
+  }
+  return energy + addDirichlet(s, x, out, 0, ny);
+}
+
+/** out += D x for the Dirichlet cells of rows from..to - 1 (x, out padded); returns the added x . D x. */
+function addDirichlet(s: Stencil, x: Float64Array, out: Float64Array, from: number, to: number): number {
+  const { cells, coupling, rowPtr } = s.dirichlet;
+  let energy = 0;
+  for (let m = rowPtr[from], end = rowPtr[to]; m < end; m++) {
+    const v = cells[m] + s.nx;
+    const dx = coupling[m] * x[v];
+    out[v] += dx;
+    energy += x[v] * dx;
   }
   return energy;
 }
@@ -41,7 +55,7 @@ export function applyStencil(s: Stencil, x: Float64Array, out: Float64Array): nu
  * @param p padded search direction, updated; @param z padded preconditioned residual, overwritten by A p.
  */
 export function updateDirectionAndApply(s: Stencil, p: Float64Array, z: Float64Array, beta: number): number {
-  const { nx, ny, diag, faceX, faceY, rowStart, rowEnd } = s;
+  const { nx, ny, faceX, faceY, rowStart, rowEnd } = s;
   let energy = 0;
   for (let j = 0; j <= ny; j++) {
     if (j < ny) {
@@ -55,12 +69,15 @@ export function updateDirectionAndApply(s: Stencil, p: Float64Array, z: Float64A
       const k = rowK + i;
       const v = k + nx;
       const pv = p[v];
-      const ap = diag[k] * pv
-        - faceX[rowX + i] * p[v - 1] - faceX[rowX + i + 1] * p[v + 1]
-        - faceY[k] * p[v - nx] - faceY[k + nx] * p[v + nx];
+      const w = faceX[rowX + i];
+      const e = faceX[rowX + i + 1];
+      const so = faceY[k];
+      const no = faceY[k + nx];
+      const ap = (w + e + so + no) * pv - w * p[v - 1] - e * p[v + 1] - so * p[v - nx] - no * p[v + nx];
       z[v] = ap;
       energy += pv * ap;
     }
+    energy += addDirichlet(s, p, z, j - 1, j);
   }
   return energy;
 }
@@ -69,7 +86,8 @@ export function updateDirectionAndApply(s: Stencil, p: Float64Array, z: Float64A
  * r = b - A x with x padded and b, r plain (i + j * nx); returns ||r||_2. r may alias b.
  */
 export function residual(s: Stencil, x: Float64Array, b: Float64Array, r: Float64Array): number {
-  const { nx, ny, diag, faceX, faceY } = s;
+  const { nx, ny, faceX, faceY } = s;
+  const { cells, coupling, rowPtr } = s.dirichlet;
   let sum = 0;
   for (let j = 0; j < ny; j++) {
     const rowK = j * nx;
@@ -77,12 +95,14 @@ export function residual(s: Stencil, x: Float64Array, b: Float64Array, r: Float6
     for (let i = 0; i < nx; i++) {
       const k = rowK + i;
       const v = k + nx;
-      const rk = b[k] - (diag[k] * x[v]
-        - faceX[rowX + i] * x[v - 1] - faceX[rowX + i + 1] * x[v + 1]
-        - faceY[k] * x[v - nx] - faceY[k + nx] * x[v + nx]);
-      r[k] = rk;
-      sum += rk * rk;
+      const w = faceX[rowX + i];
+      const e = faceX[rowX + i + 1];
+      const so = faceY[k];
+      const no = faceY[k + nx];
+      r[k] = b[k] - ((w + e + so + no) * x[v] - w * x[v - 1] - e * x[v + 1] - so * x[v - nx] - no * x[v + nx]);
     }
+    for (let m = rowPtr[j]; m < rowPtr[j + 1]; m++) r[cells[m]] -= coupling[m] * x[cells[m] + nx];
+    for (let k = rowK; k < rowK + nx; k++) sum += r[k] * r[k];
   }
   return Math.sqrt(sum);
 }

@@ -48,8 +48,9 @@ describe('coarsen', () => {
     expect(coarse.faceX[1 + 4]).toBe(0.5);
     expect(coarse.faceY[3]).toBe(1); // fine y-faces of row 2 under columns 0 and 1
     expect(coarse.faceY[3 + 2]).toBe(0.5); // column 4 alone
-    // Inlet cell (0, 0): faces east 1 and north 1, Dirichlet (2 + 2) / 2.
-    expect(coarse.diag[0]).toBe(1 + 1 + 2);
+    // Coarse inlet (0, 0) and outlet (2, 0) cover two coupled fine cells each: (2 + 2) / 2; the top row one: 2 / 2.
+    expect(Array.from(coarse.dirichlet.cells)).toEqual([0, 2, 3, 5]);
+    expect(Array.from(coarse.dirichlet.coupling)).toEqual([2, 2, 1, 1]);
     expect(coarse.faceX[0]).toBe(0);
   });
 });
