@@ -15,19 +15,19 @@ function number(error: string) {
 
 /** A length above zero (a diameter, a width). */
 function positiveLength() {
-  const error = `must be a length above 0 and at most ${MAX_PART_LENGTH}`;
+  const error = `must be a number above 0 and at most ${MAX_PART_LENGTH} (a length in the document's units)`;
   return number(error).gt(0, { error }).max(MAX_PART_LENGTH, { error });
 }
 
 /** A length of zero or more (a margin, a lift, a clearance). */
 function lengthFromZero() {
-  const error = `must be a length from 0 to ${MAX_PART_LENGTH}`;
+  const error = `must be a number from 0 to ${MAX_PART_LENGTH} (a length in the document's units)`;
   return number(error).min(0, { error }).max(MAX_PART_LENGTH, { error });
 }
 
 /** An angle strictly between 0 and 90 degrees from the plane of the valve head. */
 function cutAngle() {
-  const error = 'must be an angle above 0 and below 90 degrees, measured from the plane of the valve head';
+  const error = 'must be a number above 0 and below 90 (degrees from the plane of the valve head)';
   return number(error).gt(0, { error }).lt(90, { error });
 }
 
@@ -38,7 +38,7 @@ const coordinate = (() => {
 
 const inclination = (() => {
   const lean = MAX_VALVE_INCLINATION_DEG;
-  const error = `must be an angle from -${lean} to ${lean} degrees (the lean of the opening direction from straight down)`;
+  const error = `must be a number from -${lean} to ${lean} (degrees the opening direction leans from straight down)`;
   return number(error).min(-lean, { error }).max(lean, { error });
 })();
 
@@ -64,12 +64,12 @@ export const valvePartSchema = z.strictObject(
 );
 
 const throatPct = (() => {
-  const error = 'must be a percentage above 0 and below 100 (the throat diameter as a share of the valve diameter)';
+  const error = 'must be a number above 0 and below 100 (the throat diameter as a percentage of the valve diameter)';
   return number(error).gt(0, { error }).lt(100, { error });
 })();
 
 const throatOffsetPct = (() => {
-  const error = 'must be a percentage from -100 to 100 of the throat radius';
+  const error = 'must be a number from -100 to 100 (percent of the throat radius)';
   return number(error).min(-100, { error }).max(100, { error });
 })();
 
@@ -91,7 +91,7 @@ export const borePartSchema = z.strictObject(
 );
 
 const portArea = (() => {
-  const error = `must be an area above 0 and at most ${MAX_PORT_AREA}`;
+  const error = `must be a number above 0 and at most ${MAX_PORT_AREA} (an area in the document's units squared)`;
   return number(error).gt(0, { error }).max(MAX_PORT_AREA, { error });
 })();
 

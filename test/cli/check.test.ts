@@ -22,7 +22,7 @@ describe('check (in process)', () => {
     expect(out).toContain('variants: 2, active: "tight short side"');
     expect(out).toContain('variant "tight short side" (active)');
     expect(out).toContain('variant "generous short side"\n');
-    expect(out).toContain('edges: 21 in the outline (1 inlet, 1 outlet, 19 wall), 10 in islands');
+    expect(out).toContain('edges: 21 in the outline (1 inlet, 1 outlet, 19 wall), 12 in islands');
     expect(out).toContain('islands: 1 (valve head)');
     expect(out.match(/fluid area: \d+\.\d mm\^2/g)).toHaveLength(2);
   });

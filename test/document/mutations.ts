@@ -35,7 +35,7 @@ export function setAt(root: Json, path: Path, value: Json): void {
 }
 
 /** Fields the schema lets a file leave out. */
-const OPTIONAL = new Set(['filletRadius', 'wallName', 'note']);
+const OPTIONAL = new Set(['filletRadius', 'wallName', 'note', 'anchor', 'parts', 'valve', 'seat', 'bore', 'port']);
 
 /** `path:` as the message writes it, so "variants[1]" does not match "variants[1].name". */
 export const named = (path: Path): string => `${formatPath(path)}:`;

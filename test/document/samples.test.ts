@@ -5,6 +5,7 @@ import type { PortDocument, Section } from '../../src/document/types.ts';
 import { defaultTolerance, regionArea, sectionToDomain } from '../../src/geometry/index.ts';
 import type { Ring } from '../../src/solver/types.ts';
 import { buildSamples } from '../../samples/make-samples.ts';
+import { applyParts } from '../../src/parts/apply.ts';
 
 const read = (name: string): PortDocument => loadDocument(readFileSync(new URL(`../../samples/${name}`, import.meta.url), 'utf8'));
 const TIGHT = 'street-tight-short-side.json';
@@ -31,6 +32,17 @@ describe('sample files', () => {
     expect(read('short-side-compare.json').variants.map((v) => v.name)).toEqual(['tight short side', 'generous short side']);
   });
 
+  it('carry their valve, seat and test bore as parts, and the section is what the parts generate', () => {
+    for (const name of Object.keys(buildSamples())) {
+      for (const variant of read(name).variants) {
+        expect(variant.parts?.valve?.diameter).toBe(46);
+        expect(variant.parts?.seat?.throatPct).toBe(91);
+        expect(variant.parts?.bore).toEqual({ diameter: 88, depth: 60, valveEdgeToWall: 8 });
+        expect(applyParts(variant.section, variant.parts)).toEqual(variant.section);
+      }
+    }
+  });
+
   it('differ only in the short-side fillet radius, 4 mm against 14 mm', () => {
     const tight = section(TIGHT), generous = section(GENEROUS);
     expect(tight.outline.vertices[SHORT_SIDE_VERTEX].filletRadius).toBe(4);
@@ -49,19 +61,20 @@ describe('sample proportions (46 mm valve)', () => {
 
   it('has a 46 mm valve head and a throat of 91% of it', () => {
     expect(s.islands[0].name).toBe('valve head');
-    expect(valve[1][0] - valve[0][0]).toBeCloseTo(46, 6);
+    // island vertex 0 is the right end of the valve face, the last one the left end
+    expect(valve[0][0] - valve[valve.length - 1][0]).toBeCloseTo(46, 6);
     // Seat throat 88-93% of the valve, 90-91% the usual choice [practice, REFERENCES.md 3a].
     const throat = vertexAt(s, 18)[0] - vertexAt(s, 5)[0];
     expect(throat).toBeCloseTo(0.91 * 46, 1);
   });
 
   it('shows the valve 10 mm off its seat (L/D 0.22)', () => {
-    // Seat face (outline vertices 7-8) and valve face (island vertices 8-9) are parallel 45 deg lines;
-    // at 45 deg the vertical offset between them is the lift.
+    // Seat face (outline vertices 7-8) and the valve's seat face on the same side (island vertices 9-10) are
+    // parallel 45 deg lines; at 45 deg the vertical offset between them is the lift.
     const seatLine = vertexAt(s, 7)[1] - vertexAt(s, 7)[0];
     expect(vertexAt(s, 8)[1] - vertexAt(s, 8)[0]).toBeCloseTo(seatLine, 6);
-    const valveLine = valve[8][1] - valve[8][0];
-    expect(valve[9][1] - valve[9][0]).toBeCloseTo(valveLine, 6);
+    const valveLine = valve[9][1] - valve[9][0];
+    expect(valve[10][1] - valve[10][0]).toBeCloseTo(valveLine, 6);
     expect(seatLine - valveLine).toBeCloseTo(10, 6);
     expect(read(TIGHT).variants[0].note).toContain('10.0 mm lift (L/D 0.22)');
   });
@@ -87,11 +100,11 @@ describe('sample proportions (46 mm valve)', () => {
   it('leaves flow room on both sides of the valve, and the valve clear of the seat', () => {
     const domain = sectionToDomain(s, defaultTolerance(s));
     const island = domain.islands[0];
-    const axisX = (valve[0][0] + valve[1][0]) / 2;
+    const axisX = (valve[0][0] + valve[valve.length - 1][0]) / 2;
     expect(ringGap(island, domain.outer, (x) => x < axisX)).toBeGreaterThan(5);
     expect(ringGap(island, domain.outer, (x) => x > axisX)).toBeGreaterThan(5);
     // The valve moved straight down its axis, so its face is not opposite the seat face: the nearest seat point
-    // is on the 30 deg cut, 8.0 mm from the top of the valve face. Anything over 5 mm is clearly off the seat.
+    // is on the 30 deg top cut, 7.9 mm from the valve's seat face. Anything over 5 mm is clearly off the seat.
     const seat = domain.wallNames.indexOf('seat');
     expect(ringGap(island, domain.outer, () => true, seat)).toBeGreaterThan(5);
   });
