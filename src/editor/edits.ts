@@ -13,6 +13,9 @@ import {
   setFilletRadius, setFilletRadiusArgs,
 } from './edits-points.ts';
 import {
+  regenerateParts, removeParts, removePartsArgs, setLift, setLiftArgs, setPart, setPartArgs, setParts, setPartsArgs,
+} from './edits-parts.ts';
+import {
   addVariant, addVariantArgs, deleteVariant, deleteVariantArgs, renameVariant, renameVariantArgs,
   setActiveVariant, setActiveVariantArgs,
 } from './edits-variants.ts';
@@ -98,12 +101,13 @@ export function isEditName(name: string): name is EditName {
 }
 
 /**
- * Applies edit `name` to `doc`: checks `args` (form, then against the document) and runs the pure edit.
+ * Applies edit `name` to `doc`: checks `args` (form, then against the document) and runs the pure edit, then
+ * regenerates the parametric parts of any section it changed (so generated geometry always matches its numbers).
  * Throws EditError with a plain message for an unknown edit or bad arguments; `doc` is never changed.
  * Returns `doc` itself when the edit changes nothing (so no undo step is needed).
  */
 export function applyEdit(doc: PortDocument, name: string, args: unknown): PortDocument {
   if (!isEditName(name)) throw new EditError('', `There is no edit called "${name}".`);
   const edit = EDITS[name] as EditSpec<unknown>;
-  return edit.run(doc, parseArgs(edit.args, name, args));
+  return regenerateParts(doc, edit.run(doc, parseArgs(edit.args, name, args)), name);
 }

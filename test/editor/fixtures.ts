@@ -36,7 +36,7 @@ export function boxSection(): Section {
 export function boxDocument(): PortDocument {
   return deepFreeze({
     format: 'portwright-section',
-    version: 2,
+    version: 3,
     title: 'Test box',
     units: 'mm',
     variants: [
