@@ -83,6 +83,10 @@ export const EDITS = {
   setActiveVariant: spec({ name: 'setActiveVariant', label: 'Switch variant', args: setActiveVariantArgs, run: setActiveVariant }),
   deleteVariant: spec({ name: 'deleteVariant', label: 'Delete variant', args: deleteVariantArgs, run: deleteVariant }),
   setUnits: spec({ name: 'setUnits', label: 'Change units', args: setUnitsArgs, run: setUnits }),
+  setPart: spec({ name: 'setPart', label: 'Change part', args: setPartArgs, run: setPart }),
+  setParts: spec({ name: 'setParts', label: 'Set parts', args: setPartsArgs, run: setParts }),
+  setLift: spec({ name: 'setLift', label: 'Set lift', args: setLiftArgs, run: setLift }),
+  removeParts: spec({ name: 'removeParts', label: 'Remove parts', args: removePartsArgs, run: removeParts }),
 } as const;
 
 export type EditName = keyof typeof EDITS;
