@@ -1,9 +1,11 @@
 /** fast-check generators of valid section documents (valid by the schema; the geometry need not make sense). */
 
 import fc from 'fast-check';
-import type { Edge, Island, Outline, PortDocument, Section, Variant, Vertex } from '../../src/document/types.ts';
+import type { Edge, Island, Outline, Parts, PortDocument, Section, Variant, Vertex } from '../../src/document/types.ts';
 import { FORMAT_VERSION } from '../../src/document/types.ts';
-import { MAX_COORDINATE, MAX_FILLET_RADIUS, MAX_NAME_LENGTH } from '../../src/document/limits.ts';
+import {
+  MAX_COORDINATE, MAX_FILLET_RADIUS, MAX_NAME_LENGTH, MAX_PART_LENGTH, MAX_PORT_AREA, MAX_VALVE_INCLINATION_DEG,
+} from '../../src/document/limits.ts';
 
 /** Plain objects, as a loaded file gives (fc.record may otherwise build null-prototype ones). */
 const PLAIN = { noNullPrototype: true } as const;
@@ -49,8 +51,26 @@ function outlineArb(role: fc.Arbitrary<Edge['role']>): fc.Arbitrary<Outline> {
 
 const islandArb: fc.Arbitrary<Island> = fc.record({ name: labelArb(), outline: outlineArb(fc.constant('wall')) }, PLAIN);
 const sectionArb: fc.Arbitrary<Section> = fc.record({ outline: outlineArb(roleArb), islands: fc.array(islandArb, { maxLength: 2 }) }, PLAIN);
+const positive = fc.double({ min: 0, max: MAX_PART_LENGTH, minExcluded: true, noNaN: true });
+const fromZero = fc.double({ min: 0, max: MAX_PART_LENGTH, noNaN: true });
+const cutAngle = fc.double({ min: 0, max: 90, minExcluded: true, maxExcluded: true, noNaN: true });
+const lean = fc.double({ min: -MAX_VALVE_INCLINATION_DEG, max: MAX_VALVE_INCLINATION_DEG, noNaN: true });
+
+/** A valve and a measured port area: parts that need no anchor corners (the numbers need not make a valve). */
+const partsArb: fc.Arbitrary<Parts> = fc.record(
+  {
+    valve: fc.record({
+      diameter: positive, seatAngleDeg: cutAngle, seatFaceWidth: positive, margin: fromZero, backCutAngleDeg: cutAngle,
+      headThickness: positive, stemDiameter: positive, stemLength: positive,
+      axis: fc.record({ x: coordinate, y: coordinate, inclinationDeg: lean }, PLAIN), lift: fromZero,
+    }, PLAIN),
+    port: fc.record({ tightestArea: fc.double({ min: 0, max: MAX_PORT_AREA, minExcluded: true, noNaN: true }) }, PLAIN),
+  },
+  { requiredKeys: [], noNullPrototype: true },
+);
+
 const variantArb: fc.Arbitrary<Variant> = fc.record(
-  { name: labelArb(), note: fc.string({ maxLength: 200 }), section: sectionArb },
+  { name: labelArb(), note: fc.string({ maxLength: 200 }), parts: partsArb, section: sectionArb },
   { requiredKeys: ['name', 'section'], noNullPrototype: true },
 );
 

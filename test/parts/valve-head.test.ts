@@ -1,7 +1,7 @@
 /** The generated valve head island: its measures read back from the island, and lift moving it along the axis. */
 
 import { describe, expect, it } from 'vitest';
-import type { Island, Point, ValvePart } from '../../src/document/types.ts';
+import type { Island, Point, Section, ValvePart } from '../../src/document/types.ts';
 import { VALVE_ISLAND_NAME, valveIsland } from '../../src/parts/valve-head.ts';
 import { applyParts } from '../../src/parts/apply.ts';
 import { PartsError } from '../../src/parts/errors.ts';
@@ -93,10 +93,14 @@ describe('valve head island', () => {
   });
 
   it('is placed in the section by applyParts, replacing an island of its name and keeping the others', () => {
-    const drawn = { ...handDrawnPort(), islands: [
-      { name: 'guide boss', outline: { vertices: [{ at: [-40, 45] }, { at: [-35, 45] }, { at: [-37, 50] }], edges: [0, 1, 2].map(() => ({ kind: 'line', role: 'wall' }) as const) } },
-      { name: VALVE_ISLAND_NAME, outline: { vertices: [{ at: [-5, -5] }, { at: [5, -5] }, { at: [0, 0] }], edges: [0, 1, 2].map(() => ({ kind: 'line', role: 'wall' }) as const) } },
-    ] };
+    const triangle = (name: string, points: Point[]): Island => ({
+      name,
+      outline: { vertices: points.map((at) => ({ at })), edges: points.map(() => ({ kind: 'line', role: 'wall' })) },
+    });
+    const drawn: Section = {
+      ...handDrawnPort(),
+      islands: [triangle('guide boss', [[-40, 45], [-35, 45], [-37, 50]]), triangle(VALVE_ISLAND_NAME, [[-5, -5], [5, -5], [0, 0]])],
+    };
     const section = applyParts(drawn, PARTS_40);
     expect(section.islands.map((i) => i.name)).toEqual(['guide boss', VALVE_ISLAND_NAME]);
     expect(section.islands[1]).toEqual(valveIsland(VALVE_40));
