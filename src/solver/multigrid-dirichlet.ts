@@ -7,7 +7,7 @@
  * linearly to zero at the boundary. Restriction applies the transpose, so the V-cycle stays symmetric.
  */
 import type { Stencil } from './assemble.ts';
-import { bilinearWeights } from './multigrid-bilinear.ts';
+import { bilinearWeights, interpolationStrength } from './multigrid-bilinear.ts';
 
 /** Transfer context of one fine level and its coarse level. */
 export interface TransferPair {
@@ -15,24 +15,29 @@ export interface TransferPair {
   readonly coarse: Stencil;
   /** Coarse neighbour row towards each fine row (see neighbourIndex). */
   readonly rowN: Int32Array;
+  /** Interpolation strength of each coarse cell (interpolationStrength). */
+  readonly strength: Float32Array;
+  /** Scratch for bilinearWeights: up to 4 coarse cells and their weights. */
+  readonly cells: Int32Array;
+  readonly weights: Float64Array;
 }
 
-/** Scratch for bilinearWeights (at most 4 terms). */
-const CELLS = new Int32Array(4);
-const WEIGHTS = new Float64Array(4);
+export function transferPair(fine: Stencil, coarse: Stencil, rowN: Int32Array): TransferPair {
+  return { fine, coarse, rowN, strength: interpolationStrength(coarse), cells: new Int32Array(4), weights: new Float64Array(4) };
+}
 
 /** Bilinear prolongation at fine cell (i, j) from the coarse padded vector (same operator as prolongRow). */
 function bilinearAt(t: TransferPair, i: number, j: number, coarseX: Float64Array): number {
-  const n = bilinearWeights(t.coarse, i, j, t.rowN[j], CELLS, WEIGHTS);
+  const n = bilinearWeights(t.coarse, t.strength, i, j, t.rowN[j], t.cells, t.weights);
   let value = 0;
-  for (let m = 0; m < n; m++) value += WEIGHTS[m] * coarseX[CELLS[m] + t.coarse.nx];
+  for (let m = 0; m < n; m++) value += t.weights[m] * coarseX[t.cells[m] + t.coarse.nx];
   return value;
 }
 
 /** Transpose of bilinearAt: adds amount * weight to each coarse cell fine cell (i, j) draws from. */
 function scatterBilinear(t: TransferPair, i: number, j: number, amount: number, coarseB: Float64Array): void {
-  const n = bilinearWeights(t.coarse, i, j, t.rowN[j], CELLS, WEIGHTS);
-  for (let m = 0; m < n; m++) coarseB[CELLS[m]] += WEIGHTS[m] * amount;
+  const n = bilinearWeights(t.coarse, t.strength, i, j, t.rowN[j], t.cells, t.weights);
+  for (let m = 0; m < n; m++) coarseB[t.cells[m]] += t.weights[m] * amount;
 }
 
 /**

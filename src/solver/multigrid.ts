@@ -1,8 +1,9 @@
 /** Geometric multigrid V-cycle on masked cut-cell levels, used as the conjugate-gradient preconditioner. */
 import type { Stencil } from './assemble.ts';
-import { neighbourIndex, prolongRow, restrictRow } from './multigrid-bilinear.ts';
+import { neighbourIndex, prolongRow } from './multigrid-bilinear.ts';
+import { restrictRow } from './multigrid-restrict.ts';
 import { COARSEST_MAX_CELLS, factorCoarsest, solveCoarsest, type CoarsestSolver } from './multigrid-coarsest.ts';
-import { correctProlongCell, correctRestrictCell, type TransferPair } from './multigrid-dirichlet.ts';
+import { correctProlongCell, correctRestrictCell, transferPair, type TransferPair } from './multigrid-dirichlet.ts';
 import { COARSE_SCALE, coarsen } from './multigrid-levels.ts';
 import { rowDot, smoothColour, smoothRedFromZeroRow, smoothRow } from './multigrid-smooth.ts';
 import { paddedVector } from './pcg-operator.ts';
@@ -45,10 +46,7 @@ export function buildMultigrid(fine: Stencil, options: MultigridOptions = {}): M
   let b: Float64Array = new Float64Array(0);
   while (s.nx * s.ny > COARSEST_MAX_CELLS && (s.nx > 1 || s.ny > 1)) {
     const c = coarsen(s, scale);
-    const down: TransferPair = {
-      fine: s, coarse: c, rowN: neighbourIndex(s.ny, c.ny),
-    };
-    levels.push({ stencil: s, x, b, down });
+    levels.push({ stencil: s, x, b, down: transferPair(s, c, neighbourIndex(s.ny, c.ny)) });
     s = c;
     x = paddedVector(s.nx, s.ny);
     b = new Float64Array(s.nx * s.ny);
@@ -115,7 +113,7 @@ function prolongAndPostSmooth(t: TransferPair, sweeps: number, x: Float64Array, 
   let dot = 0;
   for (let j = 0; j < ny + 2; j++) {
     if (j < ny) {
-      prolongRow(s, x, j, t.coarse, coarseX, t.rowN[j]);
+      prolongRow(s, x, j, t.coarse, t.strength, coarseX, t.rowN[j]);
       for (let m = rowPtr[j]; m < rowPtr[j + 1]; m++) correctProlongCell(t, x, coarseX, m);
     }
     if (j >= 1 && j <= ny) smoothRow(s, x, b, j - 1, 1);
@@ -135,7 +133,7 @@ function prolongAndPostSmooth(t: TransferPair, sweeps: number, x: Float64Array, 
 
 /** Restricts row j and applies the Dirichlet-cell corrections of that row. */
 function restrictWithDirichlet(t: TransferPair, x: Float64Array, b: Float64Array, coarseB: Float64Array, j: number): void {
-  restrictRow(t.fine, x, b, j, t.coarse, coarseB, t.rowN[j]);
+  restrictRow(t.fine, x, b, j, t.coarse, t.strength, coarseB, t.rowN[j]);
   const rowPtr = t.fine.dirichlet.rowPtr;
   for (let m = rowPtr[j]; m < rowPtr[j + 1]; m++) correctRestrictCell(t, x, b, coarseB, m);
 }
