@@ -26,15 +26,20 @@ export const FULL_STRENGTH_DIAGONAL = 2;
  */
 export function interpolationStrength(c: Stencil): Float32Array {
   const { nx, ny, faceX, faceY, active, dirichlet } = c;
-  const diag = new Float64Array(nx * ny);
+  const out = new Float32Array(nx * ny);
+  const scale = 1 / FULL_STRENGTH_DIAGONAL;
   for (let j = 0; j < ny; j++) {
-    for (let i = 0; i < nx; i++) {
-      const k = i + j * nx;
-      if (active[k] === 1) diag[k] = faceX[k + j] + faceX[k + j + 1] + faceY[k] + faceY[k + nx];
+    for (let i = c.rowStart[j], k = i + j * nx, end = c.rowEnd[j]; i < end; i++, k++) {
+      if (active[k] === 1) out[k] = Math.min(1, (faceX[k + j] + faceX[k + j + 1] + faceY[k] + faceY[k + nx]) * scale);
     }
   }
-  for (let m = 0; m < dirichlet.cells.length; m++) diag[dirichlet.cells[m]] += dirichlet.coupling[m];
-  return Float32Array.from(diag, (d) => Math.min(1, d / FULL_STRENGTH_DIAGONAL));
+  for (let m = 0; m < dirichlet.cells.length; m++) {
+    const k = dirichlet.cells[m];
+    const j = Math.floor(k / nx);
+    const diag = faceX[k + j] + faceX[k + j + 1] + faceY[k] + faceY[k + nx] + dirichlet.coupling[m];
+    out[k] = Math.min(1, diag * scale);
+  }
+  return out;
 }
 
 /** For each fine index along one axis: the coarse neighbour towards it, clamped to the grid (then it is the parent). */
@@ -77,24 +82,25 @@ export function prolongRow(
   const first = fs >> 1;
   const last = (fe - 1) >> 1;
   const left = first > 0 ? first - 1 : first;
-  let gL = sideWeight(strength, rowC, rowD, left);
+  // Sliding window over columns: 1 / (3 + g) and g-weighted value of the left, centre and right column.
+  let invL = 1 / (3 + sideWeight(strength, rowC, rowD, left));
   let vL = sideValue(strength, coarseX, rowC, rowD, ncx, left);
-  let gC = sideWeight(strength, rowC, rowD, first);
+  let invC = 1 / (3 + sideWeight(strength, rowC, rowD, first));
   let vC = sideValue(strength, coarseX, rowC, rowD, ncx, first);
   for (let I = first; I <= last; I++) {
     const right = I + 1 < ncx ? I + 1 : I;
-    const gR = sideWeight(strength, rowC, rowD, right);
+    const invR = 1 / (3 + sideWeight(strength, rowC, rowD, right));
     const vR = sideValue(strength, coarseX, rowC, rowD, ncx, right);
     if (act[rowC + I] !== 0) {
       const sN = strength[rowD + I];
-      const tp = (3 * coarseX[rowC + I + ncx] + sN * coarseX[rowD + I + ncx]) / (3 + sN);
+      const tp3 = (9 * coarseX[rowC + I + ncx] + 3 * sN * coarseX[rowD + I + ncx]) / (3 + sN);
       const i0 = 2 * I;
-      if (i0 >= fs) x[base + i0] += (3 * tp + vL) / (3 + gL);
-      if (i0 + 1 < fe) x[base + i0 + 1] += (3 * tp + vR) / (3 + gR);
+      if (i0 >= fs) x[base + i0] += (tp3 + vL) * invL;
+      if (i0 + 1 < fe) x[base + i0 + 1] += (tp3 + vR) * invR;
     }
-    gL = gC;
+    invL = invC;
     vL = vC;
-    gC = gR;
+    invC = invR;
     vC = vR;
   }
 }

@@ -21,16 +21,17 @@ export function restrictRow(
   const rowD = jn * ncx;
   const first = Math.max(0, (fs >> 1) - 1);
   const last = Math.min(ncx - 1, ((fe - 1) >> 1) + 1);
-  let gL = sideWeightOf(strength, rowC, rowD, first > 0 ? first - 1 : first);
-  let gC = sideWeightOf(strength, rowC, rowD, first);
+  // Sliding window of 1 / (3 + g) for the left, centre and right column.
+  let invL = 1 / (3 + sideWeightOf(strength, rowC, rowD, first > 0 ? first - 1 : first));
+  let invC = 1 / (3 + sideWeightOf(strength, rowC, rowD, first));
   let sidePrev = 0;
   let sideCur = 0;
   for (let I = first; I <= last; I++) {
     const right = I + 1 < ncx ? I + 1 : I;
-    const gR = sideWeightOf(strength, rowC, rowD, right);
+    const invR = 1 / (3 + sideWeightOf(strength, rowC, rowD, right));
     const i0 = 2 * I;
-    const q0 = i0 >= fs && i0 < fe ? cellResidual(s, x, b, j, i0) / (3 + gL) : 0;
-    const q1 = i0 + 1 >= fs && i0 + 1 < fe ? cellResidual(s, x, b, j, i0 + 1) / (3 + gR) : 0;
+    const q0 = i0 >= fs && i0 < fe ? cellResidual(s, x, b, j, i0) * invL : 0;
+    const q1 = i0 + 1 >= fs && i0 + 1 < fe ? cellResidual(s, x, b, j, i0 + 1) * invR : 0;
     spreadParent(strength, coarseB, rowC, rowD, I, 3 * (q0 + q1));
     if (I > 0) {
       sidePrev += q0;
@@ -42,8 +43,8 @@ export function restrictRow(
     sideCur = 0;
     if (right !== I) sideCur = q1;
     else sidePrev += q1;
-    gL = gC;
-    gC = gR;
+    invL = invC;
+    invC = invR;
   }
   spreadSide(strength, coarseB, rowC, rowD, last, sidePrev);
   if (last + 1 < ncx) spreadSide(strength, coarseB, rowC, rowD, last + 1, sideCur);
