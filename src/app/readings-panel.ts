@@ -16,10 +16,11 @@ export class ReadingsPanel {
     const rows: Array<[string, string, string?]> = [
       ['grid', `${reply.nx} × ${reply.ny} cells, ${reply.h.toFixed(units === 'mm' ? 2 : 4)} ${units}`],
       ['solve', `${reply.iterations} iterations, residual ${reply.residual.toExponential(1)}, ${refineMs.toFixed(0)} ms`],
-      ['peak speed ratio', `${reply.peak.speedRatio.toFixed(2)} at (${reply.peak.x.toFixed(digits)}, ${reply.peak.y.toFixed(digits)})`, 'peak'],
+      ['peak speed ratio (clear of sharp corners)', `${reply.peak.speedRatio.toFixed(2)} at (${reply.peak.x.toFixed(digits)}, ${reply.peak.y.toFixed(digits)})`, 'peak'],
     ];
+    // The port's walls are what a porter can change; the bench's bore and the valve are in the plots.
     for (const wall of reading?.walls ?? []) {
-      rows.push([`${wall.name} peak`, `${wall.peak.speedRatio.toFixed(3)}`, `${slug(wall.name)}-peak`]);
+      if (wall.inPort) rows.push([`${wall.name} peak`, `${wall.peak.speedRatio.toFixed(3)}`, `${slug(wall.name)}-peak`]);
     }
     if (reading?.tightest) rows.push(['tightest section', `${reading.tightest.width.toFixed(digits)} ${units} wide`, 'tightest']);
     if (reading) rows.push(['slow share', `${(100 * reading.slow.share).toFixed(1)}% of the section`, 'slow-share']);

@@ -13,4 +13,9 @@ export class StatusLine {
   clear(): void {
     this.show('');
   }
+
+  /** Clear an error or warning that a later success answers; leave plain information in place. */
+  clearErrors(): void {
+    if (this.element.dataset.level !== 'info') this.clear();
+  }
 }

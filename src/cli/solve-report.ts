@@ -2,6 +2,7 @@
 
 import type { Units } from '../document/types.ts';
 import { pointInRegion } from '../geometry/index.ts';
+import type { BreathingSummary } from '../parts/index.ts';
 import { probeFlow } from '../solver/probe.ts';
 import type { ReadingSummary } from '../solver/reading/index.ts';
 import type { FlowDomain, SolveResult, WallSpeeds } from '../solver/types.ts';
@@ -63,6 +64,10 @@ export interface SolveReport {
   readonly findings: readonly string[];
   readonly stations: ReadingSummary['stations'];
   readonly walls: readonly WallReport[];
+  /** Valve and seat numbers at the variant's lift (null without valve and seat parts); document units. */
+  readonly breathing: BreathingSummary | null;
+  /** Notes on the parts against usual practice (throat band, L/D, shrouding). */
+  readonly notes: readonly string[];
 }
 
 export interface SolvedVariant {
@@ -73,6 +78,8 @@ export interface SolvedVariant {
   readonly result: SolveResult;
   readonly summary: ReadingSummary;
   readonly converged: boolean;
+  readonly breathing: BreathingSummary | null;
+  readonly notes: readonly string[];
 }
 
 /** The report of a solved variant, with `probes` (document units) read from the field. */
@@ -97,6 +104,8 @@ export function buildSolveReport(solved: SolvedVariant, probes: readonly (readon
     portSlowShare: summary.portSlowShare,
     findings: summary.findings,
     stations: summary.stations,
+    breathing: solved.breathing,
+    notes: solved.notes,
     walls: result.walls.map((wall) => wallReport(wall, summary)),
   };
 }

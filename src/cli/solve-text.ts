@@ -34,6 +34,8 @@ export function solveReportLines(report: SolveReport): string[] {
   ];
   const nameWidth = Math.max(...report.walls.map((w) => w.name.length));
   for (const wall of report.walls) lines.push(...wallLines(wall, nameWidth, f));
+  if (report.breathing) lines.push('', ...breathingLines(report.breathing, report.units));
+  for (const note of report.notes) lines.push(`  note: ${note}`);
   lines.push('', report.findings.length > 0 ? 'findings:' : 'findings: none');
   for (const finding of report.findings) lines.push(`  - ${finding}`);
   if (report.probes.length > 0) {
@@ -95,4 +97,17 @@ function percent(share: number): string {
   if (!Number.isFinite(share)) return '-';
   const p = share * 100;
   return `${p >= 1 ? p.toFixed(1) : p.toPrecision(2)}%`;
+}
+
+/** The valve and seat numbers at the variant's lift. */
+function breathingLines(b: NonNullable<SolveReport['breathing']>, units: string): string[] {
+  const len = (v: number) => `${sig(v, 4)} ${units}`;
+  const area = (v: number) => `${sig(v, 5)} ${units}^2`;
+  return [
+    `breathing at ${len(b.lift)} lift (valve ${len(b.valveDiameter)}, L/D ${sig(b.ld, 3)}):`,
+    `  curtain area ${area(b.curtainArea)}, least valve flow area ${area(b.minValveArea)} (stage ${b.stage}), ` +
+      `throat ${area(b.throatArea)} (${sig(b.throatPct, 3)}% of the valve)`,
+    `  greatest restriction at this lift: ${b.greatest}` +
+      (b.crossoverLift === null ? '' : `; it passes from the valve to the port side at ${len(b.crossoverLift)} lift`),
+  ];
 }

@@ -3,6 +3,7 @@
 import { DocumentError, loadDocument, type PortDocument, type Variant } from '../document/index.ts';
 import { GeometryError, defaultTolerance, sectionToDomain } from '../geometry/index.ts';
 import { DEFAULT_MAX_ITERATIONS, DEFAULT_TOLERANCE, FlowSetupError, solveFlow, type FlowDomain } from '../solver/index.ts';
+import { PartsError, breathingSummary, partsNotes, sectionForSolver } from '../parts/index.ts';
 import { readFlow, readingSummary } from '../solver/reading/index.ts';
 import { EXIT_OK, type CliIO, type Command } from './command.ts';
 import { UserError } from './errors.ts';
@@ -42,7 +43,9 @@ function solveVariant(options: SolveArgs, io: CliIO): SolvedVariant {
   const summary = readingSummary(readFlow(domain, result, { units: document.units }));
   // Converged unless the cap came first with the residual still above the tolerance.
   const converged = result.iterations < DEFAULT_MAX_ITERATIONS || result.residual <= tolerance;
-  return { title: document.title, variant: variant.name, units: document.units, domain, result, summary, converged };
+  const breathing = breathingSummary(variant, document.units);
+  const notes = variant.parts ? partsNotes(variant.parts, document.units).map((n) => n.message) : [];
+  return { title: document.title, variant: variant.name, units: document.units, domain, result, summary, converged, breathing, notes };
 }
 
 function loadFile(path: string): PortDocument {
@@ -63,11 +66,12 @@ function chooseVariant(document: PortDocument, options: SolveArgs): Variant {
 }
 
 function toDomain(variant: Variant, document: PortDocument, where: string): FlowDomain {
-  const section = variant.section;
   try {
+    // Regenerate the parts: a hand-edited file's stored geometry may no longer match its numbers.
+    const section = sectionForSolver(variant);
     return sectionToDomain(section, defaultTolerance(section), document.units);
   } catch (error) {
-    if (!(error instanceof GeometryError)) throw error;
+    if (!(error instanceof GeometryError) && !(error instanceof PartsError)) throw error;
     throw new UserError(`${where}: ${error.message}`);
   }
 }

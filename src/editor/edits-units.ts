@@ -7,8 +7,9 @@ export const setUnitsArgs = z.object({ units: z.enum(['mm', 'inch']) }).strict()
 const MM_PER_INCH = 25.4;
 
 /**
- * Every number in the variants is a length except angles and percentages, whose keys end in "Deg" or "Pct"
- * by the format's naming rule; so one walk converts outlines, fillets, islands and parts alike.
+ * Every number in the variants is a length except angles and percentages (keys ending in "Deg" or "Pct") and
+ * areas (keys ending in "Area", scaled by the square), by the format's naming rule; so one walk converts outlines,
+ * fillets, islands and parts alike.
  */
 export function setUnits(doc: PortDocument, args: { readonly units: Units }): PortDocument {
   if (args.units === doc.units) return doc;
@@ -17,7 +18,7 @@ export function setUnits(doc: PortDocument, args: { readonly units: Units }): Po
 }
 
 function scaleLengths(value: unknown, factor: number, key: string): unknown {
-  if (typeof value === 'number') return /(Deg|Pct)$/.test(key) ? value : value * factor;
+  if (typeof value === 'number') return /(Deg|Pct)$/.test(key) ? value : /Area$/.test(key) ? value * factor * factor : value * factor;
   if (Array.isArray(value)) return value.map((v) => scaleLengths(v, factor, key));
   if (value !== null && typeof value === 'object') {
     return Object.fromEntries(Object.entries(value).map(([k, v]) => [k, scaleLengths(v, factor, k)]));

@@ -31,7 +31,7 @@ export class ColourBar {
     s.pointerEvents = 'none';
     s.borderRadius = '6px';
     parent.appendChild(this.canvas);
-    const ctx = this.canvas.getContext('2d');
+    const ctx = this.canvas.getContext('2d', { willReadFrequently: true });
     if (!ctx) throw new Error('This browser cannot draw 2D canvas text.');
     this.ctx = ctx;
   }
@@ -63,7 +63,7 @@ export class ColourBar {
     this.drawTicks(range, x + COLOUR_BAR.barWidth, top, bottom);
     if (clipped) {
       ctx.textAlign = 'left';
-      haloText(ctx, `\u25B2 peak ${formatLevel(peak)}`, 8, height - 12, LABEL_TEXT, SMALL_FONT);
+      haloText(ctx, `\u25B2 highest cell ${formatLevel(peak)}`, 8, height - 12, LABEL_TEXT, SMALL_FONT);
     }
   }
 

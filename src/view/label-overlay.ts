@@ -33,7 +33,7 @@ export class LabelOverlay {
     s.left = s.top = '0';
     s.pointerEvents = 'none';
     parent.appendChild(this.canvas);
-    const ctx = this.canvas.getContext('2d');
+    const ctx = this.canvas.getContext('2d', { willReadFrequently: true });
     if (!ctx) throw new Error('This browser cannot draw 2D canvas text.');
     this.ctx = ctx;
   }

@@ -27,7 +27,7 @@ export function drawPlot(canvas: HTMLCanvasElement, spec: PlotSpec): void {
   const height = canvas.clientHeight || 160;
   canvas.width = Math.round(width * ratio);
   canvas.height = Math.round(height * ratio);
-  const g = canvas.getContext('2d');
+  const g = canvas.getContext('2d', { willReadFrequently: true });
   if (!g) return;
   g.setTransform(ratio, 0, 0, ratio, 0, 0);
   g.clearRect(0, 0, width, height);

@@ -21,6 +21,18 @@ describe('setUnits', () => {
     for (let k = 0; k < v0.length; k++) expect(b[k].at[1]).toBeCloseTo(v0[k].at[1], 10);
   });
 
+  it('scales parts: lengths by 1/25.4, areas by its square, angles and percentages not at all', () => {
+    const parts = doc.variants[0].parts;
+    expect(parts?.valve).toBeDefined();
+    const withArea = applyEdit(doc, 'setPart', { part: 'port', values: { tightestArea: 1290.32 } });
+    const inch = applyEdit(withArea, 'setUnits', { units: 'inch' });
+    const p = inch.variants[0].parts!;
+    expect(p.valve!.diameter).toBeCloseTo(parts!.valve!.diameter / 25.4, 12);
+    expect(p.valve!.seatAngleDeg).toBe(parts!.valve!.seatAngleDeg);
+    expect(p.seat!.throatPct).toBe(parts!.seat!.throatPct);
+    expect(p.port!.tightestArea).toBeCloseTo(2, 9); // 1290.32 mm^2 = 2 in^2 exactly
+  });
+
   it('keeps the same document when the units do not change', () => {
     expect(applyEdit(doc, 'setUnits', { units: doc.units })).toBe(doc);
   });
