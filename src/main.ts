@@ -8,6 +8,8 @@ import { flagShapes } from './app/flag-shapes.ts';
 import { CELLS_BY_DETAIL, DRAG_CELLS } from './app/grid-detail.ts';
 import { fillHelp } from './app/help-overlay.ts';
 import { LiveSolve } from './app/live-solve.ts';
+import { showBreathing } from './app/breathing-panel.ts';
+import { PartsPanel } from './app/parts-panel.ts';
 import { PlotsPanel } from './app/plots-panel.ts';
 import { ReadingsPanel } from './app/readings-panel.ts';
 import { fluidClip, wallLines } from './app/section-shapes.ts';
@@ -58,6 +60,7 @@ const live = new LiveSolve(pool.live, {
     if (kind === 'full') {
       readings.show(reply, store.doc.units, ms);
       if (reply.reading) plots.show(reply.reading, store.doc.units);
+      showBreathing(byId('breathing'), store.doc, reply.reading?.tightest?.width ?? null);
       readings.clearStale();
       status.clearErrors();
     }
@@ -120,6 +123,8 @@ function showDocument(doc: PortDocument): void {
 const autosave = autosaver();
 store.subscribe((doc, cause) => {
   showDocument(doc);
+  partsPanel.update(doc);
+  showBreathing(byId('breathing'), doc, lastReply?.reading?.tightest?.width ?? null);
   autosave(doc);
   solve(doc, cause);
   if (cause === 'open') {
@@ -170,6 +175,15 @@ function applySettings(group: SettingsGroup): void {
   }
 }
 const gui = buildSettingsPanel(byId('settings-host'), settings, applySettings);
+const partsPanel = new PartsPanel(gui, (part, values) => {
+  try {
+    store.edit('setPart', { part, values });
+  } catch (error) {
+    status.show(error instanceof Error ? error.message : String(error), 'error');
+    partsPanel.update(store.doc);
+  }
+});
+partsPanel.update(store.doc);
 
 fillHelp(helpOverlay);
 helpOverlay.addEventListener('click', () => (helpOverlay.hidden = true));
@@ -183,6 +197,7 @@ variantSelect.addEventListener('change', () => {
 acceptDrops(document.body, fileHandlers);
 
 showDocument(store.doc);
+showBreathing(byId('breathing'), store.doc, null);
 view.fitToView(sectionBounds(activeSection(store.doc)));
 solve(store.doc, 'open');
 if (restored) status.show('Restored the work from your last visit. Open a sample or a file to start afresh.');

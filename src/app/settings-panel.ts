@@ -17,6 +17,7 @@ export function buildSettingsPanel(host: HTMLElement, settings: AppSettings, onC
   draw.add(settings, 'colourMin', 0, 5, 0.05).name('fixed from').onFinishChange(() => onChange('draw'));
   draw.add(settings, 'colourMax', 0.1, 10, 0.05).name('fixed to').onFinishChange(() => onChange('draw'));
   draw.add(settings, 'contourLevels').name('contour levels').onFinishChange(() => onChange('draw'));
+  draw.close();
 
   const layers = gui.addFolder('Layers');
   layers.add(settings.layers, 'field').name('speed field').onChange(() => onChange('draw'));

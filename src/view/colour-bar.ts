@@ -63,7 +63,7 @@ export class ColourBar {
     this.drawTicks(range, x + COLOUR_BAR.barWidth, top, bottom);
     if (clipped) {
       ctx.textAlign = 'left';
-      haloText(ctx, `\u25B2 highest cell ${formatLevel(peak)}`, 8, height - 12, LABEL_TEXT, SMALL_FONT);
+      haloText(ctx, `\u25B2 max ${formatLevel(peak)}`, 8, height - 12, LABEL_TEXT, SMALL_FONT);
     }
   }
 
