@@ -54,6 +54,7 @@ const live = new LiveSolve(pool.live, {
   onStart: (kind, cells) => showIndicator('busy', kind === 'drag' ? 'live preview…' : `solving ${(cells / 1000).toFixed(0)}k cells…`),
   onField: (reply, kind, ms) => {
     lastReply = reply;
+    if (kind === 'full') view.setContourLevels(parseLevels(settings.contourLevels));
     drawField(reply);
     view.renderNow();
     timings.push({ kind, ms: performance.now() - editTime, cells: reply.nx * reply.ny });
@@ -73,6 +74,12 @@ const live = new LiveSolve(pool.live, {
     readings.showStale('This reading belongs to the last shape that solved.');
   },
 });
+
+function clearOverlays(): void {
+  view.setContourLevels([]);
+  view.setStreamlines([]);
+  view.setFlags({ hatched: [], lines: [], markers: [] });
+}
 
 function showIndicator(state: 'busy' | 'idle' | 'error', text: string): void {
   indicator.dataset.state = state;
@@ -108,6 +115,8 @@ function solve(doc: PortDocument, cause: ChangeCause): void {
   editTime = performance.now();
   const domain = currentDomain(doc);
   if (!domain) return;
+  // While dragging, draw the field alone: contours, streamlines and flags of the last full solve no longer fit.
+  if (cause === 'drag') clearOverlays();
   view.setWalls(wallLines(domain));
   view.setClip(fluidClip(domain));
   const reading = { units: doc.units, slowFraction: settings.slowFraction, inletMeanSpeedMs: settings.inletSpeedMs };
