@@ -199,11 +199,25 @@ helpOverlay.addEventListener('click', () => (helpOverlay.hidden = true));
 byId('help-button').addEventListener('click', () => runCommand('toggleHelp'));
 byId('open-button').addEventListener('click', () => runCommand('open'));
 byId('save-button').addEventListener('click', () => runCommand('save'));
-variantSelect.addEventListener('change', () => {
-  store.edit('setActiveVariant', { name: variantSelect.value });
-  editor.reset();
-});
+variantSelect.addEventListener('change', () => variantEdit('setActiveVariant', { name: variantSelect.value }));
 acceptDrops(document.body, fileHandlers);
+byId('copy-variant').addEventListener('click', () => variantEdit('addVariant', {}));
+byId('rename-variant').addEventListener('click', () => {
+  const to = prompt('New name for this variant', store.doc.activeVariant);
+  if (to !== null) variantEdit('renameVariant', { from: store.doc.activeVariant, to: to.trim() });
+});
+byId('delete-variant').addEventListener('click', () => {
+  if (confirm(`Delete the variant "${store.doc.activeVariant}"?`)) variantEdit('deleteVariant', { name: store.doc.activeVariant });
+});
+
+function variantEdit(name: string, args: unknown): void {
+  try {
+    store.edit(name, args);
+    editor.reset();
+  } catch (error) {
+    status.show(error instanceof Error ? error.message : String(error), 'error');
+  }
+}
 
 showDocument(store.doc);
 showBreathing(byId('breathing'), store.doc, null);
