@@ -1,0 +1,60 @@
+/** The bench panel's engine results: piston and port speed, inlet Mach index, the rule-of-thumb power estimate. */
+
+import {
+  estimatePower, formatQuantity, inletMachIndex, MACH_INDEX_KNEE, meanPistonSpeed, meanPortSpeed, speedOfSound,
+} from '../breathing/index.ts';
+import { makeRow, type OutputRow, type RowContext } from './bench-panel-rows.ts';
+
+/** Where the port area came from, said under the port speed. */
+function portAreaNote(ctx: RowContext, areaM2: number): string {
+  const { state } = ctx;
+  const shown = formatQuantity('area', state.units.length === 'mm' ? 'mm2' : 'in2', areaM2);
+  if (!state.follows.portArea || !state.appPortArea) return `through ${shown} as typed`;
+  return `through ${shown} from the section${state.appPortArea.source ? ` (${state.appPortArea.source})` : ''}`;
+}
+
+export function engineRows(ctx: RowContext): OutputRow[] {
+  const speed = ctx.state.units.speed;
+  return [
+    makeRow(ctx, { key: 'piston-speed', group: 'engine', label: 'Mean piston speed' }, ['stroke', 'rpm'], (v) => {
+      const sp = meanPistonSpeed(v.stroke, v.rpm);
+      return { valueSI: sp, text: formatQuantity('speed', speed, sp), note: '2 × stroke × rev/s' };
+    }),
+    makeRow(ctx, { key: 'port-speed', group: 'engine', label: 'Mean port speed' }, ['bore', 'stroke', 'rpm', 'portArea'], (v) => {
+      const vp = meanPortSpeed(v.bore, v.stroke, v.rpm, v.portArea);
+      return { valueSI: vp, text: formatQuantity('speed', speed, vp), note: portAreaNote(ctx, v.portArea) };
+    }),
+    machRow(ctx),
+    powerRow(ctx),
+  ];
+}
+
+function machRow(ctx: RowContext): OutputRow {
+  const head = { key: 'mach-index', group: 'engine', label: 'Inlet Mach index Z' } as const;
+  const needs = ['bore', 'valveDiameter', 'stroke', 'rpm', 'flowCoefficient', 'temperature'] as const;
+  return makeRow(ctx, head, needs, (v) => {
+    const z = inletMachIndex({
+      boreM: v.bore,
+      inletValveDiameterM: v.valveDiameter,
+      meanPistonSpeedMps: meanPistonSpeed(v.stroke, v.rpm),
+      meanFlowCoefficient: v.flowCoefficient,
+      speedOfSoundMps: speedOfSound(v.temperature),
+    });
+    const over = z > MACH_INDEX_KNEE;
+    const knee = `volumetric efficiency falls quickly above about ${MACH_INDEX_KNEE} (Taylor; knee recalled from memory, not re-read)`;
+    return { valueSI: z, text: z.toFixed(3), note: over ? `Past the knee: ${knee}` : `Below the knee: ${knee}`, flag: over };
+  });
+}
+
+function powerRow(ctx: RowContext): OutputRow {
+  const head = { key: 'power', group: 'engine', label: 'Power estimate' } as const;
+  return makeRow(ctx, head, ['flow', 'testPressure', 'cylinders', 'hpPerCfm'], (v) => {
+    const p = estimatePower(v.flow, v.testPressure, v.cylinders, v.hpPerCfm);
+    const perCylinder = `${p.hpPerCylinder.toFixed(1)} hp a cylinder = ${p.hpPerCfm} × ${p.cfmAt28.toFixed(1)} CFM at 28 in H2O`;
+    return {
+      valueSI: p.powerW,
+      text: `${p.horsepower.toFixed(0)} hp (${(p.powerW / 1000).toFixed(0)} kW)`,
+      note: `${perCylinder}. ${p.label}.`,
+    };
+  });
+}
