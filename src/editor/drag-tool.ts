@@ -7,7 +7,7 @@ import type { Point } from '../document/types.ts';
 import type { EditRequest } from './edits.ts';
 import { dragEdit, type DragEdit, type DragGrip } from './drag-edit.ts';
 import { hitTest, type Hit } from './hit-test.ts';
-import { islandPart, type HandleRef } from './refs.ts';
+import { islandPart, isPartHandle, type HandleRef } from './refs.ts';
 import { editForSelection } from './selection-edits.ts';
 import { findShortcut, type CommandName, type KeyPress } from './shortcuts.ts';
 import type { ToolContext } from './tool-context.ts';
@@ -73,7 +73,7 @@ export function stepTool(state: ToolState, event: ToolEvent, ctx: ToolContext): 
 }
 
 function pointerDown(selection: HandleRef | null, event: Extract<ToolEvent, { type: 'pointer-down' }>, ctx: ToolContext): ToolStep {
-  const hit = hitTest(ctx.section, event.at, ctx.tolerance);
+  const hit = hitTest(ctx.section, event.at, ctx.tolerance, { parts: ctx.parts });
   const insert = event.insert ?? false;
   const state: ToolState = { mode: 'pointing', selection, hit, downScreen: event.screen, downAt: event.at, insert };
   // An insert-click on an edge selects the new corner on release; anything else hit is selected at once.
@@ -97,9 +97,16 @@ function pointerMove(state: ToolState, at: Point, screen: Point, ctx: ToolContex
   return { state: { mode: 'dragging', selection: state.selection, grip, last: step.edit }, actions: [dragAction('drag-start', step)] };
 }
 
-/** What a drag of `hit` holds: the handle, where on it it was grabbed, and the points it may line up with. */
+/**
+ * What a drag of `hit` holds: the handle, where on it it was grabbed, and the points it may line up with; for the
+ * valve's handles, the valve as grabbed and where the press was.
+ */
 function gripOf(hit: Hit | null, downAt: Point, ctx: ToolContext): DragGrip | null {
   if (hit === null || hit.ref.kind === 'edge') return null;
+  if (isPartHandle(hit.ref)) {
+    const valve = ctx.parts?.valve;
+    return valve === undefined ? null : { ref: hit.ref, valve, pressedAt: downAt };
+  }
   const offset: Point = [hit.at[0] - downAt[0], hit.at[1] - downAt[1]];
   if (hit.ref.kind === 'fillet') return { ref: hit.ref, offset, neighbours: [] };
   return { ref: hit.ref, offset, neighbours: snapNeighbours(ctx.section, hit.ref) };

@@ -1,8 +1,10 @@
 /** Every handle of a section with its position, for drawing them and for picking. */
 
-import type { Outline, Point, Section } from '../document/types.ts';
+import type { Outline, Parts, Point, Section } from '../document/types.ts';
 import { filletHandlePosition } from './fillet-handle.ts';
-import { islandPart, type HandleKind, type HandleRef } from './refs.ts';
+import { generatedGeometry, isGenerated } from './generated.ts';
+import { partHandlePosition, partHandles } from './part-handles.ts';
+import { islandPart, isPartHandle, type HandleKind, type HandleRef } from './refs.ts';
 import { edgeMiddle } from './handle-edge.ts';
 
 /** A handle and where it is, document units. */
@@ -11,22 +13,33 @@ export interface Handle {
   readonly at: Point;
 }
 
-/** Order of precedence when two handles sit at one place: a corner wins over its zero-radius fillet handle. */
-export const HANDLE_ORDER: readonly HandleKind[] = ['vertex', 'through', 'via', 'fillet'];
+/**
+ * Order of precedence when two handles sit at one place: a corner wins over its zero-radius fillet handle, and any
+ * handle of the outlines over the valve's lift and axis handles (which sit in open space, clear of the outlines).
+ */
+export const HANDLE_ORDER: readonly HandleKind[] = ['vertex', 'through', 'via', 'fillet', 'lift', 'valve-axis'];
 
 /**
  * Point handles of the section (the outline first, then each island), ordered by HANDLE_ORDER:
  * corners, arc through points, curve via points, fillet-radius handles (one per corner that is not straight,
- * sharp corners included, sitting on the corner). Edges are not listed; see hitTest.
+ * sharp corners included, sitting on the corner), then the valve's lift and axis handles. Edges are not listed;
+ * see hitTest.
+ *
+ * With `parts` (the variant's, e.g. `activeVariant(doc).parts`), what they generate gets no handles: the valve head
+ * island with a valve, and the valve pocket between the anchor corners with a seat and bore (the anchors themselves
+ * keep theirs); and a valve adds the lift and valve-axis handles. Without `parts` every corner is listed, as before.
  */
-export function listHandles(section: Section): Handle[] {
+export function listHandles(section: Section, parts?: Parts): Handle[] {
+  const generated = generatedGeometry(section, parts);
   const outlines = [{ outline: section.outline, island: undefined as number | undefined },
-    ...section.islands.map((isl, k) => ({ outline: isl.outline, island: k as number | undefined }))];
+    ...section.islands.map((isl, k) => ({ outline: isl.outline, island: k as number | undefined }))]
+    .filter(({ island }) => island === undefined || !generated.islands.has(island));
   const handles: Handle[] = [];
   for (const kind of HANDLE_ORDER) {
     for (const { outline, island } of outlines) handles.push(...handlesOfKind(section, outline, island, kind));
   }
-  return handles;
+  handles.push(...partHandles(parts));
+  return handles.filter((h) => !isGenerated(generated, h.ref));
 }
 
 function handlesOfKind(section: Section, outline: Outline, island: number | undefined, kind: HandleKind): Handle[] {
@@ -48,9 +61,10 @@ function handlesOfKind(section: Section, outline: Outline, island: number | unde
 
 /**
  * Where handle `ref` is now, or null when it no longer exists (e.g. a selection left over from before an edit).
- * An edge's position is the point halfway along it.
+ * An edge's position is the point halfway along it. The lift and valve-axis handles need `parts` (null without a valve).
  */
-export function handlePosition(section: Section, ref: HandleRef): Point | null {
+export function handlePosition(section: Section, ref: HandleRef, parts?: Parts): Point | null {
+  if (isPartHandle(ref)) return partHandlePosition(parts, ref);
   const outline = ref.island === undefined ? section.outline : section.islands[ref.island]?.outline;
   if (outline === undefined) return null;
   switch (ref.kind) {

@@ -3,8 +3,8 @@
 export { applyEdit, EDITS, EDIT_LIST, isEditName } from './edits.ts';
 export type { EditArgs, EditName, EditRequest, EditShortcut, EditSpec } from './edits.ts';
 export { EditError } from './errors.ts';
-export type { HandleKind, HandleRef, PointRef } from './refs.ts';
-export { sameHandle } from './refs.ts';
+export type { FilletRef, HandleKind, HandleRef, PartHandleRef, PointRef } from './refs.ts';
+export { isPartHandle, sameHandle } from './refs.ts';
 export { hitTest, filletHandlePosition, radiusFromHandleDrag } from './hit-test.ts';
 export type { Hit, HitOptions } from './hit-test.ts';
 export { handlePosition, listHandles, HANDLE_ORDER } from './handles.ts';
@@ -14,11 +14,17 @@ export type { CornerShape } from './fillet-handle.ts';
 export { DEFAULT_GRID_STEP, roundToStep, snapNeighbours, snapPoint } from './snap.ts';
 export type { AxisSnap, SnapResult, SnapSettings } from './snap.ts';
 export { DRAG_THRESHOLD_PX, IDLE, stepTool } from './drag-tool.ts';
+export type { DragGrip, OutlineGrip, PartGrip } from './drag-edit.ts';
 export type { DragAction, ToolAction, ToolContext, ToolEvent, ToolState, ToolStep } from './drag-tool.ts';
 export { chordOf, findShortcut, INSERT_MODIFIER, POINTER_HINTS, SHORTCUTS } from './shortcuts.ts';
 export type { CommandName, KeyPress, Shortcut, ShortcutRun } from './shortcuts.ts';
 export { editForSelection } from './selection-edits.ts';
 export type { SelectionEdit } from './selection-edits.ts';
-export { activeSection } from './section-access.ts';
+export { activeSection, activeVariant } from './section-access.ts';
+export { generatedGeometry, isGenerated } from './generated.ts';
+export type { GeneratedGeometry } from './generated.ts';
+export {
+  axisFromDrag, axisHandlePosition, liftFromDrag, liftHandlePosition, MAX_LIFT_SHARE, partHandlePosition, partHandles,
+} from './part-handles.ts';
 export { NEW_ARC_BULGE, WALL_NAME_MAX } from './edits-edges.ts';
 export { VARIANT_NAME_MAX, copyName } from './edits-variants.ts';

@@ -1,4 +1,4 @@
-/** Names for the things on a section a porter can grab: points, fillet handles and edges. */
+/** Names for the things on a section a porter can grab: points, fillet handles, edges and the valve's own handles. */
 
 /**
  * A draggable point of the active section. `island` absent means the section outline,
@@ -12,17 +12,36 @@ export type PointRef =
   | { readonly kind: 'through'; readonly edge: number; readonly island?: number }
   | { readonly kind: 'via'; readonly edge: number; readonly via: number; readonly island?: number };
 
-/** Anything hit testing can return: a point, the fillet-radius handle of a corner, or an edge (to insert on). */
+/** The fillet-radius handle of a corner. */
+export type FilletRef = { readonly kind: 'fillet'; readonly vertex: number; readonly island?: number };
+
+/**
+ * Handles of the variant's parametric valve (see src/parts), not of any outline:
+ * - lift: the centre of the valve face; dragging it along the valve axis sets the lift
+ * - valve-axis: the centre of the seat's gauge line; dragging it moves the valve, seat and test bore together
+ */
+export type PartHandleRef = { readonly kind: 'lift' } | { readonly kind: 'valve-axis' };
+
+/**
+ * Anything hit testing can return: a point, the fillet-radius handle of a corner, an edge (to insert on),
+ * or one of the valve's handles.
+ */
 export type HandleRef =
   | PointRef
-  | { readonly kind: 'fillet'; readonly vertex: number; readonly island?: number }
-  | { readonly kind: 'edge'; readonly edge: number; readonly island?: number };
+  | FilletRef
+  | { readonly kind: 'edge'; readonly edge: number; readonly island?: number }
+  | PartHandleRef;
 
 export type HandleKind = HandleRef['kind'];
 
 /** The `island` field of a reference as an object to spread: `{}` for the section outline. */
 export function islandPart(island: number | undefined): { island?: number } {
   return island === undefined ? {} : { island };
+}
+
+/** Whether `ref` is one of the valve's handles rather than a part of an outline. */
+export function isPartHandle(ref: HandleRef): ref is PartHandleRef {
+  return ref.kind === 'lift' || ref.kind === 'valve-axis';
 }
 
 /** Whether two references name the same handle. */

@@ -1,6 +1,6 @@
 /** Reading and replacing the active variant's section and its outlines, sharing every untouched part. */
 
-import type { Outline, PortDocument, Section } from '../document/types.ts';
+import type { Outline, PortDocument, Section, Variant } from '../document/types.ts';
 import { EditError } from './errors.ts';
 
 /** Index of the active variant; a document whose active name matches no variant cannot be edited. */
@@ -10,8 +10,13 @@ export function activeVariantIndex(doc: PortDocument, edit: string): number {
   return index;
 }
 
+/** The active variant (its section and its parts); throws EditError when the active name matches none. */
+export function activeVariant(doc: PortDocument, edit = ''): Variant {
+  return doc.variants[activeVariantIndex(doc, edit)];
+}
+
 export function activeSection(doc: PortDocument, edit = ''): Section {
-  return doc.variants[activeVariantIndex(doc, edit)].section;
+  return activeVariant(doc, edit).section;
 }
 
 /** The document with the active variant's section replaced; the same document when nothing changed. */

@@ -23,7 +23,7 @@ export function editForSelection(run: Extract<ShortcutRun, { edit: unknown }>, s
     const args = { vertex: selection.vertex, ...islandPart(selection.island), ...preset };
     return { kind: 'edit', edit: { name: run.edit, args } as EditRequest, selectionAfter: null };
   }
-  if (selection === null || selection.kind === 'vertex' || selection.kind === 'fillet') {
+  if (selection === null || (selection.kind !== 'edge' && selection.kind !== 'through' && selection.kind !== 'via')) {
     return { kind: 'hint', message: 'Select an edge first (click on it).' };
   }
   const edge: HandleRef = { kind: 'edge', edge: selection.edge, ...islandPart(selection.island) };
