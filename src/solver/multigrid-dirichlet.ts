@@ -5,6 +5,7 @@
  * Dirichlet coupling the prolonged value is instead one Jacobi step of the homogeneous equation,
  * e_f = (sum over open faces c_fn * bilinear(n)) / diag_f, which is exact for a correction that varies
  * linearly to zero at the boundary. Restriction applies the transpose, so the V-cycle stays symmetric.
+ * Both rows (bilinear and operator-dependent) are built once per hierarchy, so a V-cycle only sums them.
  */
 import type { Stencil } from './assemble.ts';
 import { bilinearWeights, interpolationStrength } from './multigrid-bilinear.ts';
@@ -17,54 +18,69 @@ export interface TransferPair {
   readonly rowN: Int32Array;
   /** Interpolation strength of each coarse cell (interpolationStrength). */
   readonly strength: Float32Array;
-  /** Scratch for bilinearWeights: up to 4 coarse cells and their weights. */
-  readonly cells: Int32Array;
-  readonly weights: Float64Array;
+  /** Per Dirichlet entry m of the fine level: its bilinear row, 4 coarse cells and weights at 4m..4m+3. */
+  readonly selfCells: Int32Array;
+  readonly selfWeights: Float64Array;
+  /** Per Dirichlet entry m: its operator-dependent row, entries opStart[m] .. opStart[m + 1] - 1. */
+  readonly opStart: Int32Array;
+  readonly opCells: Int32Array;
+  readonly opWeights: Float64Array;
 }
 
 export function transferPair(fine: Stencil, coarse: Stencil, rowN: Int32Array): TransferPair {
-  return { fine, coarse, rowN, strength: interpolationStrength(coarse), cells: new Int32Array(4), weights: new Float64Array(4) };
+  const strength = interpolationStrength(coarse);
+  const count = fine.dirichlet.cells.length;
+  const selfCells = new Int32Array(4 * count);
+  const selfWeights = new Float64Array(4 * count);
+  const opStart = new Int32Array(count + 1);
+  const opCells: number[] = [];
+  const opWeights: number[] = [];
+  const cells = new Int32Array(4);
+  const weights = new Float64Array(4);
+  const { nx } = fine;
+  for (let m = 0; m < count; m++) {
+    const k = fine.dirichlet.cells[m];
+    const i = k % nx;
+    const j = (k - i) / nx;
+    const n = bilinearWeights(coarse, strength, i, j, rowN[j], cells, weights);
+    selfCells.set(cells.subarray(0, n), 4 * m);
+    selfWeights.set(weights.subarray(0, n), 4 * m);
+    for (const [ni, nj, w] of jacobiNeighbours(fine, k, fine.dirichlet.coupling[m])) {
+      const terms = bilinearWeights(coarse, strength, ni, nj, rowN[nj], cells, weights);
+      for (let q = 0; q < terms; q++) {
+        opCells.push(cells[q]);
+        opWeights.push(w * weights[q]);
+      }
+    }
+    opStart[m + 1] = opCells.length;
+  }
+  return {
+    fine, coarse, rowN, strength, selfCells, selfWeights, opStart, opCells: Int32Array.from(opCells), opWeights: Float64Array.from(opWeights),
+  };
 }
 
-/** Bilinear prolongation at fine cell (i, j) from the coarse padded vector (same operator as prolongRow). */
-function bilinearAt(t: TransferPair, i: number, j: number, coarseX: Float64Array): number {
-  const n = bilinearWeights(t.coarse, t.strength, i, j, t.rowN[j], t.cells, t.weights);
-  let value = 0;
-  for (let m = 0; m < n; m++) value += t.weights[m] * coarseX[t.cells[m] + t.coarse.nx];
-  return value;
-}
-
-/** Transpose of bilinearAt: adds amount * weight to each coarse cell fine cell (i, j) draws from. */
-function scatterBilinear(t: TransferPair, i: number, j: number, amount: number, coarseB: Float64Array): void {
-  const n = bilinearWeights(t.coarse, t.strength, i, j, t.rowN[j], t.cells, t.weights);
-  for (let m = 0; m < n; m++) coarseB[t.cells[m]] += t.weights[m] * amount;
-}
-
-/**
- * Calls visit(ni, nj, coef / diag) for each open face of Dirichlet cell k (diag = face sum + coupling):
- * the weights of the Jacobi step in the module comment.
- */
-function forNeighbours(s: Stencil, k: number, coupling: number, visit: (ni: number, nj: number, w: number) => void): void {
+/** The open faces of Dirichlet cell k as [i, j, coef / diag] of the cell across (diag = face sum + coupling). */
+function jacobiNeighbours(s: Stencil, k: number, coupling: number): [number, number, number][] {
   const { nx, faceX, faceY } = s;
   const i = k % nx;
   const j = (k - i) / nx;
   const fx = k + j;
   const d = faceX[fx] + faceX[fx + 1] + faceY[k] + faceY[k + nx] + coupling;
-  if (faceX[fx] !== 0) visit(i - 1, j, faceX[fx] / d);
-  if (faceX[fx + 1] !== 0) visit(i + 1, j, faceX[fx + 1] / d);
-  if (faceY[k] !== 0) visit(i, j - 1, faceY[k] / d);
-  if (faceY[k + nx] !== 0) visit(i, j + 1, faceY[k + nx] / d);
+  const out: [number, number, number][] = [];
+  if (faceX[fx] !== 0) out.push([i - 1, j, faceX[fx] / d]);
+  if (faceX[fx + 1] !== 0) out.push([i + 1, j, faceX[fx + 1] / d]);
+  if (faceY[k] !== 0) out.push([i, j - 1, faceY[k] / d]);
+  if (faceY[k + nx] !== 0) out.push([i, j + 1, faceY[k + nx] / d]);
+  return out;
 }
 
 /** After prolongRow: replaces the bilinear value at Dirichlet entry m of the fine level by the operator-dependent one. */
 export function correctProlongCell(t: TransferPair, x: Float64Array, coarseX: Float64Array, m: number): void {
-  const nx = t.fine.nx;
-  const k = t.fine.dirichlet.cells[m];
-  const i = k % nx;
-  const j = (k - i) / nx;
+  const ncx = t.coarse.nx;
   let value = 0;
-  forNeighbours(t.fine, k, t.fine.dirichlet.coupling[m], (ni, nj, w) => { value += w * bilinearAt(t, ni, nj, coarseX); });
-  x[k + nx] += value - bilinearAt(t, i, j, coarseX);
+  for (let q = t.opStart[m], end = t.opStart[m + 1]; q < end; q++) value += t.opWeights[q] * coarseX[t.opCells[q] + ncx];
+  for (let q = 4 * m; q < 4 * m + 4; q++) value -= t.selfWeights[q] * coarseX[t.selfCells[q] + ncx];
+  x[t.fine.dirichlet.cells[m] + t.fine.nx] += value;
 }
 
 /**
@@ -75,9 +91,7 @@ export function correctProlongCell(t: TransferPair, x: Float64Array, coarseX: Fl
 export function correctRestrictCell(t: TransferPair, x: Float64Array, b: Float64Array, coarseB: Float64Array, m: number): void {
   const { nx, faceX, faceY, dirichlet } = t.fine;
   const k = dirichlet.cells[m];
-  const coupling = dirichlet.coupling[m];
-  const i = k % nx;
-  const j = (k - i) / nx;
+  const j = Math.floor(k / nx);
   const v = k + nx;
   const fx = k + j;
   const w = faceX[fx];
@@ -85,7 +99,7 @@ export function correctRestrictCell(t: TransferPair, x: Float64Array, b: Float64
   const so = faceY[k];
   const no = faceY[k + nx];
   const spread = b[k] - ((w + e + so + no) * x[v] - w * x[v - 1] - e * x[v + 1] - so * x[v - nx] - no * x[v + nx]);
-  const r = spread - coupling * x[v];
-  scatterBilinear(t, i, j, -spread, coarseB);
-  forNeighbours(t.fine, k, coupling, (ni, nj, wn) => scatterBilinear(t, ni, nj, wn * r, coarseB));
+  const r = spread - dirichlet.coupling[m] * x[v];
+  for (let q = 4 * m; q < 4 * m + 4; q++) coarseB[t.selfCells[q]] -= t.selfWeights[q] * spread;
+  for (let q = t.opStart[m], end = t.opStart[m + 1]; q < end; q++) coarseB[t.opCells[q]] += t.opWeights[q] * r;
 }

@@ -1,0 +1,48 @@
+/** The solve orchestrator: supersession, the iteration cap, the result's shape. */
+import { describe, expect, it } from 'vitest';
+import { SolveSupersededError, solveFlow, solveOnGrid } from '../../src/solver/solve.ts';
+import { channelGrid } from './hand-grids.ts';
+import { bend } from './rasterise-shapes.ts';
+
+describe('solveFlow', () => {
+  it('stops with a typed "superseded" error as soon as shouldStop says so', () => {
+    let calls = 0;
+    const attempt = () => solveFlow(bend(1, 2, 256), { targetCells: 16_384, shouldStop: () => ++calls >= 3 });
+    expect(attempt).toThrow(SolveSupersededError);
+    try {
+      calls = 0;
+      attempt();
+    } catch (error) {
+      expect((error as SolveSupersededError).code).toBe('superseded');
+      expect((error as SolveSupersededError).iterations).toBe(2);
+    }
+  });
+
+  it('returns within the iteration cap, reporting the residual it reached', () => {
+    const result = solveFlow(bend(1, 2, 256), { targetCells: 16_384, maxIterations: 2, tolerance: 1e-14 });
+    expect(result.iterations).toBe(2);
+    expect(result.residual).toBeGreaterThan(1e-14);
+    expect(result.residual).toBeLessThan(1);
+  });
+
+  it('gives one value per cell, NaN exactly outside the solved cells, and wall samples', () => {
+    const result = solveFlow(bend(1, 2, 256), { targetCells: 4096 });
+    const { nx, ny, cellFraction } = result.grid;
+    expect(result.phi.length).toBe(nx * ny);
+    expect(result.speedRatio.length).toBe(nx * ny);
+    for (let k = 0; k < nx * ny; k++) {
+      if (cellFraction[k] === 0) expect(result.phi[k]).toBeNaN();
+      if (Number.isFinite(result.phi[k])) {
+        expect(result.phi[k]).toBeGreaterThanOrEqual(0);
+        expect(result.phi[k]).toBeLessThanOrEqual(1);
+      }
+    }
+    expect(result.walls.map((w) => w.name).sort()).toEqual(['long side', 'short side']);
+  });
+});
+
+describe('solveOnGrid', () => {
+  it('refuses a non-positive inlet length (a caller bug, not a user error)', () => {
+    expect(() => solveOnGrid(channelGrid(4, 2), { inletLength: 0 })).toThrow(RangeError);
+  });
+});
