@@ -17,6 +17,8 @@ import { sor, sorFactor } from './sor.ts';
 export interface SizeArgs {
   readonly cells: number;
   readonly runs: number;
+  /** 'time': timings and SOR; 'memory': one solve after a full collection, for its peak memory alone. */
+  readonly mode: 'time' | 'memory';
   /** 'scan' the SOR factor, use a given span count, or 'skip' SOR. */
   readonly sor: 'scan' | 'skip' | number;
 }
@@ -29,9 +31,11 @@ export interface SizeReport {
   readonly residual: number;
   readonly medianMs: number;
   readonly medianCpuMs: number;
-  /** Peak resident set of this process over the full solves, MB. */
+  /** Peak resident set of a process that ran one solve (after a 16k-cell warm-up), MB. */
   readonly peakRssMb: number;
-  /** Typed-array memory held with the last result alive, MB. */
+  /** Resident set of that process before its solve (runtime, loader, compiled code), MB. */
+  readonly baselineRssMb: number;
+  /** Typed-array memory the result holds (after a full collection), MB. */
   readonly arrayBuffersMb: number;
   readonly phases: { rasterise: number; connect: number; solve: number; setup: number; pcg: number; walls: number };
   /** Median ms of the linear solve alone (multigrid set-up + PCG from zero), the part SOR replaces. */
@@ -47,7 +51,15 @@ const collectGarbage = runInNewContext('gc') as () => void;
 const SOR_LIMIT_MS = 60_000;
 const MB = 1024 * 1024;
 
-export function runSize(args: SizeArgs): SizeReport {
+export type TimeReport = Omit<SizeReport, 'peakRssMb' | 'baselineRssMb' | 'arrayBuffersMb'>;
+export type MemoryReport = Pick<SizeReport, 'peakRssMb' | 'baselineRssMb' | 'arrayBuffersMb'>;
+
+export function runSize(args: SizeArgs): TimeReport | MemoryReport {
+  return args.mode === 'memory' ? measureMemory(args.cells) : measureTime(args);
+}
+
+/** Timings as the app sees them: repeated solves in one warm process, the collector left to itself. */
+function measureTime(args: SizeArgs): TimeReport {
   const domain = benchDomain();
   solveFlow(domain, { targetCells: 16_384 }); // compile the hot loops before timing
   const wall: number[] = [];
@@ -55,7 +67,6 @@ export function runSize(args: SizeArgs): SizeReport {
   let last: SolveResult | null = null;
   for (let run = 0; run < args.runs; run++) {
     last = null;
-    collectGarbage();
     const t0 = performance.now();
     const c0 = process.cpuUsage();
     last = solveFlow(domain, { targetCells: args.cells, tolerance: TOLERANCE });
@@ -63,17 +74,30 @@ export function runSize(args: SizeArgs): SizeReport {
     wall.push(performance.now() - t0);
     cpu.push((c.user + c.system) / 1000);
   }
-  const peakRssMb = process.resourceUsage().maxRSS / 1024;
-  const arrayBuffersMb = process.memoryUsage().arrayBuffers / MB;
   if (last === null) throw new Error('no benchmark runs');
   const { grid, iterations, residual } = last;
+  last = null;
   const phases = timePhases(args.cells);
   const { stencil, b, bNorm, linearMs } = timeLinear(grid, args.runs);
   const sorReport = args.sor === 'skip' ? null : runSor(stencil, b, bNorm, grid, args.sor);
   return {
     cells: args.cells, nx: grid.nx, ny: grid.ny, iterations, residual, medianMs: median(wall), medianCpuMs: median(cpu),
-    peakRssMb, arrayBuffersMb, phases, linearMs, sor: sorReport,
+    phases, linearMs, sor: sorReport,
   };
+}
+
+/** Peak memory of one solve in a fresh process (warmed up on a small grid, then fully collected). */
+function measureMemory(cells: number): MemoryReport {
+  const domain = benchDomain();
+  solveFlow(domain, { targetCells: 16_384 });
+  collectGarbage();
+  const baselineRssMb = process.memoryUsage().rss / MB;
+  const result = solveFlow(domain, { targetCells: cells, tolerance: TOLERANCE });
+  const peakRssMb = process.resourceUsage().maxRSS / 1024;
+  collectGarbage();
+  const arrayBuffersMb = process.memoryUsage().arrayBuffers / MB;
+  if (!(result.iterations >= 0)) throw new Error('no result');
+  return { peakRssMb, baselineRssMb, arrayBuffersMb };
 }
 
 /** One solve split into its phases, ms. */
@@ -119,7 +143,6 @@ function timeLinear(grid: CutGrid, runs: number): { stencil: Stencil; b: Float64
   const times: number[] = [];
   let last = timeLinearOnce(grid, mask);
   for (let run = 0; run < runs; run++) {
-    collectGarbage();
     last = timeLinearOnce(grid, mask);
     times.push(last.setupMs + last.pcgMs);
   }

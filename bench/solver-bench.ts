@@ -1,14 +1,16 @@
 /**
- * Solver benchmark (npm run bench): the full solve of a realistic port section at 64k to 4M cells, each size in
- * its own process so its peak memory is its own, against plain SOR on the same system. Times are medians of
- * wall-clock time (other work on the machine shows up in them; CPU time is printed beside them).
+ * Solver benchmark (npm run bench): the full solve of a realistic port section at 64k to 4M cells against plain
+ * SOR on the same system. Each size runs in two fresh processes: one for timings (repeated solves in a warm
+ * process, as in the app), one for the peak memory of a single solve. Times are medians of wall-clock time
+ * (other work on the machine shows up in them; CPU time is printed beside them). "runtime MB" is the resident
+ * set before the solve (Node, the TypeScript loader, compiled code), included in "peak MB".
  * Environment: BENCH_SIZES=65536,262144 to pick sizes; BENCH_SOR=0 to skip the SOR baseline.
  */
 import { spawnSync } from 'node:child_process';
 import { loadavg } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { SAMPLE } from './bench-problem.ts';
-import { runSize, type SizeReport } from './bench-size.ts';
+import { runSize, type MemoryReport, type SizeArgs, type SizeReport, type TimeReport } from './bench-size.ts';
 
 const SIZES = [65_536, 262_144, 1_048_576, 4_194_304];
 const RUNS = (cells: number) => (cells > 2_000_000 ? 3 : 5);
@@ -16,7 +18,7 @@ const RUNS = (cells: number) => (cells > 2_000_000 ? 3 : 5);
 const SCAN_UP_TO = 262_144;
 
 if (process.argv[2] === '--child') {
-  const args = JSON.parse(process.argv[3]) as Parameters<typeof runSize>[0];
+  const args = JSON.parse(process.argv[3]) as SizeArgs;
   console.log(JSON.stringify(runSize(args)));
 } else {
   main();
@@ -29,7 +31,10 @@ function main(): void {
   const reports: SizeReport[] = [];
   let spans = 0;
   for (const cells of sizes) {
-    const report = inChild({ cells, runs: RUNS(cells), sor: withSor ? (cells <= SCAN_UP_TO || spans === 0 ? 'scan' : spans) : 'skip' });
+    const sor = withSor ? (cells <= SCAN_UP_TO || spans === 0 ? 'scan' : spans) : 'skip';
+    const timing = inChild({ cells, runs: RUNS(cells), mode: 'time', sor }) as TimeReport;
+    const memory = inChild({ cells, runs: 1, mode: 'memory', sor: 'skip' }) as MemoryReport;
+    const report: SizeReport = { ...timing, ...memory };
     if (report.sor && cells <= SCAN_UP_TO) spans = report.sor.spans;
     reports.push(report);
     console.log(describe(report));
@@ -37,12 +42,12 @@ function main(): void {
   console.log(`\n${table(reports)}\nload average at the end ${loadavg().map((l) => l.toFixed(1)).join(' ')}`);
 }
 
-function inChild(args: Parameters<typeof runSize>[0]): SizeReport {
+function inChild(args: SizeArgs): TimeReport | MemoryReport {
   const script = fileURLToPath(import.meta.url);
   const out = spawnSync(process.execPath, [...process.execArgv, script, '--child', JSON.stringify(args)], { encoding: 'utf8', maxBuffer: 1 << 24 });
   if (out.status !== 0) throw new Error(`benchmark child for ${args.cells} cells failed:\n${out.stderr}`);
   const lines = out.stdout.trim().split('\n');
-  return JSON.parse(lines[lines.length - 1]) as SizeReport;
+  return JSON.parse(lines[lines.length - 1]) as TimeReport | MemoryReport;
 }
 
 function describe(r: SizeReport): string {
@@ -55,10 +60,11 @@ function describe(r: SizeReport): string {
 }
 
 function table(reports: readonly SizeReport[]): string {
-  const head = ['cells', 'grid', 'iter', 'median ms', 'cpu ms', 'ns/cell', 'peak MB', 'buffers MB', 'MG-PCG ms', 'SOR ms', 'SOR residual', 'SOR / MG-PCG'];
+  const head = ['cells', 'grid', 'iter', 'median ms', 'cpu ms', 'ns/cell', 'MG-PCG ms', 'MG-PCG ns/cell', 'peak MB', 'runtime MB', 'result MB', 'SOR ms', 'SOR residual', 'SOR / MG-PCG'];
   const rows = reports.map((r) => [
     r.cells.toLocaleString('en-US'), `${r.nx}x${r.ny}`, String(r.iterations), r.medianMs.toFixed(0), r.medianCpuMs.toFixed(0),
-    ((r.medianMs * 1e6) / (r.nx * r.ny)).toFixed(0), r.peakRssMb.toFixed(0), r.arrayBuffersMb.toFixed(0), r.linearMs.toFixed(0),
+    ((r.medianMs * 1e6) / (r.nx * r.ny)).toFixed(0), r.linearMs.toFixed(0), ((r.linearMs * 1e6) / (r.nx * r.ny)).toFixed(0),
+    r.peakRssMb.toFixed(0), r.baselineRssMb.toFixed(0), r.arrayBuffersMb.toFixed(0),
     r.sor ? `${r.sor.converged ? '' : '>'}${r.sor.ms.toFixed(0)}` : '-', r.sor ? r.sor.residual.toExponential(1) : '-',
     r.sor ? `${r.sor.converged ? '' : '>'}${(r.sor.ms / r.linearMs).toFixed(0)}x` : '-',
   ]);
