@@ -41,8 +41,9 @@ function machRow(ctx: RowContext): OutputRow {
       speedOfSoundMps: speedOfSound(v.temperature),
     });
     const over = z > MACH_INDEX_KNEE;
-    const knee = `volumetric efficiency falls quickly above about ${MACH_INDEX_KNEE} (Taylor; knee recalled from memory, not re-read)`;
-    return { valueSI: z, text: z.toFixed(3), note: over ? `Past the knee: ${knee}` : `Below the knee: ${knee}`, flag: over };
+    const where = over ? 'past the' : 'below the';
+    const note = `${where} ${MACH_INDEX_KNEE} knee, above which volumetric efficiency falls quickly (Taylor; recalled from memory)`;
+    return { valueSI: z, text: z.toFixed(3), note, flag: over };
   });
 }
 
@@ -50,11 +51,8 @@ function powerRow(ctx: RowContext): OutputRow {
   const head = { key: 'power', group: 'engine', label: 'Power estimate' } as const;
   return makeRow(ctx, head, ['flow', 'testPressure', 'cylinders', 'hpPerCfm'], (v) => {
     const p = estimatePower(v.flow, v.testPressure, v.cylinders, v.hpPerCfm);
-    const perCylinder = `${p.hpPerCylinder.toFixed(1)} hp a cylinder = ${p.hpPerCfm} × ${p.cfmAt28.toFixed(1)} CFM at 28 in H2O`;
-    return {
-      valueSI: p.powerW,
-      text: `${p.horsepower.toFixed(0)} hp (${(p.powerW / 1000).toFixed(0)} kW)`,
-      note: `${perCylinder}. ${p.label}.`,
-    };
+    // The label names the rule; the numbers after it show the arithmetic for one cylinder.
+    const sum = `${p.hpPerCfm} × ${p.cfmAt28.toFixed(1)} = ${p.hpPerCylinder.toFixed(1)} hp`;
+    return { valueSI: p.powerW, text: `${p.horsepower.toFixed(0)} hp (${(p.powerW / 1000).toFixed(0)} kW)`, note: `${p.label} = ${sum}` };
   });
 }

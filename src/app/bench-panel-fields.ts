@@ -24,27 +24,37 @@ export interface FieldSpec {
   readonly why?: string;
   /** Grey hint inside an empty field. */
   readonly placeholder?: string;
+  /** Small print under the field: what the number means, when the label alone would leave a porter guessing. */
+  readonly note?: string;
 }
 
 // Limits keep out typing and unit slips, not rare workshops: room air from -40 to 60 C, a barometer from about
 // 5000 m altitude to a deep low, and the common humid-air formulas are made for room air anyway.
 export const FIELDS: { readonly [K in FieldKey]: FieldSpec } = {
   temperature: { label: 'Room temperature', kind: 'temperature', min: 233.15, max: 333.15, why: 'room air; check the unit' },
-  barometric: { label: 'Barometric pressure', kind: 'barometer', min: 50e3, max: 110e3, why: 'an uncorrected barometer reading; check the unit' },
+  barometric: {
+    label: 'Barometric pressure', kind: 'barometer', min: 50e3, max: 110e3,
+    why: 'the room\'s own pressure; 1013 hPa is 101300 Pa; check the unit',
+    note: 'the room\'s own pressure, not a weather report\'s sea-level one',
+  },
   humidity: { label: 'Relative humidity', kind: 'plain', plainUnit: '%', min: 0, max: 100, why: 'a percentage' },
-  testPressure: { label: 'Test pressure', kind: 'pressure', min: 0, aboveMin: true, placeholder: 'depression' },
-  flow: { label: 'Measured flow', kind: 'flow', min: 0, placeholder: 'at the test pressure' },
+  testPressure: { label: 'Test pressure', kind: 'pressure', min: 0, aboveMin: true },
+  flow: { label: 'Measured flow', kind: 'flow', min: 0 },
   bore: { label: 'Bore', kind: 'length', min: 0, aboveMin: true },
   stroke: { label: 'Stroke', kind: 'length', min: 0, aboveMin: true },
   rpm: { label: 'Engine speed', kind: 'plain', plainUnit: 'rpm', min: 0, max: 30000, why: 'crankshaft revolutions per minute' },
   cylinders: { label: 'Cylinders', kind: 'plain', min: 1, max: 24, integer: true },
-  portArea: { label: 'Port area', kind: 'area', min: 0, aboveMin: true, placeholder: 'smallest section' },
-  valveDiameter: { label: 'Inlet valve diameter', kind: 'length', min: 0, aboveMin: true, placeholder: 'head' },
+  portArea: { label: 'Port area', kind: 'area', min: 0, aboveMin: true },
+  valveDiameter: { label: 'Inlet valve diameter', kind: 'length', min: 0, aboveMin: true },
   flowCoefficient: {
     label: 'Mean flow coefficient C_i', short: 'mean flow coefficient', kind: 'plain', min: 0, aboveMin: true, max: 1,
-    why: 'against the valve head area, averaged over the open period', placeholder: 'e.g. from a lift sweep',
+    why: 'against the valve head area, averaged over the open period',
+    note: 'vs valve head area, mean over the open period (for the Mach index)',
   },
-  hpPerCfm: { label: 'k, hp per CFM at 28 in H2O', short: 'k', kind: 'plain', plainUnit: 'hp/CFM', min: 0, aboveMin: true, max: 1 },
+  hpPerCfm: {
+    label: 'k, hp per CFM at 28 in H2O', short: 'k', kind: 'plain', plainUnit: 'hp/CFM', min: 0, aboveMin: true, max: 1,
+    note: 'a setting; common practice: 0.25–0.27 for a good naturally aspirated four-stroke',
+  },
 };
 
 export const FIELD_KEYS = Object.keys(FIELDS) as FieldKey[];

@@ -13,6 +13,13 @@ export interface BenchAreas {
   readonly valveHead?: number;
 }
 
+/** Which of the app's areas each C_D reference is. */
+export const REFERENCE_AREA_KEYS: Readonly<Record<ReferenceArea, keyof BenchAreas>> = {
+  curtain: 'curtain',
+  throat: 'throat',
+  'valve head': 'valveHead',
+};
+
 /** The port area the app offers for the mean port speed, m², and how it was had ("measured", "round-port assumption"). */
 export interface AppPortArea {
   readonly m2: number;

@@ -2,9 +2,9 @@
 
 import {
   dischargeCoefficient, flowInStandardAir, formatQuantity, idealSpeed, inH2OToPa, scaleFlowToTestPressure, speedOfSound,
-  STANDARD_DENSITY_KGM3, sutherlandViscosity, testPressureFactor, type ReferenceArea,
+  STANDARD_DENSITY_KGM3, sutherlandViscosity, testPressureFactor,
 } from '../breathing/index.ts';
-import type { BenchAreas, BenchPanelState } from './bench-panel-model.ts';
+import { REFERENCE_AREA_KEYS, type BenchPanelState } from './bench-panel-model.ts';
 import { engineRows } from './bench-panel-engine.ts';
 import { AIR_FIELDS, makeRow, roomAir, rowContext, scientific, type OutputRow, type RowContext } from './bench-panel-rows.ts';
 
@@ -67,13 +67,11 @@ function benchRows(ctx: RowContext): OutputRow[] {
   ];
 }
 
-const AREA_KEYS: Record<ReferenceArea, keyof BenchAreas> = { curtain: 'curtain', throat: 'throat', 'valve head': 'valveHead' };
-
 function cdRow(ctx: RowContext): OutputRow {
   const { referenceArea: kind, areasM2, units } = ctx.state;
-  const head = { key: 'cd', group: 'bench', label: `Discharge coefficient vs ${kind}` } as const;
+  const head = { key: 'cd', group: 'bench', label: `Discharge coefficient C_D vs ${kind}` } as const;
   return makeRow(ctx, head, [...AIR_FIELDS, 'flow', 'testPressure'], (v) => {
-    const area = areasM2[AREA_KEYS[kind]];
+    const area = areasM2[REFERENCE_AREA_KEYS[kind]];
     if (Object.values(areasM2).every((a) => a === undefined)) return 'no valve part';
     if (area === undefined) return `no ${kind} area for this variant`;
     const cd = dischargeCoefficient(v.flow, area, v.testPressure, roomAir(ctx, v).densityKgM3);

@@ -1,0 +1,144 @@
+/** The "Air and bench" calculator panel: a self-contained DOM component over the pure bench model. */
+
+import { formatQuantity } from '../breathing/index.ts';
+import { buildForm } from './bench-panel-form.ts';
+import {
+  followApp, initialBenchState, setAreas, setChoice, setPortArea, setUnit, typeField, type BenchAreas, type BenchPanelState,
+  type FlowScaleSource,
+} from './bench-panel-model.ts';
+import { benchOutputs, flowScaleSpeed } from './bench-panel-outputs.ts';
+import { renderResults } from './bench-panel-results.ts';
+import { injectBenchStyles } from './bench-panel-style.ts';
+import { syncForm } from './bench-panel-sync.ts';
+import { UNIT_OPTIONS, type PanelUnits } from './bench-panel-units.ts';
+
+export interface BenchPanelOptions {
+  /** "Use as flow scale" was pressed: the chosen speed, m/s, for the boundary-layer march. */
+  readonly onInletSpeed?: (ms: number) => void;
+  /** Units to start in (defaults: mm, m/s, CFM, in H2O, barometer in Pa, °C). */
+  readonly units?: Partial<PanelUnits>;
+}
+
+export interface BenchPanel {
+  /** Reference areas of the active variant at its lift, m²; {} when it has no valve part. */
+  setAreas(areasM2: BenchAreas): void;
+  /** Port area for the mean port speed, m², and where it came from ("measured", "round-port assumption"); null: none. */
+  setPortArea(m2: number | null, source?: string): void;
+  /** Follow the document's length unit. */
+  setLengthUnits(units: 'mm' | 'inch'): void;
+  dispose(): void;
+}
+
+let panelCount = 0;
+
+export function mountBenchPanel(host: HTMLElement, options: BenchPanelOptions = {}): BenchPanel {
+  const doc = host.ownerDocument;
+  injectBenchStyles(doc);
+  const idPrefix = `bench-${++panelCount}`;
+  const lifetime = new AbortController();
+  const signal = lifetime.signal;
+  let state: BenchPanelState = initialBenchState(options.units);
+
+  const root = doc.createElement('div');
+  root.className = 'bench-panel';
+  const title = doc.createElement('h3');
+  title.textContent = 'Air and bench';
+  const form = buildForm(doc, idPrefix, state, signal, {
+    onType: (key, text) => update(typeField(state, key, text)),
+    onUnit: (quantity, unit) => update(setUnit(state, quantity, unit as never)),
+    onHumidityModel: (model) => update(setChoice(state, 'humidityModel', model)),
+    onReferenceArea: (kind) => update(setChoice(state, 'referenceArea', kind)),
+    onFollow: (key) => update(followApp(state, key)),
+  });
+  const results = resultsBlock(doc, idPrefix, signal, (speed) => update(setUnit(state, 'speed', speed)));
+  const scale = scaleBlock(doc, idPrefix, signal, options.onInletSpeed, {
+    choose: (source) => update(setChoice(state, 'flowScale', source)),
+    current: () => state,
+  });
+  root.append(title, form.element, results.head, results.list, scale.element);
+  host.append(root);
+
+  function update(next: BenchPanelState): void {
+    if (signal.aborted) return;
+    state = next;
+    syncForm(form.refs, state);
+    results.speed.value = state.units.speed;
+    renderResults(results.list, benchOutputs(state));
+    scale.sync(state);
+  }
+  update(state);
+
+  return {
+    setAreas: (areasM2) => update(setAreas(state, areasM2)),
+    setPortArea: (m2, source) => update(setPortArea(state, m2, source)),
+    setLengthUnits: (units) => update(setUnit(state, 'length', units)),
+    dispose: () => {
+      lifetime.abort();
+      root.remove();
+    },
+  };
+}
+
+function resultsBlock(doc: Document, idPrefix: string, signal: AbortSignal, onSpeed: (speed: PanelUnits['speed']) => void) {
+  const head = doc.createElement('div');
+  head.className = 'bench-results-head';
+  const h = doc.createElement('h3');
+  h.textContent = 'Results';
+  const label = doc.createElement('label');
+  label.textContent = 'speeds in ';
+  const speed = doc.createElement('select');
+  speed.id = `${idPrefix}-speed-unit`;
+  label.htmlFor = speed.id;
+  for (const o of UNIT_OPTIONS.speed) speed.append(new Option(o.label, o.value));
+  speed.addEventListener('change', () => onSpeed(speed.value as PanelUnits['speed']), { signal });
+  label.append(speed);
+  head.append(h, label);
+  const list = doc.createElement('div');
+  list.className = 'bench-results';
+  return { head, list, speed };
+}
+
+const SCALE_CHOICES: ReadonlyArray<[FlowScaleSource, string]> = [
+  ['ideal speed', 'ideal speed'],
+  ['mean port speed', 'mean port speed'],
+];
+
+/** The "use as flow scale" row: pick a speed and send it to the boundary-layer march. */
+function scaleBlock(
+  doc: Document,
+  idPrefix: string,
+  signal: AbortSignal,
+  onInletSpeed: ((ms: number) => void) | undefined,
+  state: { choose: (source: FlowScaleSource) => void; current: () => BenchPanelState },
+) {
+  const element = doc.createElement('div');
+  element.className = 'bench-scale';
+  const pick = doc.createElement('select');
+  pick.id = `${idPrefix}-flow-scale`;
+  const label = doc.createElement('label');
+  label.htmlFor = pick.id;
+  label.textContent = 'Flow scale of the boundary-layer march (inlet speed):';
+  for (const [value, text] of SCALE_CHOICES) pick.append(new Option(text, value));
+  pick.addEventListener('change', () => state.choose(pick.value as FlowScaleSource), { signal });
+  const send = doc.createElement('button');
+  send.type = 'button';
+  send.textContent = 'Use as flow scale';
+  const note = doc.createElement('div');
+  note.className = 'bench-scale-note';
+  note.setAttribute('aria-live', 'polite');
+  send.addEventListener('click', () => {
+    const speed = flowScaleSpeed(state.current());
+    if (!speed || !onInletSpeed) return;
+    onInletSpeed(speed.ms);
+    note.textContent = `Boundary-layer march now scaled to ${formatQuantity('speed', state.current().units.speed, speed.ms)} (${speed.label.toLowerCase()}).`;
+  }, { signal });
+  element.append(label, pick, send, note);
+  if (!onInletSpeed) element.hidden = true;
+  const sync = (s: BenchPanelState): void => {
+    pick.value = s.flowScale;
+    const ready = flowScaleSpeed(s) !== null;
+    send.disabled = !ready;
+    send.title = ready ? 'Send this speed to the boundary-layer march as its flow scale' : `Needs the ${s.flowScale} in the results`;
+  };
+  return { element, sync };
+}
