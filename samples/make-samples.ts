@@ -72,8 +72,10 @@ function portOutline(shortSideRadius: number): Section['outline'] {
     anchor(VALVE_AXIS_X - throatR, ANCHOR_Y), anchor(VALVE_AXIS_X + throatR, ANCHOR_Y), at(farBowlX, BOWL_TOP_Y),
     at(farBowlX - (ROOF_Y - BOWL_TOP_Y) * run, ROOF_Y, LONG_SIDE_RADIUS),
   ];
+  // The manifold is on the left (-1), so the bowl there is the short side's and the one across the valve the long side's,
+  // named as the parts name the seat and throat below them.
   const bowl = (from: Vertex, to: Vertex, side: -1 | 1): Edge => ({
-    kind: 'curve', role: 'wall', wallName: 'bowl',
+    kind: 'curve', role: 'wall', wallName: side < 0 ? 'bowl (short side)' : 'bowl (long side)',
     // One point at mid-height, 0.4 mm outside the chord: the bowl is a shallow pocket above the throat.
     via: [[round((from.at[0] + to.at[0]) / 2 + side * 0.4), round((from.at[1] + to.at[1]) / 2)]],
   });

@@ -21,7 +21,11 @@ describe('portwright check (the real bin, in a child process)', () => {
     expect(ran.code).toBe(0);
     expect(ran.stdout).toContain('units: mm');
     expect(ran.stdout).toContain(`fluid area: ${kernelArea(sample)} mm^2`);
-    expect(ran.stdout).toContain('walls: floor, short side, bowl, throat, seat, deck, bore wall, long side, valve head');
+    expect(ran.stdout).toContain(
+      'walls: floor, short side, bowl (short side), throat (short side), seat (short side), deck (manifold side), ' +
+        'bore wall (manifold side), bore wall (far side), deck (far side), seat (long side), throat (long side), ' +
+        'bowl (long side), long side, valve head',
+    );
     expect(ran.stdout).toMatch(/OK: 1 variant checked/);
   });
 

@@ -62,7 +62,11 @@ describe('solve --json on the samples', () => {
   it.each(['tight', 'generous'])('%s: walls carry samples [x, y, s, ratio] and the detachment; short side included', (key) => {
     const r = reports[key];
     const names = r.walls.map((w: Json) => w.name);
-    expect(names).toEqual(expect.arrayContaining(['floor', 'short side', 'bowl', 'seat', 'long side', 'valve head']));
+    expect(names).toEqual(expect.arrayContaining([
+      'floor', 'short side', 'bowl (short side)', 'seat (short side)', 'seat (long side)', 'bowl (long side)', 'long side', 'valve head',
+    ]));
+    // every wall of the sample has a name of its own: none is told apart by a number, as "seat (2)"
+    expect(names.filter((n: string) => / \(\d+\)$/.test(n))).toEqual([]);
     for (const w of r.walls) {
       expect(w).toHaveProperty('detachment');
       expect(w.samples.length).toBeGreaterThan(1);

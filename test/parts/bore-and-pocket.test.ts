@@ -11,7 +11,7 @@ import { BORE_80, PARTS_40, SEAT_91, VALVE_40, assertInDelta, deepFreeze, handDr
 /** The bore read from the outline: the two bore walls and the outlet between them. */
 function bore(outline: Outline) {
   const run = runFromAnchor(outline, anchorIndices(outline)[0]);
-  const walls = run.filter((r) => r.name === 'bore wall');
+  const walls = run.filter((r) => r.name?.startsWith('bore wall'));
   const outlets = run.filter((r) => r.role === 'outlet');
   expect(walls).toHaveLength(2);
   expect(outlets).toHaveLength(1);
@@ -35,7 +35,12 @@ describe('test bore', () => {
     assertInDelta(b.outlet.a[1], -50);
     assertInDelta(b.outlet.b[1], -50);
     assertInDelta(b.lowest, -50);
-    expect(b.order).toEqual(['throat', 'seat', 'seat', 'seat', 'deck', 'bore wall', 'outlet', 'bore wall', 'deck', 'seat', 'seat', 'seat', 'throat']);
+    // each side named for the porter: the manifold side's port walls are the short side's
+    const short = ['throat (short side)', 'seat (short side)', 'seat (short side)', 'seat (short side)'];
+    const long = ['seat (long side)', 'seat (long side)', 'seat (long side)', 'throat (long side)'];
+    expect(b.order).toEqual([
+      ...short, 'deck (manifold side)', 'bore wall (manifold side)', 'outlet', 'bore wall (far side)', 'deck (far side)', ...long,
+    ]);
   });
 
   it('puts the nearer wall on the manifold side, the given distance from the valve edge', () => {
@@ -44,6 +49,26 @@ describe('test bore', () => {
     // mirrored port, manifold on the right: the nearer wall moves to the right
     const mirrored = applyParts(handDrawnPort({ mirror: true }), PARTS_40).outline;
     expect(bore(mirrored).xs.sort((a, b) => a - b)).toEqual([-54, 26]);
+  });
+
+  it('names each side for the porter, whichever side the manifold is on', () => {
+    // anchors 20 from the axis, off the 18.2 throat line: a generated bowl step joins each anchor to its throat wall
+    for (const mirror of [false, true]) {
+      const out = applyParts(handDrawnPort({ mirror, anchorX: 20 }), PARTS_40).outline;
+      const manifoldX = mirror ? 1 : -1;
+      const generated = runFromAnchor(out, anchorIndices(out)[0]).filter((r) => r.role === 'wall');
+      // bowl, throat, three seat cuts and deck on each side, and the two bore walls
+      expect(generated).toHaveLength(14);
+      for (const r of generated) {
+        const onManifoldSide = Math.sign(r.a[0] + r.b[0]) === manifoldX;
+        const past = /^(deck|bore wall) /.test(r.name!);
+        const side = past ? (onManifoldSide ? '(manifold side)' : '(far side)') : onManifoldSide ? '(short side)' : '(long side)';
+        const base = r.name!.slice(0, r.name!.lastIndexOf(' ('));
+        expect(['bowl', 'throat', 'seat', 'deck', 'bore wall']).toContain(base);
+        expect(r.name, JSON.stringify(r)).toBe(`${base} ${side}`);
+      }
+      expect(generated.filter((r) => r.name!.startsWith('bowl')).map((r) => r.name).sort()).toEqual(['bowl (long side)', 'bowl (short side)']);
+    }
   });
 
   it('refuses a bore whose wall cuts into the seat', () => {
@@ -77,7 +102,7 @@ describe('joining the hand-drawn outline', () => {
   it('follows a changed number: a smaller throat moves the throat walls in', () => {
     const at91 = applyParts(drawn, PARTS_40);
     const at88 = applyParts(at91, { ...PARTS_40, seat: { ...SEAT_91, throatPct: 88 } });
-    const throatX = (s: Section) => s.outline.edges.flatMap((e, i) => (e.wallName === 'throat' ? [s.outline.vertices[i + 1].at[0]] : []));
+    const throatX = (s: Section) => s.outline.edges.flatMap((e, i) => (e.wallName?.startsWith('throat') ? [s.outline.vertices[i + 1].at[0]] : []));
     expect(throatX(at91)).toEqual([-18.2, 18.2]);
     expect(throatX(at88).map((x) => Math.round(x * 1e9) / 1e9)).toEqual([-17.6, 17.6]);
   });

@@ -31,7 +31,7 @@ export function handDrawnPort(options: { anchorX?: number; anchorY?: number; mir
     at(-60, 60), at(-60, 30), at(-25, 30), at(-23, 15), at(-ax, ay, true), at(ax, ay, true), at(23, 15), at(12, 60),
   ];
   const edges: Edge[] = [
-    { kind: 'line', role: 'inlet' }, wall('floor'), wall('short side'), wall('bowl'), wall('seat'), wall('bowl'),
+    { kind: 'line', role: 'inlet' }, wall('floor'), wall('short side'), wall('bowl (short side)'), wall('seat'), wall('bowl (long side)'),
     wall('long side'), wall('roof'),
   ];
   if (!options.mirror) return { outline: { vertices, edges }, islands: [] };

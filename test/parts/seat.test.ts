@@ -7,16 +7,21 @@ import { PartsError } from '../../src/parts/errors.ts';
 import { anchorIndices } from '../../src/parts/anchors.ts';
 import { BORE_80, SEAT_91, VALVE_40, angleTo, assertInDelta, distanceToLine, handDrawnPort, length, runFromAnchor, unit, type Run } from './helpers.ts';
 
-/** The two rings of a generated pocket, each from the throat down: throat, bottom cut, seat face, top cut. */
+/**
+ * The two rings of a generated pocket, each from the throat down: throat, bottom cut, seat face, top cut. The port
+ * (handDrawnPort, not mirrored) has its manifold on the left, where the pocket starts: that ring is the short side's.
+ */
 function rings(outline: Outline): { left: Run[]; right: Run[]; axisDir: Point } {
   const run = runFromAnchor(outline, anchorIndices(outline)[0]);
-  const down = run.slice(0, run.findIndex((r) => r.name === 'deck'));
-  const upEnd = run.length - 1 - [...run].reverse().findIndex((r) => r.name === 'deck');
+  const isDeck = (r: Run) => r.name?.startsWith('deck') ?? false;
+  const down = run.slice(0, run.findIndex(isDeck));
+  const upEnd = run.length - 1 - [...run].reverse().findIndex(isDeck);
   const up = run.slice(upEnd + 1).reverse().map((r) => ({ ...r, a: r.b, b: r.a }));
-  const pick = (ring: Run[]) => ring.filter((r) => r.name === 'throat' || r.name === 'seat');
+  const pick = (ring: Run[]) => ring.filter((r) => /^(throat|seat) /.test(r.name ?? ''));
   const a = pick(down), b = pick(up);
-  expect(a.map((r) => r.name)).toEqual(['throat', 'seat', 'seat', 'seat']);
-  expect(b.map((r) => r.name)).toEqual(['throat', 'seat', 'seat', 'seat']);
+  const ringNames = (side: string) => [`throat ${side}`, `seat ${side}`, `seat ${side}`, `seat ${side}`];
+  expect(a.map((r) => r.name)).toEqual(ringNames('(short side)'));
+  expect(b.map((r) => r.name)).toEqual(ringNames('(long side)'));
   // The throat walls run along the valve axis: their direction is the axis, read from the outline itself.
   const axisDir = unit(a[0]);
   assertInDelta(angleTo(b[0], axisDir), 0, 1e-9);
