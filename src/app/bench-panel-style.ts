@@ -8,6 +8,9 @@ const CSS = `
   background: var(--bench-bg); color: var(--bench-text); font: 13px/1.35 system-ui, -apple-system, 'Segoe UI', sans-serif; }
 .bench-panel, .bench-panel * { box-sizing: border-box; }
 .bench-panel sub { font-size: 0.75em; line-height: 0; }
+.bench-panel > summary { cursor: pointer; margin: 6px 0 4px; font-size: 12px; font-weight: 700; text-transform: uppercase;
+  letter-spacing: 0.08em; color: var(--bench-muted); }
+.bench-panel > summary:hover { color: var(--bench-text); }
 .bench-panel h3 { margin: 6px 0 4px; font-size: 12px; text-transform: uppercase; letter-spacing: 0.08em; color: var(--bench-muted); }
 .bench-panel h4 { margin: 8px 0 2px; font-size: 11px; font-weight: 600; color: var(--bench-accent); letter-spacing: 0.04em; }
 .bench-form { display: grid; grid-template-columns: minmax(0, 1fr) 72px 66px; gap: 3px 4px; align-items: center; }

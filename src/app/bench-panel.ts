@@ -39,9 +39,11 @@ export function mountBenchPanel(host: HTMLElement, options: BenchPanelOptions = 
   const signal = lifetime.signal;
   let state: BenchPanelState = initialBenchState(options.units);
 
-  const root = doc.createElement('div');
+  // A fold, like the cautions box: the panel is long and the side bar is shared.
+  const root = doc.createElement('details');
   root.className = 'bench-panel';
-  const title = doc.createElement('h3');
+  root.open = true;
+  const title = doc.createElement('summary');
   title.textContent = 'Air and bench';
   const form = buildForm(doc, idPrefix, state, signal, {
     onType: (key, text) => update(typeField(state, key, text)),
