@@ -8,6 +8,7 @@ import { flagShapes } from './app/flag-shapes.ts';
 import { CELLS_BY_DETAIL, DRAG_CELLS } from './app/grid-detail.ts';
 import { fillHelp } from './app/help-overlay.ts';
 import { LiveSolve } from './app/live-solve.ts';
+import { mountBenchPanel } from './app/bench-panel.ts';
 import { showBreathing } from './app/breathing-panel.ts';
 import { PartsPanel } from './app/parts-panel.ts';
 import { PlotsPanel } from './app/plots-panel.ts';
@@ -20,6 +21,7 @@ import { loadDocument } from './document/load.ts';
 import type { PortDocument } from './document/types.ts';
 import { activeSection, applyEdit, type CommandName } from './editor/index.ts';
 import { defaultTolerance, sectionBounds, sectionToDomain } from './geometry/index.ts';
+import { metresPerUnit, partsBreathing } from './parts/index.ts';
 import type { FlowDomain } from './solver/types.ts';
 import { FlowView } from './view/flow-view.ts';
 import type { FieldImage } from './view/types.ts';
@@ -61,7 +63,7 @@ const live = new LiveSolve(pool.live, {
     if (kind === 'full') {
       readings.show(reply, store.doc.units, ms);
       if (reply.reading) plots.show(reply.reading, store.doc.units);
-      showBreathing(byId('breathing'), store.doc, reply.reading?.tightest?.width ?? null);
+      showPartsNumbers(store.doc, reply.reading?.tightest?.width ?? null);
       readings.clearStale();
       status.clearErrors();
     }
@@ -133,7 +135,7 @@ const autosave = autosaver();
 store.subscribe((doc, cause) => {
   showDocument(doc);
   partsPanel.update(doc);
-  showBreathing(byId('breathing'), doc, lastReply?.reading?.tightest?.width ?? null);
+  showPartsNumbers(doc, lastReply?.reading?.tightest?.width ?? null);
   autosave(doc);
   solve(doc, cause);
   if (cause === 'open') {
@@ -184,6 +186,27 @@ function applySettings(group: SettingsGroup): void {
   }
 }
 const gui = buildSettingsPanel(byId('settings-host'), settings, applySettings);
+const bench = mountBenchPanel(byId('bench-host'), {
+  units: { length: store.doc.units },
+  onInletSpeed: (ms) => {
+    settings.inletSpeedMs = ms;
+    gui.controllersRecursive().forEach((c) => c.updateDisplay());
+    applySettings('reading');
+    status.show(`Flow scale for the boundary-layer march set to ${ms.toFixed(1)} m/s from the bench.`);
+  },
+});
+
+/** Breathing numbers beside the field, and the areas the bench calculator needs, for the active variant. */
+function showPartsNumbers(doc: PortDocument, tightestWidth: number | null): void {
+  showBreathing(byId('breathing'), doc, tightestWidth);
+  const parts = doc.variants.find((v) => v.name === doc.activeVariant)?.parts;
+  const b = parts ? partsBreathing(parts, doc.units, tightestWidth === null ? {} : { tightestWidth }) : null;
+  const m2 = metresPerUnit(doc.units) ** 2;
+  bench.setAreas(b ? { curtain: b.curtainArea * m2, throat: b.throatArea * m2, valveHead: b.headArea * m2 } : {});
+  bench.setPortArea(b?.port ? b.port.area * m2 : null, b?.port?.source);
+  bench.setLengthUnits(doc.units);
+}
+
 const partsPanel = new PartsPanel(gui, (part, values) => {
   try {
     store.edit('setPart', { part, values });
@@ -220,7 +243,7 @@ function variantEdit(name: string, args: unknown): void {
 }
 
 showDocument(store.doc);
-showBreathing(byId('breathing'), store.doc, null);
+showPartsNumbers(store.doc, null);
 view.fitToView(sectionBounds(activeSection(store.doc)));
 solve(store.doc, 'open');
 if (restored) status.show('Restored the work from your last visit. Open a sample or a file to start afresh.');

@@ -29,7 +29,7 @@ export function buildSettingsPanel(host: HTMLElement, settings: AppSettings, onC
 
   const reading = gui.addFolder('Flow reading');
   reading.add(settings, 'slowFraction', 0.05, 0.9, 0.05).name('slow below (of local mean)').onFinishChange(() => onChange('reading'));
-  reading.add(settings, 'inletSpeedMs', 5, 150, 1).name('inlet speed, m/s').onFinishChange(() => onChange('reading'));
+  reading.add(settings, 'inletSpeedMs', 5, 300, 0.5).name('inlet speed, m/s').onFinishChange(() => onChange('reading'));
   reading.close();
 
   gui.add(settings, 'snapping').name('snap points').onChange(() => onChange('edit'));
