@@ -13,7 +13,8 @@ import { SAMPLE } from './bench-problem.ts';
 import { runSize, type MemoryReport, type SizeArgs, type SizeReport, type TimeReport } from './bench-size.ts';
 
 const SIZES = [65_536, 262_144, 1_048_576, 4_194_304];
-const RUNS = (cells: number) => (cells > 2_000_000 ? 3 : 5);
+/** Runs per size: more where a run is short, so that a burst of other work on the machine moves the median less. */
+const RUNS = (cells: number) => (cells > 2_000_000 ? 3 : cells > 300_000 ? 5 : 11);
 /** SOR factor spans are scanned up to this size; larger sizes reuse the best span found. */
 const SCAN_UP_TO = 262_144;
 
