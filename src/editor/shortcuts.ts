@@ -44,6 +44,8 @@ export const SHORTCUTS: readonly Shortcut[] = [
 export const POINTER_HINTS: readonly { readonly key: string; readonly description: string }[] = [
   { key: 'Drag a point', description: 'Move a corner, an arc\'s middle point or a curve point' },
   { key: 'Drag a fillet dot', description: 'Change that corner\'s radius (the short-side radius on the short-side corner)' },
+  { key: 'Drag the valve face dot', description: 'Change the lift: only the travel along the valve axis counts' },
+  { key: 'Drag the gauge-line dot', description: 'Move the valve with its seat and test bore' },
   { key: 'Shift+click an edge', description: 'Add a corner there (or a plain click in insert mode)' },
   { key: 'Click an edge', description: 'Select it for a, c, l, w, n, o' },
 ];
