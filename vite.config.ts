@@ -12,6 +12,7 @@ export default defineConfig({
   preview: { headers: isolation },
   test: {
     include: ['test/**/*.test.ts'],
+    setupFiles: ['test/setup-fast-check.ts'],
     testTimeout: 60_000,
     hookTimeout: 120_000,
   },

@@ -19,6 +19,9 @@ export interface FieldSpec {
   readonly aboveMin?: boolean;
   /** Highest allowed value, SI. */
   readonly max?: number;
+  /** A sanity ceiling far above any real reading (SI), so absurd typing cannot overflow into Infinity. */
+  readonly ceiling?: number;
+  readonly ceilingWhy?: string;
   readonly integer?: boolean;
   /** Said after a range message: why the limit is there. */
   readonly why?: string;
@@ -39,13 +42,14 @@ export const FIELDS: { readonly [K in FieldKey]: FieldSpec } = {
   },
   humidity: { label: 'Relative humidity', kind: 'plain', plainUnit: '%', min: 0, max: 100, why: 'a percentage' },
   testPressure: { label: 'Test pressure', kind: 'pressure', min: 0, aboveMin: true },
-  flow: { label: 'Measured flow', kind: 'flow', min: 0 },
-  bore: { label: 'Bore', kind: 'length', min: 0, aboveMin: true },
-  stroke: { label: 'Stroke', kind: 'length', min: 0, aboveMin: true },
+  // Upper limits far above any bench or engine keep absurd typing (1e308) from overflowing into Infinity.
+  flow: { label: 'Measured flow', kind: 'flow', min: 0, ceiling: 10, ceilingWhy: 'a bench reading (10 m³/s is over 21,000 CFM)' },
+  bore: { label: 'Bore', kind: 'length', min: 0, aboveMin: true, ceiling: 1, ceilingWhy: 'a cylinder bore' },
+  stroke: { label: 'Stroke', kind: 'length', min: 0, aboveMin: true, ceiling: 1, ceilingWhy: 'a stroke' },
   rpm: { label: 'Engine speed', kind: 'plain', plainUnit: 'rpm', min: 0, max: 30000, why: 'crankshaft revolutions per minute' },
   cylinders: { label: 'Cylinders', kind: 'plain', min: 1, max: 24, integer: true },
-  portArea: { label: 'Port area', kind: 'area', min: 0, aboveMin: true },
-  valveDiameter: { label: 'Inlet valve diameter', kind: 'length', min: 0, aboveMin: true },
+  portArea: { label: 'Port area', kind: 'area', min: 0, aboveMin: true, ceiling: 0.1, ceilingWhy: 'a port cross-section' },
+  valveDiameter: { label: 'Inlet valve diameter', kind: 'length', min: 0, aboveMin: true, ceiling: 0.5, ceilingWhy: 'a valve head' },
   flowCoefficient: {
     label: 'Mean flow coefficient C_i', short: 'mean flow coefficient', kind: 'plain', min: 0, aboveMin: true, max: 1,
     why: 'against the valve head area, averaged over the open period',
@@ -90,6 +94,9 @@ export function fieldProblem(key: FieldKey, entry: FieldEntry, units: PanelUnits
   if (spec.integer && !Number.isInteger(v)) return 'Must be a whole number.';
   const tooLow = spec.min !== undefined && (spec.aboveMin ? v <= spec.min : v < spec.min);
   const tooHigh = spec.max !== undefined && v > spec.max;
+  if (!tooLow && spec.ceiling !== undefined && v > spec.ceiling) {
+    return `Must be at most ${shownLimit(key, units, spec.ceiling)}${spec.ceilingWhy ? ` (${spec.ceilingWhy})` : ''}.`;
+  }
   if (!tooLow && !tooHigh) return null;
   const why = spec.why ? ` (${spec.why})` : '';
   if (spec.min !== undefined && spec.max !== undefined) {

@@ -59,6 +59,7 @@ describe('unit switches', () => {
         const after = benchOutputs(s).map((r) => r.valueSI);
         after.forEach((v, i) => expect(v).toBe(before[i]));
       }),
+      { seed: 20261202 },
     );
   });
 
@@ -73,6 +74,7 @@ describe('unit switches', () => {
           expect(Math.abs(retyped - si)).toBeLessThanOrEqual(5e-6 * Math.abs(si) + 1e-12);
         }
       }),
+      { seed: 20261202 },
     );
   });
 });
@@ -103,6 +105,7 @@ describe('text in and out', () => {
           expect(row.text !== null || row.missing !== undefined).toBe(true);
         }
       }),
+      { seed: 20261202 },
     );
   });
 });
