@@ -1,7 +1,7 @@
 /** Wires pointer and keyboard events to the pure drag tool and sends its edits to the document store. */
 import type { PortDocument, Point } from '../document/types.ts';
 import {
-  activeSection, DEFAULT_GRID_STEP, hitTest, IDLE, listHandles, sameHandle, stepTool,
+  activeSection, activeVariant, DEFAULT_GRID_STEP, hitTest, IDLE, listHandles, sameHandle, stepTool,
   type CommandName, type HandleRef, type ToolAction, type ToolEvent, type ToolState,
 } from '../editor/index.ts';
 import type { FlowView } from '../view/flow-view.ts';
@@ -52,7 +52,7 @@ export class EditorController {
   /** Claim a press on a handle or an edge so the view does not pan; a press on empty space pans and clears the selection. */
   private claim(ev: PointerEvent, at: Point): boolean {
     const insert = this.insertMode || ev.shiftKey;
-    const hit = hitTest(activeSection(this.store.doc), at, this.tolerance());
+    const hit = hitTest(activeSection(this.store.doc), at, this.tolerance(), { parts: activeVariant(this.store.doc).parts });
     if (!hit) {
       if (this.state.selection) this.dispatch({ type: 'key', press: { key: 'Escape' } });
       return false;
@@ -125,7 +125,7 @@ export class EditorController {
   private context() {
     const units = this.store.doc.units;
     const snap = this.hooks.snapping() ? { gridStep: DEFAULT_GRID_STEP[units], alignTolerance: 4 / this.view.transform.scale } : null;
-    return { section: activeSection(this.store.doc), tolerance: this.tolerance(), snap };
+    return { section: activeSection(this.store.doc), parts: activeVariant(this.store.doc).parts, tolerance: this.tolerance(), snap };
   }
 
   private tolerance(): number {
@@ -140,19 +140,27 @@ export class EditorController {
 
   private drawHandles(): void {
     const section = activeSection(this.store.doc);
+    const parts = activeVariant(this.store.doc).parts;
     const selected = this.state.selection;
-    const units = this.store.doc.units;
-    const marks: HandleMark[] = listHandles(section).map(({ ref, at }) => {
-      const isSelected = sameHandle(selected, ref);
-      const radius = ref.kind === 'fillet' ? filletRadiusOf(section, ref) : 0;
-      return {
-        x: at[0], y: at[1],
-        style: ref.kind === 'vertex' ? 'corner' : ref.kind === 'fillet' ? 'fillet' : 'point',
-        selected: isSelected,
-        label: isSelected && ref.kind === 'fillet' ? `R ${radius.toFixed(units === 'mm' ? 1 : 3)} ${units}` : undefined,
-      };
-    });
+    const marks: HandleMark[] = listHandles(section, parts).map(({ ref, at }) => ({
+      x: at[0], y: at[1],
+      style: STYLE_BY_KIND[ref.kind] ?? 'point',
+      selected: sameHandle(selected, ref),
+      label: sameHandle(selected, ref) || ref.kind === 'lift' ? this.handleLabel(ref) : undefined,
+    }));
     this.overlay.setHandles(marks);
+  }
+
+  /** What a handle sets, shown beside it: a fillet's radius, the lift, the valve axis. */
+  private handleLabel(ref: HandleRef): string | undefined {
+    const { units } = this.store.doc;
+    const digits = units === 'mm' ? 1 : 3;
+    const section = activeSection(this.store.doc);
+    if (ref.kind === 'fillet') return `R ${filletRadiusOf(section, ref).toFixed(digits)} ${units}`;
+    const valve = activeVariant(this.store.doc).parts?.valve;
+    if (ref.kind === 'lift' && valve) return `lift ${valve.lift.toFixed(digits)} ${units}`;
+    if (ref.kind === 'valve-axis') return 'valve axis';
+    return undefined;
   }
 
   dispose(): void {
@@ -160,6 +168,10 @@ export class EditorController {
     this.overlay.dispose();
   }
 }
+
+const STYLE_BY_KIND: Partial<Record<HandleRef['kind'], HandleMark['style']>> = {
+  vertex: 'corner', fillet: 'fillet', lift: 'part', 'valve-axis': 'part',
+};
 
 function filletRadiusOf(section: ReturnType<typeof activeSection>, ref: Extract<HandleRef, { kind: 'fillet' }>): number {
   const outline = ref.island === undefined ? section.outline : section.islands[ref.island].outline;

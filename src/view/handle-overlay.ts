@@ -1,7 +1,7 @@
 /** Editor handles (corners, arc and curve points, fillet-radius handles) drawn as SVG above the field. */
 import type { SectionToScreen } from './types.ts';
 
-export type HandleStyle = 'corner' | 'point' | 'fillet';
+export type HandleStyle = 'corner' | 'point' | 'fillet' | 'part';
 
 /** A handle to draw, section units. */
 export interface HandleMark {
@@ -14,7 +14,7 @@ export interface HandleMark {
 }
 
 const SVG_NS = 'http://www.w3.org/2000/svg';
-const RADIUS_PX: Readonly<Record<HandleStyle, number>> = { corner: 4.5, point: 4, fillet: 5 };
+const RADIUS_PX: Readonly<Record<HandleStyle, number>> = { corner: 4.5, point: 4, fillet: 5, part: 6 };
 
 export class HandleOverlay {
   private readonly svg: SVGSVGElement;
@@ -47,9 +47,7 @@ export class HandleOverlay {
       const r = RADIUS_PX[m.style] + (m.selected ? 1.5 : 0);
       const fill = m.selected ? '#e8a33d' : m.style === 'fillet' ? '#1d2127' : '#f2f4f6';
       const stroke = m.style === 'fillet' ? '#e8a33d' : '#1d2127';
-      parts.push(m.style === 'corner'
-        ? `<rect x="${sx - r}" y="${sy - r}" width="${2 * r}" height="${2 * r}" fill="${fill}" stroke="${stroke}" stroke-width="1.5"/>`
-        : `<circle cx="${sx}" cy="${sy}" r="${r}" fill="${fill}" stroke="${stroke}" stroke-width="2"/>`);
+      parts.push(shape(m.style, sx, sy, r, fill, stroke));
       if (m.label) parts.push(`<text x="${sx + 9}" y="${sy - 9}" fill="#e8a33d" font-size="12" font-family="system-ui" paint-order="stroke" stroke="#15181d" stroke-width="3">${escapeText(m.label)}</text>`);
     }
     this.svg.innerHTML = parts.join('');
@@ -58,6 +56,13 @@ export class HandleOverlay {
   dispose(): void {
     this.svg.remove();
   }
+}
+
+/** Corners are squares, part handles (lift, valve axis) diamonds, the rest circles. */
+function shape(style: HandleStyle, sx: number, sy: number, r: number, fill: string, stroke: string): string {
+  if (style === 'corner') return `<rect x="${sx - r}" y="${sy - r}" width="${2 * r}" height="${2 * r}" fill="${fill}" stroke="${stroke}" stroke-width="1.5"/>`;
+  if (style === 'part') return `<path d="M${sx} ${sy - r}L${sx + r} ${sy}L${sx} ${sy + r}L${sx - r} ${sy}Z" fill="${fill === '#f2f4f6' ? '#5ec8e5' : fill}" stroke="#15181d" stroke-width="1.5"/>`;
+  return `<circle cx="${sx}" cy="${sy}" r="${r}" fill="${fill}" stroke="${stroke}" stroke-width="2"/>`;
 }
 
 function escapeText(text: string): string {
