@@ -4,7 +4,9 @@ import type { Stencil } from './assemble.ts';
 /**
  * Adds P^T (b - A' x) of fine row j to coarseB (I + J * ncx; the caller zeroes it before the first row),
  * A' being A without the Dirichlet couplings: the Dirichlet cells are redone by correctRestrictCell.
- * Needs x final in rows j - 1..j + 1. One pass over the coarse columns under the row's active span and one
+ * Needs x final in rows j - 1..j + 1, and the last relaxation before it black (as in the pre-smoother): black
+ * cells then have zero residual, so only red cells are evaluated (half the work; the same operator in exact
+ * arithmetic, so the V-cycle stays symmetric). One pass over the coarse columns under the row's active span and one
  * beyond each end (residuals are 0 outside the span: excluded cells have none). A child's residual r, with
  * q = r / (3 + g(side)), gives 3 q to its parent column (split across rows as 3 : s(I, jn)) and q to its
  * side column (split as 3 s(side, J) : s(side, jn), over 4); a side column's share is complete once the
@@ -26,12 +28,15 @@ export function restrictRow(
   let invC = 1 / (3 + sideWeightOf(strength, rowC, rowD, first));
   let sidePrev = 0;
   let sideCur = 0;
+  const redOffset = j & 1; // red cells have i + j even
   for (let I = first; I <= last; I++) {
     const right = I + 1 < ncx ? I + 1 : I;
     const invR = 1 / (3 + sideWeightOf(strength, rowC, rowD, right));
     const i0 = 2 * I;
-    const q0 = i0 >= fs && i0 < fe ? cellResidual(s, x, b, j, i0) * invL : 0;
-    const q1 = i0 + 1 >= fs && i0 + 1 < fe ? cellResidual(s, x, b, j, i0 + 1) * invR : 0;
+    const red = i0 + redOffset;
+    const r = red >= fs && red < fe ? cellResidual(s, x, b, j, red) : 0;
+    const q0 = redOffset === 0 ? r * invL : 0;
+    const q1 = redOffset === 1 ? r * invR : 0;
     spreadParent(strength, coarseB, rowC, rowD, I, 3 * (q0 + q1));
     if (I > 0) {
       sidePrev += q0;

@@ -131,11 +131,14 @@ function prolongAndPostSmooth(t: TransferPair, sweeps: number, x: Float64Array, 
   return dot;
 }
 
-/** Restricts row j and applies the Dirichlet-cell corrections of that row. */
+/** Restricts row j and applies the corrections of its red Dirichlet cells (black ones have zero residual). */
 function restrictWithDirichlet(t: TransferPair, x: Float64Array, b: Float64Array, coarseB: Float64Array, j: number): void {
   restrictRow(t.fine, x, b, j, t.coarse, t.strength, coarseB, t.rowN[j]);
-  const rowPtr = t.fine.dirichlet.rowPtr;
-  for (let m = rowPtr[j]; m < rowPtr[j + 1]; m++) correctRestrictCell(t, x, b, coarseB, m);
+  const { cells, rowPtr } = t.fine.dirichlet;
+  const nx = t.fine.nx;
+  for (let m = rowPtr[j]; m < rowPtr[j + 1]; m++) {
+    if (((cells[m] - j * nx + j) & 1) === 0) correctRestrictCell(t, x, b, coarseB, m);
+  }
 }
 
 /** Symmetric relaxation from zero (red-black pairs, then black-red pairs), a stand-in for the direct solve. */
