@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { SolveSupersededError, solveFlow, solveOnGrid } from '../../src/solver/solve.ts';
 import { channelGrid } from './hand-grids.ts';
 import { bend } from './rasterise-shapes.ts';
+import { benchDomain } from '../../bench/bench-problem.ts';
 
 describe('solveFlow', () => {
   it('stops with a typed "superseded" error as soon as shouldStop says so', () => {
@@ -44,5 +45,20 @@ describe('solveFlow', () => {
 describe('solveOnGrid', () => {
   it('refuses a non-positive inlet length (a caller bug, not a user error)', () => {
     expect(() => solveOnGrid(channelGrid(4, 2), { inletLength: 0 })).toThrow(RangeError);
+  });
+});
+
+describe('the tight short-side street-port sample (bench problem)', () => {
+  it('solves in a grid-independent number of iterations and passes its flux through every station', () => {
+    const runs = [65_536, 262_144].map((cells) => solveFlow(benchDomain(), { targetCells: cells }));
+    console.log(`sample: ${runs.map((r) => `${r.grid.nx} x ${r.grid.ny}: ${r.iterations} iterations, conductance ${r.conductance.toFixed(5)}, ` +
+      `station imbalance ${r.fluxImbalance.toExponential(1)}, peak ${r.peak.speedRatio.toFixed(2)}`).join('; ')}`);
+    for (const r of runs) {
+      expect(r.iterations).toBeLessThanOrEqual(15);
+      expect(r.residual).toBeLessThanOrEqual(1e-8);
+      expect(r.fluxImbalance).toBeLessThan(1e-5);
+    }
+    // Self-convergence of the conductance between the two grids.
+    expect(Math.abs(runs[1].conductance / runs[0].conductance - 1)).toBeLessThan(0.002);
   });
 });
