@@ -12,6 +12,7 @@ import { mountBenchPanel } from './app/bench-panel.ts';
 import { showBreathing } from './app/breathing-panel.ts';
 import { PartsPanel } from './app/parts-panel.ts';
 import { PlotsPanel } from './app/plots-panel.ts';
+import { SelectionPanel } from './app/selection-panel.ts';
 import { ReadingsPanel } from './app/readings-panel.ts';
 import { fluidClip, wallLines } from './app/section-shapes.ts';
 import { defaultSettings, parseLevels } from './app/settings.ts';
@@ -134,6 +135,7 @@ function showDocument(doc: PortDocument): void {
 const autosave = autosaver();
 store.subscribe((doc, cause) => {
   showDocument(doc);
+  selectionPanel.show(doc, editor.selection);
   partsPanel.update(doc);
   showPartsNumbers(doc, lastReply?.reading?.tightest?.width ?? null);
   autosave(doc);
@@ -168,10 +170,12 @@ function runCommand(name: CommandName): void {
   }
 }
 
+const selectionPanel = new SelectionPanel(byId('selection'), (name, args) => variantEdit(name, args, false));
 const editor = new EditorController(viewHost, view, store, {
   onCommand: runCommand,
   onMessage: (message, level) => status.show(message, level),
   snapping: () => settings.snapping,
+  onSelection: (selection) => selectionPanel.show(store.doc, selection),
 });
 
 function applySettings(group: SettingsGroup): void {
@@ -233,10 +237,11 @@ byId('delete-variant').addEventListener('click', () => {
   if (confirm(`Delete the variant "${store.doc.activeVariant}"?`)) variantEdit('deleteVariant', { name: store.doc.activeVariant });
 });
 
-function variantEdit(name: string, args: unknown): void {
+/** An edit from a button or a typed field; `resetSelection` when indices may no longer mean the same thing. */
+function variantEdit(name: string, args: unknown, resetSelection = true): void {
   try {
     store.edit(name, args);
-    editor.reset();
+    if (resetSelection) editor.reset();
   } catch (error) {
     status.show(error instanceof Error ? error.message : String(error), 'error');
   }

@@ -15,6 +15,8 @@ export interface EditorHooks {
   readonly onCommand: (name: CommandName) => void;
   readonly onMessage: (message: string, level: 'info' | 'error') => void;
   readonly snapping: () => boolean;
+  /** The selection may have changed (after every event the tool handles). */
+  readonly onSelection?: (selection: HandleRef | null) => void;
 }
 
 export class EditorController {
@@ -43,6 +45,7 @@ export class EditorController {
     this.state = IDLE;
     this.beforeDrag = null;
     this.drawHandles();
+    this.hooks.onSelection?.(null);
   }
 
   get selection(): HandleRef | null {
@@ -85,6 +88,7 @@ export class EditorController {
     this.lastHandled = step.actions.length > 0;
     for (const action of step.actions) this.perform(action);
     this.drawHandles();
+    this.hooks.onSelection?.(this.state.selection);
   }
 
   private perform(action: ToolAction): void {

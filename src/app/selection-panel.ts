@@ -1,0 +1,69 @@
+/** Typed values for what is selected: a corner's fillet radius, an edge's role and wall name. Each change is one edit. */
+import type { PortDocument } from '../document/types.ts';
+import { WALL_NAMES } from '../document/types.ts';
+import { activeSection, type HandleRef } from '../editor/index.ts';
+
+type Send = (name: string, args: unknown) => void;
+
+export class SelectionPanel {
+  constructor(private readonly host: HTMLElement, private readonly send: Send) {}
+
+  show(doc: PortDocument, selection: HandleRef | null): void {
+    if (!selection || selection.kind === 'lift' || selection.kind === 'valve-axis') return this.host.replaceChildren();
+    const section = activeSection(doc);
+    const island = selection.island;
+    const outline = island === undefined ? section.outline : section.islands[island]?.outline;
+    if (!outline) return this.host.replaceChildren();
+    const title = document.createElement('h3');
+    if (selection.kind === 'vertex' || selection.kind === 'fillet') {
+      const vertex = outline.vertices[selection.vertex];
+      if (!vertex) return this.host.replaceChildren();
+      title.textContent = `Corner ${selection.vertex + 1}${island === undefined ? '' : ` of ${section.islands[island].name}`}`;
+      const radius = numberInput(vertex.filletRadius ?? 0, (r) => this.send('setFilletRadius', { vertex: selection.vertex, island, radius: r }));
+      radius.dataset.field = 'fillet-radius';
+      return this.host.replaceChildren(title, row(`fillet radius, ${doc.units}`, radius));
+    }
+    const edgeIndex = 'edge' in selection ? selection.edge : -1;
+    const edge = outline.edges[edgeIndex];
+    if (!edge) return this.host.replaceChildren();
+    title.textContent = `Edge ${edgeIndex + 1} (${edge.kind === 'line' ? 'straight' : edge.kind})`;
+    const role = document.createElement('select');
+    for (const r of ['wall', 'inlet', 'outlet']) role.add(new Option(r, r, false, r === edge.role));
+    role.disabled = island !== undefined;
+    role.addEventListener('change', () => this.send('setEdgeRole', { edge: edgeIndex, island, role: role.value }));
+    const name = document.createElement('input');
+    name.value = edge.wallName ?? '';
+    name.placeholder = 'e.g. short side';
+    name.setAttribute('list', 'wall-names');
+    name.disabled = edge.role !== 'wall';
+    name.addEventListener('change', () => this.send('setWallName', { edge: edgeIndex, island, name: name.value.trim() }));
+    this.host.replaceChildren(title, row('role', role), row('wall name', name), wallNameList());
+  }
+}
+
+function numberInput(value: number, onChange: (v: number) => void): HTMLInputElement {
+  const input = document.createElement('input');
+  input.type = 'number';
+  input.min = '0';
+  input.step = 'any';
+  input.value = String(Math.round(value * 1e4) / 1e4);
+  input.addEventListener('change', () => {
+    const v = Number(input.value);
+    if (input.value.trim() !== '' && Number.isFinite(v)) onChange(v);
+  });
+  return input;
+}
+
+function row(label: string, control: HTMLElement): HTMLElement {
+  const element = document.createElement('label');
+  element.className = 'selection-row';
+  element.append(label, control);
+  return element;
+}
+
+function wallNameList(): HTMLDataListElement {
+  const list = document.createElement('datalist');
+  list.id = 'wall-names';
+  for (const n of WALL_NAMES) list.append(new Option(n));
+  return list;
+}
