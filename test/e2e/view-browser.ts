@@ -6,16 +6,9 @@ import { join, resolve } from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { createServer, type ViteDevServer } from 'vite';
 
-export const CHROMIUM_ARGS = [
-  '--headless',
-  '--no-sandbox',
-  '--use-angle=swiftshader',
-  '--enable-unsafe-swiftshader',
-  '--disable-background-networking',
-  '--disable-component-update',
-  '--disable-sync',
-  '--no-first-run',
-];
+import { CHROMIUM_ARGS } from './app-session.ts';
+
+export { CHROMIUM_ARGS };
 
 export interface BrowserSession {
   readonly server: ViteDevServer;
