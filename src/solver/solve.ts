@@ -57,17 +57,25 @@ export type GridSolution = Omit<SolveResult, 'walls'> & {
  */
 export function solveFlow(domain: FlowDomain, options: SolveOptions): SolveResult {
   const grid = rasterise(domain, options.targetCells);
+  stopIfSuperseded(options.shouldStop);
+  const mask = connectedCells(grid);
   const solution = solveOnGrid(grid, {
     inletLength: markedLength(domain, MARK_INLET),
     tolerance: options.tolerance,
     maxIterations: options.maxIterations,
     warmStart: options.warmStart,
     shouldStop: options.shouldStop,
-    mask: connectedCells(grid),
+    mask,
     corners: sharpConvexCorners(domain),
   });
+  stopIfSuperseded(options.shouldStop, solution.iterations);
   const walls = wallSpeeds(domain, grid, solution.phi, solution.inletMeanSpeed);
   return { ...solution, walls };
+}
+
+/** Between phases too, so a superseded solve on a big grid does not finish its set-up or read-out first. */
+function stopIfSuperseded(shouldStop: (() => boolean) | undefined, iterations = 0): void {
+  if (shouldStop?.()) throw new SolveSupersededError(iterations);
 }
 
 /** Solves on a ready grid (tests, and solveFlow after rasterising). */

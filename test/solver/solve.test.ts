@@ -7,16 +7,21 @@ import { benchDomain } from '../../bench/bench-problem.ts';
 
 describe('solveFlow', () => {
   it('stops with a typed "superseded" error as soon as shouldStop says so', () => {
+    // Asked after rasterising, then before every iteration: the fourth answer stops it after two iterations.
     let calls = 0;
-    const attempt = () => solveFlow(bend(1, 2, 256), { targetCells: 16_384, shouldStop: () => ++calls >= 3 });
+    const attempt = () => solveFlow(bend(1, 2, 256), { targetCells: 16_384, shouldStop: () => ++calls >= 4 });
     expect(attempt).toThrow(SolveSupersededError);
-    try {
-      calls = 0;
-      attempt();
-    } catch (error) {
-      expect((error as SolveSupersededError).code).toBe('superseded');
-      expect((error as SolveSupersededError).iterations).toBe(2);
-    }
+    calls = 0;
+    const error = catchError(attempt) as SolveSupersededError;
+    expect(error.code).toBe('superseded');
+    expect(error.iterations).toBe(2);
+    expect(calls).toBe(4);
+  });
+
+  it('stops before connecting and solving when superseded during rasterisation', () => {
+    const error = catchError(() => solveFlow(bend(1, 2, 256), { targetCells: 16_384, shouldStop: () => true })) as SolveSupersededError;
+    expect(error).toBeInstanceOf(SolveSupersededError);
+    expect(error.iterations).toBe(0);
   });
 
   it('returns within the iteration cap, reporting the residual it reached', () => {
@@ -41,6 +46,15 @@ describe('solveFlow', () => {
     expect(result.walls.map((w) => w.name).sort()).toEqual(['long side', 'short side']);
   });
 });
+
+function catchError(run: () => unknown): unknown {
+  try {
+    run();
+  } catch (error) {
+    return error;
+  }
+  throw new Error('expected an error');
+}
 
 describe('solveOnGrid', () => {
   it('refuses a non-positive inlet length (a caller bug, not a user error)', () => {
