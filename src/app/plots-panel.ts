@@ -8,6 +8,7 @@ export class PlotsPanel {
   private readonly stationsCanvas = document.createElement('canvas');
   private readonly wallCanvas = document.createElement('canvas');
   private readonly wallPick = document.createElement('select');
+  private readonly wallCaption = document.createElement('p');
   private reading: FlowReading | null = null;
   private units = 'mm';
 
@@ -17,7 +18,9 @@ export class PlotsPanel {
     const pickRow = document.createElement('label');
     pickRow.className = 'plot-pick';
     pickRow.append('Wall speed along ', this.wallPick);
-    host.replaceChildren(this.stationsCanvas, pickRow, this.wallCanvas);
+    this.wallCaption.className = 'plot-caption';
+    this.wallCaption.dataset.reading = 'wall-fall';
+    host.replaceChildren(this.stationsCanvas, pickRow, this.wallCanvas, this.wallCaption);
   }
 
   show(reading: FlowReading, units: string): void {
@@ -53,6 +56,11 @@ export class PlotsPanel {
     const wall = this.reading?.walls.find((w) => w.name === name);
     const detachment = this.reading?.detachments.find((d) => d.name === name)?.detachment;
     const series: PlotSeries[] = wall ? [{ label: `${name}`, xy: sAndRatio(wall.samples), colour: WALL_COLOURS[0] }] : [];
+    this.wallCaption.textContent = wall
+      ? `Peak ${wall.peak.speedRatio.toFixed(2)} at ${wall.peak.s.toFixed(1)} ${this.units} along; falls to ` +
+        `${wall.low.speedRatio.toFixed(2)} (${(100 * wall.fall).toFixed(0)}% of the peak), pressure recovered Cp ${wall.pressureRecovered.toFixed(2)}.` +
+        (detachment ? ` Flow likely leaves the wall ${detachment.s.toFixed(1)} ${this.units} along (${detachment.method}).` : ' Flow likely stays on the wall.')
+      : '';
     drawPlot(this.wallCanvas, {
       title: `Speed ratio along the ${name || 'wall'}`,
       xLabel: `arc length from upstream end, ${this.units}`,
