@@ -18,6 +18,7 @@ import { fluidClip, wallLines } from './app/section-shapes.ts';
 import { defaultSettings, parseLevels } from './app/settings.ts';
 import { buildSettingsPanel, type SettingsGroup } from './app/settings-panel.ts';
 import { StatusLine } from './app/status.ts';
+import { thinPolyline } from './app/thin-polyline.ts';
 import { loadDocument } from './document/load.ts';
 import type { PortDocument } from './document/types.ts';
 import { activeSection, applyEdit, type CommandName } from './editor/index.ts';
@@ -97,7 +98,7 @@ function drawField(reply: FieldReply): void {
   const field: FieldImage = { nx: reply.nx, ny: reply.ny, x0: reply.x0, y0: reply.y0, h: reply.h, values };
   view.setField(field);
   if (reply.reading) {
-    view.setStreamlines(reply.reading.streamlines.map((s) => ({ xy: s.xy, closed: false })));
+    view.setStreamlines(reply.reading.streamlines.map((s) => ({ xy: thinPolyline(s.xy, 2 * reply.h), closed: false })));
     view.setFlags(flagShapes(reply, store.doc.units));
   }
 }
@@ -134,12 +135,14 @@ function showDocument(doc: PortDocument): void {
 
 const autosave = autosaver();
 store.subscribe((doc, cause) => {
+  solve(doc, cause);
+  autosave(doc);
+  // Mid-drag only the field and the handles follow the pointer; panels catch up when the drag ends.
+  if (cause === 'drag') return;
   showDocument(doc);
   selectionPanel.show(doc, editor.selection);
   partsPanel.update(doc);
   showPartsNumbers(doc, lastReply?.reading?.tightest?.width ?? null);
-  autosave(doc);
-  solve(doc, cause);
   if (cause === 'open') {
     editor.reset();
     view.setUnits(doc.units);
