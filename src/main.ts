@@ -9,7 +9,7 @@ import { CELLS_BY_DETAIL, DRAG_CELLS } from './app/grid-detail.ts';
 import { fillHelp } from './app/help-overlay.ts';
 import { LiveSolve } from './app/live-solve.ts';
 import { mountBenchPanel } from './app/bench-panel.ts';
-import { showBreathing } from './app/breathing-panel.ts';
+import { feedBench, showBreathing } from './app/breathing-panel.ts';
 import { PartsPanel } from './app/parts-panel.ts';
 import { PlotsPanel } from './app/plots-panel.ts';
 import { SelectionPanel } from './app/selection-panel.ts';
@@ -23,7 +23,6 @@ import { loadDocument } from './document/load.ts';
 import type { PortDocument } from './document/types.ts';
 import { activeSection, applyEdit, type CommandName } from './editor/index.ts';
 import { defaultTolerance, sectionBounds, sectionToDomain } from './geometry/index.ts';
-import { metresPerUnit, partsBreathing } from './parts/index.ts';
 import type { FlowDomain } from './solver/types.ts';
 import { FlowView } from './view/flow-view.ts';
 import type { FieldImage } from './view/types.ts';
@@ -206,12 +205,7 @@ const bench = mountBenchPanel(byId('bench-host'), {
 /** Breathing numbers beside the field, and the areas the bench calculator needs, for the active variant. */
 function showPartsNumbers(doc: PortDocument, tightestWidth: number | null): void {
   showBreathing(byId('breathing'), doc, tightestWidth);
-  const parts = doc.variants.find((v) => v.name === doc.activeVariant)?.parts;
-  const b = parts ? partsBreathing(parts, doc.units, tightestWidth === null ? {} : { tightestWidth }) : null;
-  const m2 = metresPerUnit(doc.units) ** 2;
-  bench.setAreas(b ? { curtain: b.curtainArea * m2, throat: b.throatArea * m2, valveHead: b.headArea * m2 } : {});
-  bench.setPortArea(b?.port ? b.port.area * m2 : null, b?.port?.source);
-  bench.setLengthUnits(doc.units);
+  feedBench(bench, doc, tightestWidth);
 }
 
 const partsPanel = new PartsPanel(gui, (part, values) => {

@@ -1,6 +1,7 @@
 /** Valve and seat numbers at the current lift, the greatest restriction, and notes against usual practice. */
 import type { PortDocument } from '../document/types.ts';
-import { partsBreathing, partsNotes } from '../parts/index.ts';
+import { metresPerUnit, partsBreathing, partsNotes } from '../parts/index.ts';
+import type { mountBenchPanel } from './bench-panel.ts';
 
 export function showBreathing(host: HTMLElement, doc: PortDocument, tightestWidth: number | null): void {
   const parts = doc.variants.find((v) => v.name === doc.activeVariant)?.parts;
@@ -40,4 +41,14 @@ export function showBreathing(host: HTMLElement, doc: PortDocument, tightestWidt
     return p;
   });
   host.replaceChildren(title, table, ...notes);
+}
+
+/** Hands the bench calculator the active variant's areas in SI (it works out C_D and port speed against them). */
+export function feedBench(bench: ReturnType<typeof mountBenchPanel>, doc: PortDocument, tightestWidth: number | null): void {
+  const parts = doc.variants.find((v) => v.name === doc.activeVariant)?.parts;
+  const b = parts ? partsBreathing(parts, doc.units, tightestWidth === null ? {} : { tightestWidth }) : null;
+  const m2 = metresPerUnit(doc.units) ** 2;
+  bench.setAreas(b ? { curtain: b.curtainArea * m2, throat: b.throatArea * m2, valveHead: b.headArea * m2 } : {});
+  bench.setPortArea(b?.port ? b.port.area * m2 : null, b?.port?.source);
+  bench.setLengthUnits(doc.units);
 }

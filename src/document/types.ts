@@ -9,7 +9,10 @@ export type Point = readonly [number, number];
 export type EdgeRole = 'wall' | 'inlet' | 'outlet';
 
 /** Trade names a wall may carry; free text is allowed too. */
-export const WALL_NAMES = ['short side', 'long side', 'roof', 'floor', 'bowl', 'valve face', 'valve back', 'seat', 'bore wall'] as const;
+export const WALL_NAMES = [
+  'short side', 'long side', 'roof', 'floor', 'bowl (short side)', 'bowl (long side)', 'bowl', 'valve face', 'valve back',
+  'seat', 'throat', 'bore wall',
+] as const;
 
 interface EdgeBase {
   readonly role: EdgeRole;
