@@ -13,7 +13,7 @@ export class PlotsPanel {
   private units = 'mm';
 
   constructor(host: HTMLElement) {
-    for (const c of [this.stationsCanvas, this.wallCanvas]) c.style.cssText = 'width:100%;height:150px;display:block';
+    for (const c of [this.stationsCanvas, this.wallCanvas]) c.style.cssText = 'width:100%;height:165px;display:block';
     this.wallPick.addEventListener('change', () => this.drawWalls());
     const pickRow = document.createElement('label');
     pickRow.className = 'plot-pick';

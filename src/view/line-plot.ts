@@ -19,7 +19,8 @@ export interface PlotSpec {
   readonly marks?: readonly { readonly x: number; readonly label: string }[];
 }
 
-const PAD = { left: 40, right: 40, top: 22, bottom: 30 };
+/** Title on the first line, legend on the second, then the plot. */
+const PAD = { left: 40, right: 40, top: 34, bottom: 30 };
 
 export function drawPlot(canvas: HTMLCanvasElement, spec: PlotSpec): void {
   const ratio = window.devicePixelRatio || 1;
@@ -97,14 +98,14 @@ function drawAxes(g: CanvasRenderingContext2D, w: number, h: number, xr: Range, 
 }
 
 function drawLegend(g: CanvasRenderingContext2D, series: readonly PlotSeries[], w: number): void {
-  let x = w - PAD.right;
+  let x = w - PAD.right + 30;
   for (const s of [...series].reverse()) {
     const text = s.label;
     x -= g.measureText(text).width + 18;
     g.fillStyle = s.colour;
-    g.fillRect(x, 6, 10, 3);
+    g.fillRect(x, 21, 10, 3);
     g.fillStyle = '#e3e6ea';
-    g.fillText(text, x + 13, 12);
+    g.fillText(text, x + 13, 26);
   }
 }
 
