@@ -27,7 +27,7 @@ export interface AppPortArea {
 }
 
 /** Which speed "use as flow scale" sends to the boundary-layer march. */
-export type FlowScaleSource = 'ideal speed' | 'mean port speed';
+export type FlowScaleSource = 'ideal speed' | 'bench flow / port area' | 'mean port speed';
 
 /** Fields that take the app's number until the porter types their own. */
 export type FollowingField = 'portArea' | 'valveDiameter';

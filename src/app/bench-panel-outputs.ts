@@ -4,7 +4,7 @@ import {
   dischargeCoefficient, flowInStandardAir, formatQuantity, idealSpeed, inH2OToPa, scaleFlowToTestPressure, speedOfSound,
   STANDARD_DENSITY_KGM3, sutherlandViscosity, testPressureFactor,
 } from '../breathing/index.ts';
-import { REFERENCE_AREA_KEYS, type BenchPanelState } from './bench-panel-model.ts';
+import { REFERENCE_AREA_KEYS, type BenchPanelState, type FlowScaleSource } from './bench-panel-model.ts';
 import { engineRows } from './bench-panel-engine.ts';
 import { AIR_FIELDS, makeRow, roomAir, rowContext, scientific, type OutputRow, type RowContext } from './bench-panel-rows.ts';
 
@@ -50,6 +50,11 @@ function benchRows(ctx: RowContext): OutputRow[] {
       const u = idealSpeed(v.testPressure, roomAir(ctx, v).densityKgM3);
       return { valueSI: u, text: formatQuantity('speed', units.speed, u), note: `√(2 Δp / ρ) at ${testShown(v.testPressure)}` };
     }),
+    // The bench flow spread over the port area: the mean speed the air really has there on the bench.
+    makeRow(ctx, { key: 'bench-port-speed', group: 'bench', label: 'Bench flow / port area' }, ['flow', 'portArea'], (v) => {
+      const u = v.flow / v.portArea;
+      return { valueSI: u, text: formatQuantity('speed', units.speed, u), note: 'mean speed through the port area at the measured flow' };
+    }),
     makeRow(ctx, { key: 'flow-28-sqrt', group: 'bench', label: 'Flow at 28 in H2O, square-root law' }, ['flow', 'testPressure'], (v) => {
       const q = scaleFlowToTestPressure(v.flow, v.testPressure, COMPARE_AT_PA, 'square-root');
       return { valueSI: q, text: flowText(q), note: `× ${testPressureFactor(v.testPressure, COMPARE_AT_PA).toFixed(4)}` };
@@ -81,9 +86,15 @@ function cdRow(ctx: RowContext): OutputRow {
   });
 }
 
+const FLOW_SCALE_ROW: Readonly<Record<FlowScaleSource, string>> = {
+  'ideal speed': 'ideal-speed',
+  'bench flow / port area': 'bench-port-speed',
+  'mean port speed': 'port-speed',
+};
+
 /** The speed "use as flow scale" sends, m/s, with what it is; null while it cannot be had. */
 export function flowScaleSpeed(state: BenchPanelState): { readonly ms: number; readonly label: string } | null {
-  const key = state.flowScale === 'ideal speed' ? 'ideal-speed' : 'port-speed';
+  const key = FLOW_SCALE_ROW[state.flowScale];
   const row = benchOutputs(state).find((r) => r.key === key);
   return row && row.valueSI !== null && row.valueSI > 0 ? { ms: row.valueSI, label: row.label } : null;
 }

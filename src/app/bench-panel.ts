@@ -102,6 +102,7 @@ function resultsBlock(doc: Document, idPrefix: string, signal: AbortSignal, onSp
 
 const SCALE_CHOICES: ReadonlyArray<[FlowScaleSource, string]> = [
   ['ideal speed', 'ideal speed'],
+  ['bench flow / port area', 'bench flow / port area'],
   ['mean port speed', 'mean port speed'],
 ];
 

@@ -168,3 +168,15 @@ describe('inputs a porter can get wrong', () => {
     expect(fieldProblems(s).temperature).toBe('Must lie between −40 °F and 140 °F (room air; check the unit).');
   });
 });
+
+describe('flow scale from the bench', () => {
+  it('bench flow over port area: 1000 L/s through 0.02 m2 is 50 m/s [derived: continuity]', () => {
+    let state = setUnit(initialBenchState(), 'flow', 'L/s');
+    state = typeField(state, 'flow', '1000');
+    state = setPortArea(state, 0.02, 'measured');
+    state = setChoice(state, 'flowScale', 'bench flow / port area');
+    const row = benchOutputs(state).find((r) => r.key === 'bench-port-speed');
+    expectRelClose(row?.valueSI ?? NaN, 50, 1e-12);
+    expectRelClose(flowScaleSpeed(state)?.ms ?? NaN, 50, 1e-12);
+  });
+});
