@@ -63,10 +63,15 @@ export class PartsPanel {
       const value = part?.[field.key];
       controller.show(typeof value === 'number');
       if (typeof value !== 'number') continue;
-      if (field.length) controller.min(field.min * scale).max(field.max * scale).step(field.step * scale);
+      if (field.length) controller.min(field.min * scale).max(field.max * scale).step(roundStep(field.step * scale));
       controller.name(field.length ? `${field.label}, ${doc.units}` : field.label);
       this.values[`${field.part}.${field.key}`] = value;
       controller.updateDisplay();
     }
   }
+}
+
+/** A step of one significant digit (0.0039 in becomes 0.001 in), so the field shows tidy decimals. */
+function roundStep(step: number): number {
+  return 10 ** Math.floor(Math.log10(step));
 }
