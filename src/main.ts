@@ -120,6 +120,7 @@ function solve(doc: PortDocument, cause: ChangeCause): void {
   if (!domain) return;
   // While dragging, draw the field alone: contours, streamlines and flags of the last full solve no longer fit.
   if (cause === 'drag') clearOverlays();
+  view.setInteractive(cause === 'drag');
   view.setWalls(wallLines(domain));
   view.setClip(fluidClip(domain));
   const reading = { units: doc.units, slowFraction: settings.slowFraction, inletMeanSpeedMs: settings.inletSpeedMs };

@@ -68,6 +68,7 @@ export class FieldLayer {
         uGridOrigin: { value: new Vector2() },
         uCellSize: { value: 1 },
         uGridSize: { value: new Vector2(1, 1) },
+        uNearest: { value: false },
       },
       depthTest: false,
       depthWrite: false,
@@ -76,6 +77,11 @@ export class FieldLayer {
     this.object.renderOrder = renderOrder;
     this.object.frustumCulled = false;
     this.object.visible = false;
+  }
+
+  /** Nearest-cell colouring (cheap) while the user drags; smooth masked blending otherwise. */
+  setNearest(nearest: boolean): void {
+    this.object.material.uniforms.uNearest.value = nearest;
   }
 
   /** Upload a new field. NaN cells become value 0 with mask 0; the mask keeps them out of every pixel. */

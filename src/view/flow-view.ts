@@ -78,6 +78,12 @@ export class FlowView {
     this.resize();
   }
 
+  /** While the user drags a point: draw the field cell by cell (cheap) until set back to false. */
+  setInteractive(on: boolean): void {
+    this.scene.setInteractive(on);
+    this.requestRender();
+  }
+
   /** Show a field (or none). Contours and the automatic colour range follow it. Throws RangeError for a field
    * whose values do not fill its grid or that is too large for the GPU; the previous field then stays. */
   setField(field: T.FieldImage | null): void {

@@ -50,10 +50,18 @@ uniform vec2 uRange;
 uniform float uCoverageCut;
 varying vec2 vSection;
 ${MASKED_BILINEAR}
+uniform bool uNearest;
 void main() {
-  vec2 acc = maskedBilinear(uMask, uValues, vSection, true);
-  if (acc.x < uCoverageCut) discard;
-  float v = acc.y / acc.x;
+  float v;
+  // While a point is dragged: one cell per pixel (two fetches), falling back to the masked blend only at walls.
+  ivec2 cell = clamp(ivec2(floor((vSection - uGridOrigin) / uCellSize)), ivec2(0), uGridSize - 1);
+  if (uNearest && texelFetch(uMask, cell, 0).r > 0.5) {
+    v = texelFetch(uValues, cell, 0).r;
+  } else {
+    vec2 acc = maskedBilinear(uMask, uValues, vSection, true);
+    if (acc.x < uCoverageCut) discard;
+    v = acc.y / acc.x;
+  }
   float t = clamp((v - uRange.x) / (uRange.y - uRange.x), 0.0, 1.0);
   // Centre of texel k is at (k + 0.5) / 256: t = 0 and t = 1 land on the first and last entries exactly.
   vec3 colour = texture2D(uColourMap, vec2((t * 255.0 + 0.5) / 256.0, 0.5)).rgb;

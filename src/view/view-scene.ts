@@ -53,6 +53,11 @@ export class ViewScene {
   }
 
   /** Throws RangeError when the grid is larger than this GPU's biggest texture. */
+  /** Cheaper field drawing while a point is dragged. */
+  setInteractive(on: boolean): void {
+    this.field.setNearest(on);
+  }
+
   setField(field: FieldImage | null): void {
     const limit = this.renderer.capabilities.maxTextureSize;
     if (field && Math.max(field.nx, field.ny) > limit) {
