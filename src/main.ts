@@ -72,9 +72,11 @@ const live = new LiveSolve(pool.live, {
   },
   onFailure: (failure) => {
     showIndicator('error', 'not solved');
-    const where = failure.where ? ` (near x = ${failure.where[0].toFixed(1)}, y = ${failure.where[1].toFixed(1)})` : '';
-    status.show(`${failure.message}${failure.message.includes('near') ? '' : where}`, 'error');
+    status.show(failure.message, 'error');
     readings.showStale('This reading belongs to the last shape that solved.');
+    // Where the solver says the trouble is (e.g. where a passage closes), mark it on the section.
+    const markers = failure.where ? [{ x: failure.where[0], y: failure.where[1], label: 'here' }] : [];
+    view.setFlags({ hatched: [], lines: [], markers });
   },
 });
 
@@ -163,7 +165,7 @@ function runCommand(name: CommandName): void {
     case 'fitView': return view.fitToView(sectionBounds(activeSection(store.doc)));
     case 'toggleSnapping':
       settings.snapping = !settings.snapping;
-      gui.controllersRecursive().forEach((c) => c.updateDisplay());
+      refreshSettingsPanel();
       return status.show(settings.snapping ? 'Snapping on.' : 'Snapping off.');
     case 'toggleHelp': helpOverlay.hidden = !helpOverlay.hidden; return;
     case 'save': return status.show(`Saved as ${downloadDocument(store.doc)}.`);
@@ -173,7 +175,7 @@ function runCommand(name: CommandName): void {
   }
 }
 
-const selectionPanel = new SelectionPanel(byId('selection'), (name, args) => variantEdit(name, args, false));
+const selectionPanel = new SelectionPanel(byId('selection'), (name, args) => tryEdit(name, args, false));
 const editor = new EditorController(viewHost, view, store, {
   onCommand: runCommand,
   onMessage: (message, level) => status.show(message, level),
@@ -193,11 +195,13 @@ function applySettings(group: SettingsGroup): void {
   }
 }
 const gui = buildSettingsPanel(byId('settings-host'), settings, applySettings);
+/** The settings object changed from outside the panel (a key, the bench): show its values again. */
+const refreshSettingsPanel = () => gui.controllersRecursive().forEach((c) => c.updateDisplay());
 const bench = mountBenchPanel(byId('bench-host'), {
   units: { length: store.doc.units },
   onInletSpeed: (ms) => {
     settings.inletSpeedMs = ms;
-    gui.controllersRecursive().forEach((c) => c.updateDisplay());
+    refreshSettingsPanel();
     applySettings('reading');
     status.show(`Flow scale for the boundary-layer march set to ${ms.toFixed(1)} m/s from the bench.`);
   },
@@ -210,12 +214,8 @@ function showPartsNumbers(doc: PortDocument, tightestWidth: number | null): void
 }
 
 const partsPanel = new PartsPanel(gui, (part, values) => {
-  try {
-    store.edit('setPart', { part, values });
-  } catch (error) {
-    status.show(error instanceof Error ? error.message : String(error), 'error');
-    partsPanel.update(store.doc);
-  }
+  // A refused value leaves the document as it was; show its numbers again over what was typed.
+  if (!tryEdit('setPart', { part, values }, false)) partsPanel.update(store.doc);
 });
 partsPanel.update(store.doc);
 
@@ -224,24 +224,29 @@ helpOverlay.addEventListener('click', () => (helpOverlay.hidden = true));
 byId('help-button').addEventListener('click', () => runCommand('toggleHelp'));
 byId('open-button').addEventListener('click', () => runCommand('open'));
 byId('save-button').addEventListener('click', () => runCommand('save'));
-variantSelect.addEventListener('change', () => variantEdit('setActiveVariant', { name: variantSelect.value }));
+variantSelect.addEventListener('change', () => tryEdit('setActiveVariant', { name: variantSelect.value }));
 acceptDrops(document.body, fileHandlers);
-byId('copy-variant').addEventListener('click', () => variantEdit('addVariant', {}));
+byId('copy-variant').addEventListener('click', () => tryEdit('addVariant', {}));
 byId('rename-variant').addEventListener('click', () => {
   const to = prompt('New name for this variant', store.doc.activeVariant);
-  if (to !== null) variantEdit('renameVariant', { from: store.doc.activeVariant, to: to.trim() });
+  if (to !== null) tryEdit('renameVariant', { from: store.doc.activeVariant, to: to.trim() });
 });
 byId('delete-variant').addEventListener('click', () => {
-  if (confirm(`Delete the variant "${store.doc.activeVariant}"?`)) variantEdit('deleteVariant', { name: store.doc.activeVariant });
+  if (confirm(`Delete the variant "${store.doc.activeVariant}"?`)) tryEdit('deleteVariant', { name: store.doc.activeVariant });
 });
 
-/** An edit from a button or a typed field; `resetSelection` when indices may no longer mean the same thing. */
-function variantEdit(name: string, args: unknown, resetSelection = true): void {
+/**
+ * An edit from a button or a typed field; a refused one is said in the status line and the document stays.
+ * `resetSelection` when indices may no longer mean the same thing (another variant). True when it was applied.
+ */
+function tryEdit(name: string, args: unknown, resetSelection = true): boolean {
   try {
     store.edit(name, args);
     if (resetSelection) editor.reset();
+    return true;
   } catch (error) {
     status.show(error instanceof Error ? error.message : String(error), 'error');
+    return false;
   }
 }
 

@@ -23,6 +23,8 @@ export class EditorController {
   private state: ToolState = IDLE;
   private beforeDrag: PortDocument | null = null;
   private readonly overlay: HandleOverlay;
+  /** Whether the tool did something with the last event (then a key press is not passed on to the page). */
+  private lastHandled = false;
   insertMode = false;
 
   constructor(
@@ -79,8 +81,6 @@ export class EditorController {
     this.dispatch({ type: 'key', press: { key: ev.key, ctrlKey: ev.ctrlKey, metaKey: ev.metaKey, altKey: ev.altKey, shiftKey: ev.shiftKey } });
     if (this.state !== before || this.lastHandled) ev.preventDefault();
   };
-
-  private lastHandled = false;
 
   private dispatch(event: ToolEvent): void {
     const step = stepTool(this.state, event, this.context());

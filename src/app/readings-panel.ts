@@ -74,6 +74,6 @@ function table(rows: ReadonlyArray<[string, string, string?]>): HTMLElement {
   return t;
 }
 
-export function slug(name: string): string {
+function slug(name: string): string {
   return name.toLowerCase().replace(/[^a-z0-9]+/g, '-');
 }

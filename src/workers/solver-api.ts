@@ -50,7 +50,8 @@ function toReply(id: number, result: SolveResult, reading: FlowReading | null, w
     conductance: result.conductance,
     fluxImbalance: result.fluxImbalance,
     peak: result.peak,
-    walls: result.walls.map((w) => ({ name: w.name, samples: Float64Array.from(w.samples) })),
+    // The result is this reply's alone: its wall samples are sent as they are (transferred, not copied).
+    walls: result.walls.map((w) => ({ name: w.name, samples: w.samples })),
     inletMeanSpeed: result.inletMeanSpeed,
     reading,
     workerMs,
