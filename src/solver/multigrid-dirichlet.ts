@@ -9,6 +9,7 @@
  */
 import type { Stencil } from './assemble.ts';
 import { bilinearWeights, interpolationStrength } from './multigrid-bilinear.ts';
+import { cellResidual } from './multigrid-restrict.ts';
 
 /** Transfer context of one fine level and its coarse level. */
 export interface TransferPair {
@@ -89,17 +90,12 @@ export function correctProlongCell(t: TransferPair, x: Float64Array, coarseX: Fl
  * (the transpose of correctProlongCell). @param x fine padded vector; @param b fine rhs, i + j * nx.
  */
 export function correctRestrictCell(t: TransferPair, x: Float64Array, b: Float64Array, coarseB: Float64Array, m: number): void {
-  const { nx, faceX, faceY, dirichlet } = t.fine;
+  const { nx, dirichlet } = t.fine;
   const k = dirichlet.cells[m];
-  const j = Math.floor(k / nx);
-  const v = k + nx;
-  const fx = k + j;
-  const w = faceX[fx];
-  const e = faceX[fx + 1];
-  const so = faceY[k];
-  const no = faceY[k + nx];
-  const spread = b[k] - ((w + e + so + no) * x[v] - w * x[v - 1] - e * x[v + 1] - so * x[v - nx] - no * x[v + nx]);
-  const r = spread - dirichlet.coupling[m] * x[v];
+  const i = k % nx;
+  const j = (k - i) / nx;
+  const spread = cellResidual(t.fine, x, b, j, i);
+  const r = spread - dirichlet.coupling[m] * x[k + nx];
   for (let q = 4 * m; q < 4 * m + 4; q++) coarseB[t.selfCells[q]] -= t.selfWeights[q] * spread;
   for (let q = t.opStart[m], end = t.opStart[m + 1]; q < end; q++) coarseB[t.opCells[q]] += t.opWeights[q] * r;
 }

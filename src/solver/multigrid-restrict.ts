@@ -59,8 +59,8 @@ function sideWeightOf(strength: Float32Array, rowC: number, rowD: number, I: num
   return 0.75 * strength[rowC + I] + 0.25 * strength[rowD + I];
 }
 
-/** b - A' x at fine cell (i, j), A' without Dirichlet couplings; x padded. */
-function cellResidual(s: Stencil, x: Float64Array, b: Float64Array, j: number, i: number): number {
+/** b - A' x at fine cell (i, j), A' without Dirichlet couplings; x padded, b i + j * nx. */
+export function cellResidual(s: Stencil, x: Float64Array, b: Float64Array, j: number, i: number): number {
   const { nx, faceX, faceY } = s;
   const k = i + j * nx;
   const v = k + nx;

@@ -67,6 +67,8 @@ export interface SolveOptions {
   readonly warmStart?: PotentialField;
   /** Called between iterations; return true to stop early (a newer request superseded this one). */
   readonly shouldStop?: () => boolean;
+  /** Sample the wall speeds (SolveResult.walls); default true. False leaves walls empty, for a quick picture. */
+  readonly wallSpeeds?: boolean;
 }
 
 /** A potential on a grid, for warm starts. */

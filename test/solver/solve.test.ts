@@ -45,6 +45,14 @@ describe('solveFlow', () => {
     }
     expect(result.walls.map((w) => w.name).sort()).toEqual(['long side', 'short side']);
   });
+
+  it('skips the wall speeds when asked, leaving the rest of the result as it was', () => {
+    const full = solveFlow(bend(1, 2, 256), { targetCells: 4096 });
+    const quick = solveFlow(bend(1, 2, 256), { targetCells: 4096, wallSpeeds: false });
+    expect(quick.walls).toEqual([]);
+    expect(quick.phi).toEqual(full.phi);
+    expect(quick.conductance).toBe(full.conductance);
+  });
 });
 
 function catchError(run: () => unknown): unknown {
