@@ -22,6 +22,8 @@ export function colourBarBox(width: number, height: number): { x0: number; y0: n
 export class ColourBar {
   readonly canvas: HTMLCanvasElement;
   private readonly ctx: CanvasRenderingContext2D;
+  /** Arguments of the last draw, to skip redrawing the same panel. */
+  private drawn = '';
 
   constructor(parent: HTMLElement) {
     this.canvas = document.createElement('canvas');
@@ -41,6 +43,13 @@ export class ColourBar {
    * the top 0.5 %, e.g. a sharp corner), the panel says so, because those cells show the top colour.
    */
   draw(range: ValueRange, peak: number, containerHeight: number, pixelRatio: number): void {
+    const clipped = Number.isFinite(peak) && peak > range.max * (1 + 1e-6);
+    const peakText = clipped ? `\u25B2 max ${formatLevel(peak)}` : '';
+    // Each drag step brings a new field, often with the same range (always so with a fixed one): redraw only when
+    // the panel would change.
+    const key = `${range.min} ${range.max} ${peakText} ${containerHeight} ${pixelRatio}`;
+    if (key === this.drawn) return;
+    this.drawn = key;
     const width = COLOUR_BAR.width;
     const height = colourBarHeight(containerHeight);
     this.canvas.width = Math.round(width * pixelRatio);
@@ -55,7 +64,6 @@ export class ColourBar {
     ctx.textAlign = 'left';
     haloText(ctx, COLOUR_BAR_TITLE, 8, 14, LABEL_TEXT, LABEL_FONT);
 
-    const clipped = Number.isFinite(peak) && peak > range.max * (1 + 1e-6);
     const top = 32;
     const bottom = height - (clipped ? 30 : 14);
     const x = 10;
@@ -63,7 +71,7 @@ export class ColourBar {
     this.drawTicks(range, x + COLOUR_BAR.barWidth, top, bottom);
     if (clipped) {
       ctx.textAlign = 'left';
-      haloText(ctx, `\u25B2 max ${formatLevel(peak)}`, 8, height - 12, LABEL_TEXT, SMALL_FONT);
+      haloText(ctx, peakText, 8, height - 12, LABEL_TEXT, SMALL_FONT);
     }
   }
 

@@ -16,9 +16,9 @@ import {
   Vector2,
 } from 'three';
 import { COLOUR_MAP_SIZE, colourMapBytes } from './colour-map.ts';
-import { polygonTriangles } from './polygon-mesh.ts';
+import type { Triangles } from './polygon-mesh.ts';
 import { FIELD_FRAGMENT, SECTION_VERTEX } from './shaders.ts';
-import type { FieldImage, FluidClip, ValueRange } from './types.ts';
+import type { FieldImage, ValueRange } from './types.ts';
 
 /** Without an outline, draw where at least half the bilinear weight is fluid: the edge falls on the cell faces. */
 const COVERAGE_CUT_MASK = 0.5;
@@ -53,7 +53,8 @@ export class FieldLayer {
   private values: DataTexture | null = null;
   private mask: DataTexture | null = null;
   private field: FieldImage | null = null;
-  private clip: FluidClip | null = null;
+  /** Triangles of the fluid outline, kept so a new field (each drag step) does not triangulate again. */
+  private clip: Triangles | null = null;
 
   constructor(renderOrder: number) {
     const material = new ShaderMaterial({
@@ -116,8 +117,8 @@ export class FieldLayer {
     this.rebuildGeometry();
   }
 
-  /** Outline to clip the field to (exact wall edges), or null to clip by the cell mask alone. */
-  setClip(clip: FluidClip | null): void {
+  /** Triangles of the outline to clip the field to (exact wall edges), or null to clip by the cell mask alone. */
+  setClip(clip: Triangles | null): void {
     this.clip = clip;
     this.rebuildGeometry();
   }
@@ -131,9 +132,7 @@ export class FieldLayer {
     const geometry = new BufferGeometry();
     const f = this.field;
     if (f) {
-      const tri = this.clip
-        ? polygonTriangles(this.clip.outer, this.clip.holes)
-        : rectangle(f.x0, f.y0, f.x0 + f.nx * f.h, f.y0 + f.ny * f.h);
+      const tri = this.clip ?? rectangle(f.x0, f.y0, f.x0 + f.nx * f.h, f.y0 + f.ny * f.h);
       geometry.setAttribute('position', new BufferAttribute(tri.positions, 3));
       geometry.setIndex(new BufferAttribute(tri.indices, 1));
     }
@@ -151,7 +150,7 @@ export class FieldLayer {
   }
 }
 
-function rectangle(x0: number, y0: number, x1: number, y1: number): { positions: Float32Array; indices: Uint32Array } {
+function rectangle(x0: number, y0: number, x1: number, y1: number): Triangles {
   return {
     positions: Float32Array.from([x0, y0, 0, x1, y0, 0, x1, y1, 0, x0, y1, 0]),
     indices: Uint32Array.from([0, 1, 2, 0, 2, 3]),

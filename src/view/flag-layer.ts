@@ -16,7 +16,7 @@ import {
 import { LineLayer } from './line-layer.ts';
 import { polygonTriangles, type Triangles } from './polygon-mesh.ts';
 import { HATCH_FRAGMENT, SECTION_VERTEX } from './shaders.ts';
-import type { CellMask, FlagShapes, FluidClip } from './types.ts';
+import type { CellMask, FlagShapes } from './types.ts';
 import { FLAG_LINE_STYLE, FLAG_OUTLINE_STYLE, HATCH } from './view-style.ts';
 
 function hatchMaterial(cellMask: boolean): ShaderMaterial {
@@ -70,7 +70,7 @@ export class FlagLayer {
   private readonly lines: LineLayer;
   private cellTexture: DataTexture | null = null;
   private cellMask: CellMask | null = null;
-  private clip: FluidClip | null = null;
+  private clip: Triangles | null = null;
 
   constructor(renderOrder: number) {
     for (const [k, m] of [this.polygons, this.cells].entries()) {
@@ -85,22 +85,26 @@ export class FlagLayer {
   }
 
   setFlags(flags: FlagShapes): void {
-    this.polygons.geometry.dispose();
-    const tris = flags.hatched.map((p) => polygonTriangles(p, []));
-    this.polygons.geometry = meshGeometry(mergeTriangles(tris));
-    this.polygons.visible = tris.some((t) => t.indices.length > 0);
+    // Empty flags over empty flags (every drag step) rebuild nothing.
+    if (flags.hatched.length > 0 || this.polygons.visible) {
+      this.polygons.geometry.dispose();
+      const tris = flags.hatched.map((p) => polygonTriangles(p, []));
+      this.polygons.geometry = meshGeometry(mergeTriangles(tris));
+      this.polygons.visible = tris.some((t) => t.indices.length > 0);
+    }
     this.outlines.setLines(flags.hatched.map((p) => ({ xy: p.xy, closed: true })));
     this.lines.setLines(flags.lines.map((l) => ({ xy: l.xy, closed: false })));
     this.setCells(flags.hatchedCells ?? null);
   }
 
-  /** Fluid outline: hatched cells are cut to it, so cells straddling a wall do not hatch past the wall. */
-  setClip(clip: FluidClip | null): void {
+  /** Triangles of the fluid outline (or null): hatched cells are cut to it, so they do not hatch past a wall. */
+  setClip(clip: Triangles | null): void {
     this.clip = clip;
-    this.rebuildCellGeometry();
+    if (this.cellMask) this.rebuildCellGeometry();
   }
 
   private setCells(mask: CellMask | null): void {
+    if (mask === null && this.cellMask === null) return;
     this.cellTexture?.dispose();
     this.cellTexture = null;
     this.cellMask = mask;
@@ -134,7 +138,7 @@ export class FlagLayer {
     const x1 = m.x0 + m.nx * m.h;
     const y1 = m.y0 + m.ny * m.h;
     const rect = { xy: Float64Array.from([m.x0, m.y0, x1, m.y0, x1, y1, m.x0, y1]), closed: true };
-    this.cells.geometry = meshGeometry(this.clip ? polygonTriangles(this.clip.outer, this.clip.holes) : polygonTriangles(rect, []));
+    this.cells.geometry = meshGeometry(this.clip ?? polygonTriangles(rect, []));
   }
 
   /** Hatch spacing is in device px in the shader; keep it constant in CSS px on high-DPI screens. */

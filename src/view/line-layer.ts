@@ -64,9 +64,11 @@ export class LineLayer {
     this.object.visible = false;
   }
 
-  /** Replace the lines; the old geometry's GPU buffers are freed. */
+  /** Replace the lines; the old geometry's GPU buffers are freed. Clearing an empty layer costs nothing, since the
+   * app clears contours, streamlines and flags on every drag step. */
   setLines(lines: readonly FlatLine[]): void {
     const positions = segmentPositions(lines);
+    if (positions.length === 0 && !this.object.visible) return;
     this.object.geometry.dispose();
     const geometry = new LineSegmentsGeometry();
     if (positions.length > 0) geometry.setPositions(positions);

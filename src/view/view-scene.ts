@@ -5,6 +5,7 @@ import type { ContourLine } from './contour-lines.ts';
 import { FieldLayer } from './field-layer.ts';
 import { FlagLayer } from './flag-layer.ts';
 import { LineLayer } from './line-layer.ts';
+import { polygonTriangles } from './polygon-mesh.ts';
 import type { FlagShapes, FluidClip, FieldImage, Polyline, ValueRange, ViewLayers, WallLine } from './types.ts';
 import {
   BACKGROUND,
@@ -52,12 +53,12 @@ export class ViewScene {
     for (const g of Object.values(this.groups)) this.scene.add(g);
   }
 
-  /** Throws RangeError when the grid is larger than this GPU's biggest texture. */
   /** Cheaper field drawing while a point is dragged. */
   setInteractive(on: boolean): void {
     this.field.setNearest(on);
   }
 
+  /** Throws RangeError when the grid is larger than this GPU's biggest texture. */
   setField(field: FieldImage | null): void {
     const limit = this.renderer.capabilities.maxTextureSize;
     if (field && Math.max(field.nx, field.ny) > limit) {
@@ -68,9 +69,11 @@ export class ViewScene {
     this.field.setField(field);
   }
 
+  /** The outline is triangulated once here for both the field and the hatched cells. */
   setClip(clip: FluidClip | null): void {
-    this.field.setClip(clip);
-    this.flags.setClip(clip);
+    const tris = clip ? polygonTriangles(clip.outer, clip.holes) : null;
+    this.field.setClip(tris);
+    this.flags.setClip(tris);
   }
 
   setRange(range: ValueRange): void {
