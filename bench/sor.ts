@@ -1,5 +1,5 @@
 /** Plain successive over-relaxation on the solver's stencil: the baseline the multigrid solver is measured against. */
-import type { Stencil } from '../src/solver/assemble.ts';
+import { diagonalOf, type Stencil } from '../src/solver/assemble.ts';
 import { residual } from '../src/solver/pcg-operator.ts';
 
 export interface SorRun {
@@ -37,12 +37,9 @@ export function sor(
 
 /** The stencil's diagonal as a dense array (1 in excluded cells, which SOR then keeps at 0). */
 function denseDiagonal(s: Stencil): Float64Array {
-  const { nx, ny, faceX, faceY, dirichlet } = s;
+  const { nx, ny, dirichlet } = s;
   const diag = new Float64Array(nx * ny);
-  for (let k = 0; k < nx * ny; k++) {
-    const j = Math.floor(k / nx);
-    diag[k] = faceX[k + j] + faceX[k + j + 1] + faceY[k] + faceY[k + nx];
-  }
+  for (let k = 0; k < nx * ny; k++) diag[k] = diagonalOf(s, k, 0);
   for (let m = 0; m < dirichlet.cells.length; m++) diag[dirichlet.cells[m]] += dirichlet.coupling[m];
   for (let k = 0; k < nx * ny; k++) if (diag[k] === 0) diag[k] = 1;
   return diag;

@@ -15,7 +15,7 @@
  * V-cycle residual factors on a square channel were 0.17, 0.35, 0.44 at 32, 128, 512 cells across,
  * against about 0.3 at every size with these (test/solver/multigrid.test.ts).
  */
-import type { Stencil } from './assemble.ts';
+import { diagonalOf, type Stencil } from './assemble.ts';
 
 /** Coarse cells whose diagonal (face sum + coupling) reaches this take full weight; 2 keeps wall and corner cells full. */
 export const FULL_STRENGTH_DIAGONAL = 2;
@@ -25,19 +25,17 @@ export const FULL_STRENGTH_DIAGONAL = 2;
  * weights only (used identically by prolongation and restriction), so single precision is enough.
  */
 export function interpolationStrength(c: Stencil): Float32Array {
-  const { nx, ny, faceX, faceY, active, dirichlet } = c;
+  const { nx, ny, active, dirichlet } = c;
   const out = new Float32Array(nx * ny);
   const scale = 1 / FULL_STRENGTH_DIAGONAL;
   for (let j = 0; j < ny; j++) {
     for (let i = c.rowStart[j], k = i + j * nx, end = c.rowEnd[j]; i < end; i++, k++) {
-      if (active[k] === 1) out[k] = Math.min(1, (faceX[k + j] + faceX[k + j + 1] + faceY[k] + faceY[k + nx]) * scale);
+      if (active[k] === 1) out[k] = Math.min(1, diagonalOf(c, k, 0) * scale);
     }
   }
   for (let m = 0; m < dirichlet.cells.length; m++) {
     const k = dirichlet.cells[m];
-    const j = Math.floor(k / nx);
-    const diag = faceX[k + j] + faceX[k + j + 1] + faceY[k] + faceY[k + nx] + dirichlet.coupling[m];
-    out[k] = Math.min(1, diag * scale);
+    out[k] = Math.min(1, diagonalOf(c, k, dirichlet.coupling[m]) * scale);
   }
   return out;
 }

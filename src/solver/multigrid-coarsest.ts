@@ -1,5 +1,5 @@
 /** Direct solve on the coarsest multigrid level: dense Cholesky over its active cells. */
-import type { Stencil } from './assemble.ts';
+import { diagonalOf, type Stencil } from './assemble.ts';
 import { couplingOf } from './assemble-dirichlet.ts';
 
 /** Factorised coarsest level. */
@@ -49,8 +49,7 @@ function denseMatrix(s: Stencil, index: Int32Array, cells: readonly number[]): F
     const k = cells[r];
     const i = k % nx;
     const j = (k - i) / nx;
-    const fx = k + j;
-    a[r * n + r] = faceX[fx] + faceX[fx + 1] + faceY[k] + faceY[k + nx] + couplingOf(s.dirichlet, k);
+    a[r * n + r] = diagonalOf(s, k, couplingOf(s.dirichlet, k));
     const east = faceX[i + 1 + j * (nx + 1)];
     if (east !== 0) setPair(a, n, r, index[k + 1], -east);
     const north = faceY[k + nx];

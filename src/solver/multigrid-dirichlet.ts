@@ -7,7 +7,7 @@
  * linearly to zero at the boundary. Restriction applies the transpose, so the V-cycle stays symmetric.
  * Both rows (bilinear and operator-dependent) are built once per hierarchy, so a V-cycle only sums them.
  */
-import type { Stencil } from './assemble.ts';
+import { diagonalOf, type Stencil } from './assemble.ts';
 import { bilinearWeights, interpolationStrength } from './multigrid-bilinear.ts';
 import { cellResidual } from './multigrid-restrict.ts';
 
@@ -66,7 +66,7 @@ function jacobiNeighbours(s: Stencil, k: number, coupling: number): [number, num
   const i = k % nx;
   const j = (k - i) / nx;
   const fx = k + j;
-  const d = faceX[fx] + faceX[fx + 1] + faceY[k] + faceY[k + nx] + coupling;
+  const d = diagonalOf(s, k, coupling);
   const out: [number, number, number][] = [];
   if (faceX[fx] !== 0) out.push([i - 1, j, faceX[fx] / d]);
   if (faceX[fx + 1] !== 0) out.push([i + 1, j, faceX[fx + 1] / d]);
