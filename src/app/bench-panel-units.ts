@@ -1,6 +1,6 @@
 /** Display units of the bench panel's fields: the unit table of src/breathing plus room temperature, text in and out. */
 
-import { fromSI, toSI, unitSpec, type UnitChoices } from '../breathing/index.ts';
+import { unitSpec, type UnitChoices, type UnitSpec } from '../breathing/index.ts';
 
 /** Room temperature as typed: degrees Celsius or Fahrenheit (kelvin inside). */
 export type TemperatureUnit = 'C' | 'F';
@@ -38,47 +38,40 @@ export const UNIT_OPTIONS: { readonly [Q in PanelQuantity]: ReadonlyArray<{ valu
 const ZERO_CELSIUS_K = 273.15;
 const KELVIN_PER_FAHRENHEIT = 5 / 9;
 
+/** Kinds whose unit comes from the breathing unit table (everything but temperature and plain numbers). */
+type TableKind = Exclude<FieldKind, 'temperature' | 'plain'>;
+
+/** The table unit a field shows now: area follows length, the barometer has its own pressure choice. */
+function tableUnit(kind: TableKind, units: PanelUnits): UnitSpec {
+  if (kind === 'area') return unitSpec('area', units.length === 'mm' ? 'mm2' : 'in2');
+  if (kind === 'barometer') return unitSpec('pressure', units.barometer);
+  return unitSpec(kind, units[kind] as never);
+}
+
 /** SI value (m, m², m³/s, Pa, K) of a number shown in the field's current unit. */
 export function fieldToSI(kind: FieldKind, units: PanelUnits, shown: number): number {
-  switch (kind) {
-    case 'temperature':
-      return units.temperature === 'C' ? shown + ZERO_CELSIUS_K : (shown - 32) * KELVIN_PER_FAHRENHEIT + ZERO_CELSIUS_K;
-    case 'area':
-      return toSI('area', units.length === 'mm' ? 'mm2' : 'in2', shown);
-    case 'barometer':
-      return toSI('pressure', units.barometer, shown);
-    case 'plain':
-      return shown;
-    default:
-      return toSI(kind, units[kind] as never, shown);
+  if (kind === 'plain') return shown;
+  if (kind === 'temperature') {
+    return units.temperature === 'C' ? shown + ZERO_CELSIUS_K : (shown - 32) * KELVIN_PER_FAHRENHEIT + ZERO_CELSIUS_K;
   }
+  return shown * tableUnit(kind, units).siPerUnit;
 }
 
 /** The number a field shows for an SI value, in its current unit. */
 export function fieldFromSI(kind: FieldKind, units: PanelUnits, valueSI: number): number {
-  switch (kind) {
-    case 'temperature': {
-      const celsius = valueSI - ZERO_CELSIUS_K;
-      return units.temperature === 'C' ? celsius : celsius / KELVIN_PER_FAHRENHEIT + 32;
-    }
-    case 'area':
-      return fromSI('area', units.length === 'mm' ? 'mm2' : 'in2', valueSI);
-    case 'barometer':
-      return fromSI('pressure', units.barometer, valueSI);
-    case 'plain':
-      return valueSI;
-    default:
-      return fromSI(kind, units[kind] as never, valueSI);
+  if (kind === 'plain') return valueSI;
+  if (kind === 'temperature') {
+    const celsius = valueSI - ZERO_CELSIUS_K;
+    return units.temperature === 'C' ? celsius : celsius / KELVIN_PER_FAHRENHEIT + 32;
   }
+  return valueSI / tableUnit(kind, units).siPerUnit;
 }
 
 /** Label of the field's current unit ('' for a plain number). */
 export function fieldUnitLabel(kind: FieldKind, units: PanelUnits): string {
   if (kind === 'plain') return '';
   if (kind === 'temperature') return units.temperature === 'C' ? '°C' : '°F';
-  if (kind === 'area') return unitSpec('area', units.length === 'mm' ? 'mm2' : 'in2').label;
-  if (kind === 'barometer') return unitSpec('pressure', units.barometer).label;
-  return unitSpec(kind, units[kind] as never).label;
+  return tableUnit(kind, units).label;
 }
 
 /** The switchable quantity whose select drives a field's unit (area follows length), or null. */
