@@ -2,17 +2,12 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { DocumentError } from '../../src/document/errors.ts';
 import { MAX_JSON_DEPTH, lineAndColumn, readJson } from '../../src/document/json-read.ts';
+import { documentErrorOf } from './document-error.ts';
 
 const HOSTILE = /"(__proto__|constructor|prototype)"/;
 
 function messageOf(text: string): string {
-  try {
-    readJson(text);
-  } catch (error) {
-    expect(error).toBeInstanceOf(DocumentError);
-    return (error as Error).message;
-  }
-  throw new Error(`expected ${JSON.stringify(text)} to be refused`);
+  return documentErrorOf(() => readJson(text)).message;
 }
 
 describe('readJson agrees with JSON.parse', () => {

@@ -1,26 +1,15 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { DocumentError } from '../../src/document/errors.ts';
 import { loadDocument, readDocument, saveDocument } from '../../src/document/load.ts';
 import { MAX_FILE_BYTES } from '../../src/document/limits.ts';
 import { FORMAT_VERSION, type PortDocument } from '../../src/document/types.ts';
 import { documentArb } from './arbitraries.ts';
+import { documentErrorOf } from './document-error.ts';
 
 const samplePath = (name: string) => new URL(`../../samples/${name}`, import.meta.url);
 const SAMPLES = ['street-tight-short-side.json', 'street-generous-short-side.json', 'short-side-compare.json'];
 const tight = (): PortDocument => loadDocument(readFileSync(samplePath(SAMPLES[0]), 'utf8'));
-
-/** The DocumentError `fn` throws (fails the test if it throws anything else or nothing). */
-function documentErrorOf(fn: () => unknown): DocumentError {
-  try {
-    fn();
-  } catch (error) {
-    expect(error).toBeInstanceOf(DocumentError);
-    return error as DocumentError;
-  }
-  throw new Error('expected a DocumentError, nothing was thrown');
-}
 
 describe('save then load', () => {
   it.each(SAMPLES)('gives back the same document and the same text for %s', (name) => {

@@ -1,19 +1,9 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { DocumentError } from '../../src/document/errors.ts';
 import { loadDocument, readDocument, saveDocument } from '../../src/document/load.ts';
 import { MIGRATIONS } from '../../src/document/migrations.ts';
 import { FORMAT_VERSION } from '../../src/document/types.ts';
-
-function documentErrorOf(fn: () => unknown): DocumentError {
-  try {
-    fn();
-  } catch (error) {
-    expect(error).toBeInstanceOf(DocumentError);
-    return error as DocumentError;
-  }
-  throw new Error('expected a DocumentError, nothing was thrown');
-}
+import { documentErrorOf } from './document-error.ts';
 
 const fixture = (name: string): string => readFileSync(new URL(`../fixtures/${name}`, import.meta.url), 'utf8');
 
@@ -33,14 +23,9 @@ describe('format version 1', () => {
     const v1 = JSON.parse(fixture('section-v1.json'));
     v1.section.outline.vertices[2].filletRadius = -1;
     v1.variants = [];
-    try {
-      loadDocument(JSON.stringify(v1));
-      throw new Error('expected a DocumentError');
-    } catch (error) {
-      expect(error).toBeInstanceOf(DocumentError);
-      expect((error as Error).message).toContain('section.outline.vertices[2].filletRadius: must be a number >= 0');
-      expect((error as Error).message).toContain('variants: is not a field');
-    }
+    const { message } = documentErrorOf(() => loadDocument(JSON.stringify(v1)));
+    expect(message).toContain('section.outline.vertices[2].filletRadius: must be a number >= 0');
+    expect(message).toContain('variants: is not a field');
   });
 
   it('is refused when it has a version-2 field mixed in', () => {

@@ -2,8 +2,8 @@
 
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { DocumentError } from '../../src/document/errors.ts';
 import { loadDocument, saveDocument } from '../../src/document/load.ts';
+import { documentErrorOf } from './document-error.ts';
 
 /** A parsed file, edited freely to break it. */
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
@@ -11,13 +11,7 @@ type Json = Record<string, any>;
 const sampleJson = (): Json => JSON.parse(readFileSync(new URL('../../samples/street-tight-short-side.json', import.meta.url), 'utf8'));
 
 function refusal(doc: Json): string {
-  try {
-    loadDocument(JSON.stringify(doc));
-  } catch (error) {
-    expect(error).toBeInstanceOf(DocumentError);
-    return (error as Error).message;
-  }
-  throw new Error('expected the file to be refused');
+  return documentErrorOf(() => loadDocument(JSON.stringify(doc))).message;
 }
 
 describe('parts in a section file', () => {
