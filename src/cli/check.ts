@@ -5,7 +5,7 @@ import type { PortDocument, Variant } from '../document/types.ts';
 import { EXIT_OK, EXIT_USER_ERROR, type CliIO, type Command } from './command.ts';
 import { UserError } from './errors.ts';
 import { readSectionText } from './read-file.ts';
-import { summariseSection, type SectionSummary } from './section-summary.ts';
+import { summariseVariant, type SectionSummary } from './section-summary.ts';
 
 export const checkCommand: Command = {
   name: 'check',
@@ -26,7 +26,7 @@ function checkFile(path: string, io: CliIO): number {
   io.out(`  variants: ${document.variants.length}, active: "${document.activeVariant}"`);
   const broken: string[] = [];
   for (const variant of document.variants) {
-    const summary = summariseSection(variant.section, document.units);
+    const summary = summariseVariant(variant, document.units);
     printVariant(variant, summary, document, io);
     if (summary.problems.length > 0) broken.push(variant.name);
   }

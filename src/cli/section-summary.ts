@@ -1,7 +1,9 @@
-/** The facts `check` reports about one section: edge counts, islands, walls, and the fluid area from the geometry kernel. */
+/** The facts `check` reports about one variant: edge counts, islands, walls, and the fluid area from the geometry kernel. */
 
-import type { Section } from '../document/types.ts';
-import { GeometryError, defaultTolerance, regionArea, sectionToDomain } from '../geometry/index.ts';
+import type { Variant } from '../document/types.ts';
+import { GeometryError, regionArea } from '../geometry/index.ts';
+import { PartsError } from '../parts/index.ts';
+import { variantDomain } from './variant-domain.ts';
 
 export interface SectionSummary {
   readonly outlineEdges: number;
@@ -17,8 +19,13 @@ export interface SectionSummary {
   readonly problems: readonly string[];
 }
 
-/** Summarises `section`; geometry problems are reported, not thrown (any other error is a fault and is thrown). */
-export function summariseSection(section: Section, units: string): SectionSummary {
+/**
+ * Summarises `variant`: counts of the section as stored in the file; walls, area and problems of the domain `solve`
+ * would solve (parts regenerated), so check and solve agree. Geometry and parts problems are reported, not thrown
+ * (any other error is a fault and is thrown).
+ */
+export function summariseVariant(variant: Variant, units: string): SectionSummary {
+  const section = variant.section;
   const roles = section.outline.edges.map((edge) => edge.role);
   const inletEdges = roles.filter((role) => role === 'inlet').length;
   const outletEdges = roles.filter((role) => role === 'outlet').length;
@@ -28,11 +35,11 @@ export function summariseSection(section: Section, units: string): SectionSummar
   let wallNames: readonly string[] = [];
   let fluidArea: number | undefined;
   try {
-    const domain = sectionToDomain(section, defaultTolerance(section), units);
+    const domain = variantDomain(variant, units);
     wallNames = domain.wallNames;
     fluidArea = regionArea(domain);
   } catch (error) {
-    if (!(error instanceof GeometryError)) throw error;
+    if (!(error instanceof GeometryError) && !(error instanceof PartsError)) throw error;
     problems.push(error.message);
   }
   return {

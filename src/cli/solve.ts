@@ -1,9 +1,9 @@
 /** `portwright solve FILE`: solves one variant's ideal flow headless and prints the flow reading, readable or as JSON. */
 
 import { DocumentError, loadDocument, type PortDocument, type Variant } from '../document/index.ts';
-import { GeometryError, defaultTolerance, sectionToDomain } from '../geometry/index.ts';
+import { GeometryError } from '../geometry/index.ts';
 import { DEFAULT_MAX_ITERATIONS, DEFAULT_TOLERANCE, FlowSetupError, solveFlow, type FlowDomain } from '../solver/index.ts';
-import { PartsError, breathingSummary, partsNotes, sectionForSolver } from '../parts/index.ts';
+import { PartsError, breathingSummary, partsNotes } from '../parts/index.ts';
 import { readFlow, readingSummary } from '../solver/reading/index.ts';
 import { EXIT_OK, type CliIO, type Command } from './command.ts';
 import { UserError } from './errors.ts';
@@ -12,6 +12,7 @@ import { readSectionText } from './read-file.ts';
 import { SOLVE_ARGS, parseSolveArgs, type SolveArgs } from './solve-args.ts';
 import { buildSolveReport, type SolvedVariant } from './solve-report.ts';
 import { solveReportLines } from './solve-text.ts';
+import { variantDomain } from './variant-domain.ts';
 
 /** From this many grid cells a solve takes seconds, so solve says on stderr that it has started. */
 export const PROGRESS_CELLS = 1_000_000;
@@ -67,9 +68,7 @@ function chooseVariant(document: PortDocument, options: SolveArgs): Variant {
 
 function toDomain(variant: Variant, document: PortDocument, where: string): FlowDomain {
   try {
-    // Regenerate the parts: a hand-edited file's stored geometry may no longer match its numbers.
-    const section = sectionForSolver(variant);
-    return sectionToDomain(section, defaultTolerance(section), document.units);
+    return variantDomain(variant, document.units);
   } catch (error) {
     if (!(error instanceof GeometryError) && !(error instanceof PartsError)) throw error;
     throw new UserError(`${where}: ${error.message}`);

@@ -38,6 +38,17 @@ describe('check (in process)', () => {
     expect(err + out).not.toMatch(STACK_LINE);
   });
 
+  it('judges the parts as solve regenerates them, not only the stored geometry', async () => {
+    const doc = sample();
+    // A test bore narrower than the 46 mm valve: the stored section still looks fine, the parts cannot be made.
+    doc.variants[0].parts.bore.diameter = 40;
+    const { code, out, err } = await check(tmp.write('narrow-bore.json', JSON.stringify(doc)));
+    expect(code).toBe(1);
+    expect(out).toMatch(/problem: .*bore/);
+    expect(out).not.toContain('fluid area');
+    expect(err).toContain('1 of 1 variant cannot be solved');
+  });
+
   it('says when there is no outlet', async () => {
     const doc = sample();
     doc.variants[0].section.outline.edges[11] = { kind: 'line', role: 'wall' };
