@@ -4,15 +4,11 @@ import {
   crossoverLift,
   greatestRestriction,
   stageBoundaries,
-  type SeatCut,
-  type ValveHead,
 } from '../../src/breathing/valve.ts';
 import { expectRoundsTo } from './close.ts';
+import { mm, mm2, seatAt, valve } from './valve-fixture.ts';
 
-const mm = 1e-3;
-const mm2 = 1e-6;
-const valve: ValveHead = { headDiameterM: 40 * mm, stemDiameterM: 7 * mm };
-const seat: SeatCut = { angleDeg: 45, widthM: 1.5 * mm, throatDiameterM: 34 * mm };
+const seat = seatAt(45);
 const ports = { 'pushrod pinch': 700 * mm2, 'manifold face': 1100 * mm2 };
 
 describe('greatestRestriction', () => {

@@ -9,15 +9,9 @@ import {
   throatForPercent,
   throatPercent,
   valveHeadArea,
-  type SeatCut,
-  type ValveHead,
 } from '../../src/breathing/valve.ts';
 import { expectRoundsTo } from './close.ts';
-
-const mm = 1e-3;
-const mm2 = 1e-6;
-const valve: ValveHead = { headDiameterM: 40 * mm, stemDiameterM: 7 * mm };
-const seatAt = (angleDeg: number): SeatCut => ({ angleDeg, widthM: 1.5 * mm, throatDiameterM: 34 * mm });
+import { mm, mm2, seatAt, valve } from './valve-fixture.ts';
 
 // Check table: REFERENCES.md 3a [derived] from Heywood, Internal Combustion Engine Fundamentals, 1988, sec. 6.3.1.
 describe('Heywood three-stage minimum flow area, D_v 40, w 1.5, D_p 34, D_s 7 mm', () => {
@@ -87,7 +81,7 @@ describe('Heywood three-stage minimum flow area, D_v 40, w 1.5, D_p 34, D_s 7 mm
   });
 
   it('a throat too small for stage 2 goes from stage 1 straight to stage 3, still without a jump', () => {
-    const tight: SeatCut = { angleDeg: 45, widthM: 1.5 * mm, throatDiameterM: 16 * mm };
+    const tight = seatAt(45, 16 * mm);
     const b = stageBoundaries(valve, tight);
     expect(b.stage1EndM).toBe(b.stage3StartM);
     const below = minValveFlowArea(b.stage3StartM * (1 - 1e-9), valve, tight);

@@ -1,15 +1,10 @@
 // The bands checked here are common practice (REFERENCES.md 3a [practice]; 85-95 % and L/D 0.35 from the brief),
 // not published values: the tests pin which band a throat falls in, not the wisdom of the band.
 import { describe, expect, it } from 'vitest';
-import { seatPracticeNotes, throatForPercent, type ValveHead } from '../../src/breathing/valve.ts';
+import { seatPracticeNotes, throatForPercent } from '../../src/breathing/valve.ts';
+import { mm, seatAt, valve } from './valve-fixture.ts';
 
-const mm = 1e-3;
-const valve: ValveHead = { headDiameterM: 40 * mm, stemDiameterM: 7 * mm };
-const seatWithThroat = (percent: number) => ({
-  angleDeg: 45,
-  widthM: 1.5 * mm,
-  throatDiameterM: throatForPercent(valve.headDiameterM, percent),
-});
+const seatWithThroat = (percent: number) => seatAt(45, throatForPercent(valve.headDiameterM, percent));
 const codesAt = (percent: number, liftM?: number) =>
   seatPracticeNotes(valve, seatWithThroat(percent), liftM).map((n) => `${n.level}:${n.code}`);
 

@@ -52,16 +52,23 @@ function measure(valve: ValvePart, seat: SeatPart, anchorY = 8) {
   };
 }
 
+type RingMeasures = ReturnType<typeof measure>['rings'][number];
+
+/** Both rings have these seat width (document units) and seat, bottom-cut and top-cut angles (deg). */
+function expectRings(m: ReturnType<typeof measure>, want: RingMeasures): void {
+  for (const ring of m.rings) {
+    assertInDelta(ring.seatWidth, want.seatWidth);
+    assertInDelta(ring.seatAngle, want.seatAngle);
+    assertInDelta(ring.bottomCut, want.bottomCut);
+    assertInDelta(ring.topCut, want.topCut);
+  }
+}
+
 describe('seat rings', () => {
   it('have the throat, seat width and angles they were given, on both sides', () => {
     const m = measure(VALVE_40, SEAT_91);
     assertInDelta(m.throat, 36.4, 1e-9);
-    for (const ring of m.rings) {
-      assertInDelta(ring.seatWidth, 1.5);
-      assertInDelta(ring.seatAngle, 45);
-      assertInDelta(ring.bottomCut, 60);
-      assertInDelta(ring.topCut, 30);
-    }
+    expectRings(m, { seatWidth: 1.5, seatAngle: 45, bottomCut: 60, topCut: 30 });
     // The seat face's outer edges lie on the gauge line, a valve diameter apart, centred on the throat.
     assertInDelta(m.gaugeLength, 40);
     assertInDelta(m.throatMiddle, m.gaugeMiddle);
@@ -82,12 +89,7 @@ describe('seat rings', () => {
     // Opening down and toward +x at 12 deg: the axis read from the throat walls leans 12 deg from the vertical.
     assertInDelta(angleTo({ a: [0, 0], b: m.axisDir }, [0, 1]), 12, 1e-9);
     assertInDelta(m.throat, 36.4, 1e-9);
-    for (const ring of m.rings) {
-      assertInDelta(ring.seatWidth, 1.2);
-      assertInDelta(ring.seatAngle, 45);
-      assertInDelta(ring.bottomCut, 65);
-      assertInDelta(ring.topCut, 35);
-    }
+    expectRings(m, { seatWidth: 1.2, seatAngle: 45, bottomCut: 65, topCut: 35 });
   });
 
   it('moves the throat toward the side the offset names, by its share of the throat radius', () => {

@@ -1,13 +1,16 @@
 /** The cell potential carried a little way into the solid, and sampled anywhere by bilinear interpolation. */
 import type { CutGrid } from '../types.ts';
 
+/** Only the lattice is read (not the cut-cell fractions), so any cell-centred field on a grid can be sampled. */
+export type CellLattice = Pick<CutGrid, 'nx' | 'ny' | 'h' | 'x0' | 'y0'>;
+
 /**
  * A copy of `phi` (row-major i + j * nx, NaN where not solved) with `layers` rings of cells outside the solved
  * region filled, each with the mean of its already-filled edge neighbours. The copy lets equipotential lines and
  * interpolation run up to (and past) a wall, where they are clipped; the mean of the neighbours is a zero normal
  * gradient, which is what a wall imposes, so an equipotential reaches the wall square-on as it should.
  */
-export function extendedPhi(grid: CutGrid, phi: Float64Array, layers = 2): Float64Array {
+export function extendedPhi(grid: Pick<CutGrid, 'nx' | 'ny'>, phi: Float64Array, layers = 2): Float64Array {
   const { nx, ny } = grid;
   const out = Float64Array.from(phi);
   const next = new Float64Array(out.length);
@@ -36,7 +39,7 @@ export function extendedPhi(grid: CutGrid, phi: Float64Array, layers = 2): Float
  * remaining weights are rescaled; NaN when all four are NaN or the point is off the grid.
  * @param values row-major i + j * nx, cell centres at (x0 + (i + 0.5) h, y0 + (j + 0.5) h)
  */
-export function sampleCells(grid: CutGrid, values: Float64Array, x: number, y: number): number {
+export function sampleCells(grid: CellLattice, values: Float64Array, x: number, y: number): number {
   const { nx, ny, h } = grid;
   const u = (x - grid.x0) / h - 0.5;
   const v = (y - grid.y0) / h - 0.5;
