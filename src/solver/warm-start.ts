@@ -1,4 +1,5 @@
 /** Starting guess for the solve from an earlier potential on any grid (coarser, finer or shifted). */
+import { sampleCells } from './reading/field.ts';
 import type { CutGrid, PotentialField } from './types.ts';
 
 /** Guess where the earlier field has no valid cell near: midway between inlet (1) and outlet (0). */
@@ -16,39 +17,24 @@ export function warmStartGuess(field: PotentialField, grid: CutGrid, mask: Uint8
   const { nx, ny, h, x0, y0 } = grid;
   const usable = field.phi.length === field.nx * field.ny && field.h > 0;
   for (let j = 0; j < ny; j++) {
-    const v = (y0 + (j + 0.5) * h - field.y0) / field.h - 0.5;
+    const y = y0 + (j + 0.5) * h;
     for (let i = 0; i < nx; i++) {
       const k = i + j * nx;
       if (mask[k] !== 1) {
         x[k] = 0;
         continue;
       }
-      const u = (x0 + (i + 0.5) * h - field.x0) / field.h - 0.5;
-      const guess = usable ? sample(field, u, v) : FALLBACK_POTENTIAL;
+      const guess = usable ? sample(field, x0 + (i + 0.5) * h, y) : FALLBACK_POTENTIAL;
       x[k] = Math.min(1, Math.max(0, guess));
     }
   }
 }
 
-/** Old potential at fractional old-cell coordinates (u, v) (cell centres at integers). */
-function sample(f: PotentialField, u: number, v: number): number {
-  const i0 = Math.floor(u);
-  const j0 = Math.floor(v);
-  const tx = u - i0;
-  const ty = v - j0;
-  let sum = 0;
-  let weight = 0;
-  for (let dj = 0; dj <= 1; dj++) {
-    for (let di = 0; di <= 1; di++) {
-      const value = at(f, i0 + di, j0 + dj);
-      if (Number.isNaN(value)) continue;
-      const w = (di === 1 ? tx : 1 - tx) * (dj === 1 ? ty : 1 - ty);
-      sum += w * value;
-      weight += w;
-    }
-  }
-  if (weight > 1e-9) return sum / weight;
-  return nearest(f, Math.round(u), Math.round(v));
+/** Old potential at (x, y), length units: bilinear over its valid cells, else the nearest valid cell near. */
+function sample(f: PotentialField, x: number, y: number): number {
+  const value = sampleCells(f, f.phi, x, y);
+  if (!Number.isNaN(value)) return value;
+  return nearest(f, Math.round((x - f.x0) / f.h - 0.5), Math.round((y - f.y0) / f.h - 0.5));
 }
 
 function nearest(f: PotentialField, ic: number, jc: number): number {
