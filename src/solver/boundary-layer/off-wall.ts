@@ -23,8 +23,8 @@ export function offWallStretch(
   return offWall;
 }
 
-/** Edge speed at arc length s, linear in the segment ending at sample `index`. */
-function speedAtArc(sM: Float64Array, speedMs: Float64Array, s: number, index: number): number {
+/** Edge speed at arc length s, linear in the segment ending at sample `index` (the first at or after s). */
+export function speedAtArc(sM: Float64Array, speedMs: Float64Array, s: number, index: number): number {
   if (index === 0 || sM[index] <= s) return speedMs[index];
   const t = (s - sM[index - 1]) / (sM[index] - sM[index - 1]);
   return speedMs[index - 1] + t * (speedMs[index] - speedMs[index - 1]);

@@ -1,6 +1,7 @@
 /** The boundary-layer march on one stretch of wall, in the reading's units: where the layer leaves and where it is off. */
 import { marchWall, type WallMarch } from '../boundary-layer/march.ts';
-import { offWallStretch } from '../boundary-layer/off-wall.ts';
+import { offWallStretch, speedAtArc } from '../boundary-layer/off-wall.ts';
+import { firstSampleAtOrAfter } from '../boundary-layer/wall-samples.ts';
 import type { ReadingSettings } from './options.ts';
 import type { DetachmentMethod, WallDetachmentReading, WallPoint } from './types.ts';
 
@@ -62,7 +63,7 @@ export function marchStretch(wall: WallColumns, from: number, start: LayerStart,
     offWall: stretches(wall.s.subarray(from), off, detachment?.s ?? Infinity),
     thetaEndM: march.theta[march.theta.length - 1],
     turbulentEnd: state === 'turbulent' || march.transitionSM !== null,
-    detachmentSpeedMs: first ? speedAt(sM, speedMs, first.sM, first.index) : null,
+    detachmentSpeedMs: first ? speedAtArc(sM, speedMs, first.sM, first.index) : null,
     offAtEnd: off[off.length - 1] === 1,
   };
 }
@@ -72,8 +73,7 @@ function firstDetachment(march: WallMarch, sM: Float64Array): { sM: number; inde
   const own = march.detachment;
   const stratford = march.stratford;
   if (stratford && (!own || stratford.sM < own.sM)) {
-    let index = 0;
-    while (index < sM.length - 1 && sM[index] < stratford.sM) index++;
+    const index = firstSampleAtOrAfter(sM, stratford.sM);
     return { sM: stratford.sM, index, method: 'stratford', shapeFactor: march.shapeFactor[index] };
   }
   return own ? { sM: own.sM, index: own.index, method: own.method, shapeFactor: own.shapeFactor } : null;
@@ -98,13 +98,6 @@ function pointAt(wall: WallColumns, s: number): WallPoint {
   while (k < n - 2 && wall.s[k + 1] < s) k++;
   const t = Math.min(1, Math.max(0, (s - wall.s[k]) / (wall.s[k + 1] - wall.s[k])));
   return { s, x: wall.x[k] + t * (wall.x[k + 1] - wall.x[k]), y: wall.y[k] + t * (wall.y[k + 1] - wall.y[k]) };
-}
-
-/** Speed at arc length s, linear in the segment that ends at sample `index`. */
-function speedAt(sM: Float64Array, speedMs: Float64Array, s: number, index: number): number {
-  if (index === 0 || sM[index] <= s) return speedMs[index];
-  const t = (s - sM[index - 1]) / (sM[index] - sM[index - 1]);
-  return speedMs[index - 1] + t * (speedMs[index] - speedMs[index - 1]);
 }
 
 /** Runs of marked samples as [sStart, sEnd]; a run holding the detachment starts at the detachment itself. */
