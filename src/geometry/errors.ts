@@ -40,29 +40,17 @@ export interface GeometryErrorDetail {
   readonly largestRadius?: number;
 }
 
+/** The detail's fields sit on the error itself (declared once, in GeometryErrorDetail). */
+export interface GeometryError extends GeometryErrorDetail {}
+
 export class GeometryError extends Error {
   readonly code: GeometryErrorCode;
-  readonly where?: Point;
-  readonly edgeIndex?: number;
-  readonly otherEdgeIndex?: number;
-  readonly vertexIndex?: number;
-  readonly islandName?: string;
-  readonly otherIslandName?: string;
-  readonly radius?: number;
-  readonly largestRadius?: number;
 
   constructor(code: GeometryErrorCode, message: string, detail: GeometryErrorDetail = {}) {
     super(message);
     this.name = 'GeometryError';
     this.code = code;
-    this.where = detail.where;
-    this.edgeIndex = detail.edgeIndex;
-    this.otherEdgeIndex = detail.otherEdgeIndex;
-    this.vertexIndex = detail.vertexIndex;
-    this.islandName = detail.islandName;
-    this.otherIslandName = detail.otherIslandName;
-    this.radius = detail.radius;
-    this.largestRadius = detail.largestRadius;
+    Object.assign(this, detail);
   }
 }
 
