@@ -220,6 +220,33 @@ describe('flow view in a browser', () => {
     expect(r.same).toBe(true);
   });
 
+  it('clears contours, streamlines and flags as a drag step does, again and again, and draws them back the same', async () => {
+    const r = await inPage(async (h) => {
+      const o = h.overlays;
+      const differing = (a: number[], b: number[]) => a.reduce((n, v, k) => n + (v === b[k] ? 0 : 1), 0);
+      const dragStep = () => {
+        h.view.setContourLevels([]);
+        h.view.setStreamlines([]);
+        h.view.setFlags({ hatched: [], lines: [], markers: [] });
+        h.view.setClip(o.clip);
+      };
+      const full = h.pixels().data;
+      dragStep();
+      const cleared = h.pixels().data;
+      dragStep();
+      dragStep();
+      const clearedAgain = h.pixels().data;
+      h.view.setContourLevels(o.levels);
+      h.view.setStreamlines(o.streamlines);
+      h.view.setFlags(o.flags);
+      const restored = h.pixels().data;
+      return { overlaysDrawn: differing(full, cleared), repeatDiff: differing(cleared, clearedAgain), restoreDiff: differing(full, restored) };
+    });
+    expect(r.overlaysDrawn).toBeGreaterThan(1000);
+    expect(r.repeatDiff).toBe(0);
+    expect(r.restoreDiff).toBe(0);
+  });
+
   it('frees every GPU object on dispose and leaves the container empty, with no errors', async () => {
     const result = await inPage((h) => {
       const before = h.view.diagnostics.memory;

@@ -37,12 +37,19 @@ function demoFlags(): FlagShapes {
 }
 
 const container = document.getElementById('view')!;
-const view = new FlowView(container, { units: 'mm', contourLevels: [0.8, 0.9, 1.0, 1.1, 1.2, 1.3, 1.4] });
+/** What the app clears on every drag step and sets again after a full solve. */
+const overlays = {
+  levels: [0.8, 0.9, 1.0, 1.1, 1.2, 1.3, 1.4],
+  clip: bendClip(bend),
+  streamlines: [midStreamline],
+  flags: demoFlags(),
+};
+const view = new FlowView(container, { units: 'mm', contourLevels: overlays.levels });
 view.setField(bendField(bend, H));
-view.setClip(bendClip(bend));
+view.setClip(overlays.clip);
 view.setWalls(bendWalls(bend));
-view.setStreamlines([midStreamline]);
-view.setFlags(demoFlags());
+view.setStreamlines(overlays.streamlines);
+view.setFlags(overlays.flags);
 view.renderNow();
 
 /** Every pixel of the composed picture (device px), RGBA bytes row by row from the top. */
@@ -76,4 +83,4 @@ function nextFrame(): Promise<void> {
   return new Promise((resolve) => requestAnimationFrame(() => requestAnimationFrame(() => resolve())));
 }
 
-Object.assign(window, { harness: { view, bend, container, sample, pixels, glError, nextFrame, ready: true } });
+Object.assign(window, { harness: { view, bend, overlays, container, sample, pixels, glError, nextFrame, ready: true } });
