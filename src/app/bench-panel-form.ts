@@ -39,7 +39,7 @@ const GROUPS: ReadonlyArray<{ title: string; fields: readonly FieldKey[]; choice
 ];
 
 const HUMIDITY_MODELS: ReadonlyArray<[HumidAirModel, string]> = [['cipm-2007', 'CIPM-2007'], ['ideal-mixture', 'ideal mixture']];
-export const REFERENCE_AREAS: readonly ReferenceArea[] = ['curtain', 'throat', 'valve head'];
+const REFERENCE_AREAS: readonly ReferenceArea[] = ['curtain', 'throat', 'valve head'];
 
 /** Builds the form; listeners end when `signal` aborts. */
 export function buildForm(doc: Document, idPrefix: string, state: BenchPanelState, signal: AbortSignal, on: FormHandlers) {

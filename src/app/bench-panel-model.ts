@@ -121,7 +121,7 @@ export function setChoice<K extends 'humidityModel' | 'referenceArea' | 'flowSca
 }
 
 /** A test pressure above this share of the barometer is no flow bench's: most likely a unit slip. */
-export const MAX_TEST_PRESSURE_SHARE = 0.25;
+const MAX_TEST_PRESSURE_SHARE = 0.25;
 
 /** What is wrong with each field, in its own unit; fields not listed are usable or empty. */
 export function fieldProblems(state: BenchPanelState): Partial<Record<FieldKey, string>> {

@@ -9,7 +9,7 @@ import { engineRows } from './bench-panel-engine.ts';
 import { AIR_FIELDS, makeRow, roomAir, rowContext, scientific, type OutputRow, type RowContext } from './bench-panel-rows.ts';
 
 /** Flows are compared at 28 in H2O, the trade's usual test pressure, Pa. */
-export const COMPARE_AT_PA = inH2OToPa(28);
+const COMPARE_AT_PA = inH2OToPa(28);
 
 const MODEL_NAMES = { 'cipm-2007': 'CIPM-2007 humid air', 'ideal-mixture': 'ideal mixture of dry air and vapour' } as const;
 

@@ -6,10 +6,10 @@ import { formatLevel, haloText } from './overlay-draw.ts';
 import type { ValueRange } from './types.ts';
 import { COLOUR_BAR, LABEL_FONT, LABEL_TEXT, SMALL_FONT } from './view-style.ts';
 
-export const COLOUR_BAR_TITLE = 'speed ratio';
+const COLOUR_BAR_TITLE = 'speed ratio';
 
 /** Height of the colour bar panel in a container `containerHeight` CSS px tall. */
-export function colourBarHeight(containerHeight: number): number {
+function colourBarHeight(containerHeight: number): number {
   return Math.max(120, Math.min(COLOUR_BAR.maxHeight, containerHeight * 0.55));
 }
 

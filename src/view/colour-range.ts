@@ -4,7 +4,7 @@ import type { ColourRange, ValueRange } from './types.ts';
 
 /** Share of fluid cells at or below the top of the automatic scale. A sharp convex corner has an unbounded speed
  * in ideal flow; taking a high percentile rather than the peak keeps one cell from washing out the whole scale. */
-export const AUTO_RANGE_QUANTILE = 0.995;
+const AUTO_RANGE_QUANTILE = 0.995;
 
 /**
  * The q-quantile (0..1) of the finite values, by the nearest-rank rule; NaN when there are none.

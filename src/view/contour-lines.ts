@@ -22,7 +22,7 @@ const PAD = 2;
  * bending it along the wall; clipping cuts it where the fluid ends. Cells further out stay NaN, which d3-contour
  * treats as below every level. Layout: row-major i + j * (nx + 2 PAD), cell (i, j) of the field at (i + PAD, j + PAD).
  */
-export function paddedForContours(field: FieldImage): Float64Array {
+function paddedForContours(field: FieldImage): Float64Array {
   const { nx, ny, values } = field;
   const px = nx + 2 * PAD;
   const py = ny + 2 * PAD;

@@ -17,8 +17,8 @@ import type {
   WallLine,
 } from './types.ts';
 
-export const NO_FLAGS: FlagShapes = { hatched: [], hatchedCells: null, lines: [], markers: [] };
-export const ALL_LAYERS: ViewLayers = { field: true, contours: true, streamlines: true, walls: true, flags: true };
+const NO_FLAGS: FlagShapes = { hatched: [], hatchedCells: null, lines: [], markers: [] };
+const ALL_LAYERS: ViewLayers = { field: true, contours: true, streamlines: true, walls: true, flags: true };
 
 export class ViewContent {
   field: FieldImage | null = null;
@@ -78,7 +78,7 @@ export class ViewContent {
 }
 
 /** Bounding box of flat x, y arrays; null when there is no point. */
-export function boundsOf(parts: readonly ArrayLike<number>[]): SectionBounds | null {
+function boundsOf(parts: readonly ArrayLike<number>[]): SectionBounds | null {
   let minX = Infinity;
   let minY = Infinity;
   let maxX = -Infinity;

@@ -23,8 +23,8 @@ export interface Insets {
 }
 
 /** Zoom limits, CSS px per section unit: wide enough for a whole head in inches, close enough for a seat cut in mm. */
-export const MIN_SCALE = 1e-3;
-export const MAX_SCALE = 1e5;
+const MIN_SCALE = 1e-3;
+const MAX_SCALE = 1e5;
 
 export function sectionToScreen(v: ViewState, x: number, y: number): { x: number; y: number } {
   return { x: v.width / 2 + (x - v.centreX) * v.scale, y: v.height / 2 - (y - v.centreY) * v.scale };
