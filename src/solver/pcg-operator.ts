@@ -9,32 +9,6 @@ export function paddedVector(nx: number, ny: number): Float64Array {
   return new Float64Array(nx * (ny + 2));
 }
 
-/**
- * out = A x on every cell (whole rows), and returns x . out (the energy x^T A x).
- * @param x padded vector (see paddedVector), read. @param out padded vector, written; must not alias x.
- */
-export function applyStencil(s: Stencil, x: Float64Array, out: Float64Array): number {
-  const { nx, ny, faceX, faceY } = s;
-  let energy = 0;
-  for (let j = 0; j < ny; j++) {
-    const rowK = j * nx;
-    const rowX = rowK + j;
-    for (let i = 0; i < nx; i++) {
-      const k = rowK + i;
-      const v = k + nx;
-      const xv = x[v];
-      const w = faceX[rowX + i];
-      const e = faceX[rowX + i + 1];
-      const so = faceY[k];
-      const no = faceY[k + nx];
-      const ax = (w + e + so + no) * xv - w * x[v - 1] - e * x[v + 1] - so * x[v - nx] - no * x[v + nx];
-      out[v] = ax;
-      energy += xv * ax;
-    }
-  }
-  return energy + addDirichlet(s, x, out, 0, ny);
-}
-
 /** out += D x for the Dirichlet cells of rows from..to - 1 (x, out padded); returns the added x . D x. */
 function addDirichlet(s: Stencil, x: Float64Array, out: Float64Array, from: number, to: number): number {
   const { cells, coupling, rowPtr } = s.dirichlet;

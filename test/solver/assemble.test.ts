@@ -1,22 +1,23 @@
 /** Finite-volume assembly: conservation, symmetry, Dirichlet couplings and excluded cells on hand-made grids. */
 import { describe, expect, it } from 'vitest';
 import { assemble, writeRhs } from '../../src/solver/assemble.ts';
-import { applyStencil, paddedVector } from '../../src/solver/pcg-operator.ts';
+import { paddedVector, residual } from '../../src/solver/pcg-operator.ts';
 import type { CutGrid } from '../../src/solver/types.ts';
 import { channelGrid, fluidMask } from './hand-grids.ts';
 
-/** The dense matrix of the stencil, by applying it to unit vectors. */
+/** The dense matrix of the stencil, by applying the solver's own residual b - A x with b = 0 to unit vectors. */
 function denseOf(grid: CutGrid, mask: Uint8Array): number[][] {
   const s = assemble(grid, mask);
   const n = grid.nx * grid.ny;
   const rows: number[][] = Array.from({ length: n }, () => new Array<number>(n).fill(0));
   const unit = paddedVector(grid.nx, grid.ny);
-  const out = paddedVector(grid.nx, grid.ny);
+  const zero = new Float64Array(n);
+  const out = new Float64Array(n);
   for (let c = 0; c < n; c++) {
     unit.fill(0);
     unit[c + grid.nx] = 1;
-    applyStencil(s, unit, out);
-    for (let r = 0; r < n; r++) rows[r][c] = out[r + grid.nx];
+    residual(s, unit, zero, out);
+    for (let r = 0; r < n; r++) rows[r][c] = 0 - out[r]; // 0 - v: a zero entry is +0, not -0
   }
   return rows;
 }
