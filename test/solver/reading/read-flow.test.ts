@@ -35,6 +35,8 @@ describe('readFlow, straight channel', () => {
   });
 
   it('has no detachment on walls with uniform speed, and says where the tightest section is', () => {
+    // both walls marched (an empty list would pass the loop below without reading anything)
+    expect(reading.detachments).toHaveLength(2);
     for (const d of reading.detachments) expect(d.detachment).toBeNull();
     expect(reading.findings.map((f) => f.kind)).not.toContain('detachment');
     const tight = reading.findings.find((f) => f.kind === 'tightest');
@@ -53,6 +55,7 @@ describe('readFlow, exact concentric bend (r2/r1 = 2, 90 deg)', () => {
 
   // REFERENCES.md 1a [derived]: equipotentials are radial cuts r2 - r1 = 1 long, each carrying Q at the inlet mean speed.
   it('has every station 1 wide at the inlet mean speed', () => {
+    expect(reading.stations.length).toBeGreaterThan(30);
     for (const s of reading.stations) {
       assertInDelta(s.width, 1, 0.01);
       assertInDelta(s.meanSpeedRatio, 1, 0.01);
@@ -62,6 +65,7 @@ describe('readFlow, exact concentric bend (r2/r1 = 2, 90 deg)', () => {
   // REFERENCES.md 1a [derived]: streamlines are circles; the flux between r1 and r is K ln(r / r1), so equal-flux
   // seeds sit at r = r1 2^((k + 1/2) / N).
   it('traces circular streamlines at the equal-flux radii', () => {
+    expect(reading.streamlines).toHaveLength(12);
     let worst = 0;
     reading.streamlines.forEach((line, k) => {
       const r = 2 ** ((k + 0.5) / 12);
