@@ -9,7 +9,7 @@
  */
 import { diagonalOf, type Stencil } from './assemble.ts';
 import { bilinearWeights, interpolationStrength } from './multigrid-bilinear.ts';
-import { cellResidual } from './multigrid-restrict.ts';
+import { cellResidual } from './pcg-operator.ts';
 
 /** Transfer context of one fine level and its coarse level. */
 export interface TransferPair {

@@ -1,5 +1,6 @@
 /** Restriction P^T of one fine row, the exact transpose of prolongRow (see multigrid-bilinear.ts for the weights). */
 import type { Stencil } from './assemble.ts';
+import { cellResidual } from './pcg-operator.ts';
 
 /**
  * Adds P^T (b - A' x) of fine row j to coarseB (I + J * ncx; the caller zeroes it before the first row),
@@ -57,19 +58,6 @@ export function restrictRow(
 
 function sideWeightOf(strength: Float32Array, rowC: number, rowD: number, I: number): number {
   return 0.75 * strength[rowC + I] + 0.25 * strength[rowD + I];
-}
-
-/** b - A' x at fine cell (i, j), A' without Dirichlet couplings; x padded, b i + j * nx. */
-export function cellResidual(s: Stencil, x: Float64Array, b: Float64Array, j: number, i: number): number {
-  const { nx, faceX, faceY } = s;
-  const k = i + j * nx;
-  const v = k + nx;
-  const f = k + j;
-  const w = faceX[f];
-  const e = faceX[f + 1];
-  const so = faceY[k];
-  const no = faceY[k + nx];
-  return b[k] - ((w + e + so + no) * x[v] - w * x[v - 1] - e * x[v + 1] - so * x[v - nx] - no * x[v + nx]);
 }
 
 /** Parent share of column I: 3 : s(I, jn) across rows (all to (I, J) when jn = J). */
