@@ -91,30 +91,41 @@ export class FieldLayer {
       throw new RangeError(`Field has ${field.values.length} values for ${field.nx} x ${field.ny} cells.`);
     }
     this.field = field;
-    this.values?.dispose();
-    this.mask?.dispose();
-    this.values = this.mask = null;
-    if (field) {
-      const { nx, ny } = field;
-      const vals = new Float32Array(nx * ny);
-      const mask = new Uint8Array(nx * ny);
-      for (let k = 0; k < nx * ny; k++) {
-        const v = field.values[k];
-        const fluid = Number.isFinite(v);
-        vals[k] = fluid ? v : 0;
-        mask[k] = fluid ? 255 : 0;
-      }
-      this.values = gridTexture(vals, nx, ny);
-      this.mask = gridTexture(mask, nx, ny);
-      const u = this.object.material.uniforms;
-      u.uValues.value = this.values;
-      u.uMask.value = this.mask;
-      u.uGridOrigin.value.set(field.x0, field.y0);
-      u.uCellSize.value = field.h;
-      // ivec2 in GLSL: three uploads the Vector2 with uniform2i.
-      u.uGridSize.value.set(nx, ny);
+    if (field) this.upload(field);
+    else {
+      this.values?.dispose();
+      this.mask?.dispose();
+      this.values = this.mask = null;
     }
     this.rebuildGeometry();
+  }
+
+  /** Fill the value and mask textures, reusing them when the grid keeps its size (each drag step) so the GPU
+   * updates them in place rather than allocating two new textures. */
+  private upload(field: FieldImage): void {
+    const { nx, ny } = field;
+    if (!this.values || !this.mask || this.values.image.width !== nx || this.values.image.height !== ny) {
+      this.values?.dispose();
+      this.mask?.dispose();
+      this.values = gridTexture(new Float32Array(nx * ny), nx, ny);
+      this.mask = gridTexture(new Uint8Array(nx * ny), nx, ny);
+    }
+    const vals = this.values.image.data as Float32Array;
+    const mask = this.mask.image.data as Uint8Array;
+    for (let k = 0; k < nx * ny; k++) {
+      const v = field.values[k];
+      const fluid = Number.isFinite(v);
+      vals[k] = fluid ? v : 0;
+      mask[k] = fluid ? 255 : 0;
+    }
+    this.values.needsUpdate = this.mask.needsUpdate = true;
+    const u = this.object.material.uniforms;
+    u.uValues.value = this.values;
+    u.uMask.value = this.mask;
+    u.uGridOrigin.value.set(field.x0, field.y0);
+    u.uCellSize.value = field.h;
+    // ivec2 in GLSL: three uploads the Vector2 with uniform2i.
+    u.uGridSize.value.set(nx, ny);
   }
 
   /** Triangles of the outline to clip the field to (exact wall edges), or null to clip by the cell mask alone. */

@@ -247,6 +247,24 @@ describe('flow view in a browser', () => {
     expect(r.restoreDiff).toBe(0);
   });
 
+  it('shows each new field of the same grid size (as drag steps bring them), and the first one again pixel for pixel', async () => {
+    const r = await inPage((h) => {
+      const differing = (a: number[], b: number[]) => a.reduce((n, v, k) => n + (v === b[k] ? 0 : 1), 0);
+      const f = h.overlays.field;
+      // Contours off: they follow the field in JS, so only the field's own colours tell whether it was uploaded.
+      h.view.setContourLevels([]);
+      const first = h.pixels().data;
+      h.view.setField({ ...f, values: Float32Array.from(f.values).reverse() });
+      const mirrored = h.pixels().data;
+      h.view.setField(f);
+      const back = differing(first, h.pixels().data);
+      h.view.setContourLevels(h.overlays.levels);
+      return { changed: differing(first, mirrored), back };
+    });
+    expect(r.changed).toBeGreaterThan(1000);
+    expect(r.back).toBe(0);
+  });
+
   it('frees every GPU object on dispose and leaves the container empty, with no errors', async () => {
     const result = await inPage((h) => {
       const before = h.view.diagnostics.memory;

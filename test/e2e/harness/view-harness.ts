@@ -39,13 +39,14 @@ function demoFlags(): FlagShapes {
 const container = document.getElementById('view')!;
 /** What the app clears on every drag step and sets again after a full solve. */
 const overlays = {
+  field: bendField(bend, H),
   levels: [0.8, 0.9, 1.0, 1.1, 1.2, 1.3, 1.4],
   clip: bendClip(bend),
   streamlines: [midStreamline],
   flags: demoFlags(),
 };
 const view = new FlowView(container, { units: 'mm', contourLevels: overlays.levels });
-view.setField(bendField(bend, H));
+view.setField(overlays.field);
 view.setClip(overlays.clip);
 view.setWalls(bendWalls(bend));
 view.setStreamlines(overlays.streamlines);
