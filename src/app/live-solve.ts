@@ -25,6 +25,8 @@ export class LiveSolve {
       // While dragging, a looser tolerance is plenty for the picture; the full solve goes to 1e-8.
       tolerance: kind === 'drag' ? 1e-5 : 1e-8,
       warmStart: true,
+      // The drag preview draws the field alone; wall speeds come with the full solve.
+      wallSpeeds: kind !== 'drag',
       reading,
     });
     if (reply === null) return;

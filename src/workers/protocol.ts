@@ -12,6 +12,8 @@ export interface SolveRequest {
   readonly tolerance?: number;
   /** Start from the potential this worker computed last (any grid), if it has one. */
   readonly warmStart?: boolean;
+  /** Sample speeds along the walls (default true); a drag preview that reads nothing can skip them. */
+  readonly wallSpeeds?: boolean;
   /** Read the flow (stations, slow zones, detachment, streamlines, findings) with these options; null skips it. */
   readonly reading?: ReadingOptions | null;
 }

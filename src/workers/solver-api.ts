@@ -23,6 +23,8 @@ export function createSolverApi(): SolverWorkerApi {
           tolerance: request.tolerance,
           warmStart: request.warmStart && lastPotential ? lastPotential : undefined,
           shouldStop: superseded,
+          // The reading marches along the walls, so it always needs their speeds.
+          wallSpeeds: request.wallSpeeds !== false || Boolean(request.reading),
         });
         if (superseded()) return failure(request.id, 'superseded', 'A newer request replaced this one.');
         lastPotential = potentialOf(result);

@@ -9,6 +9,7 @@ export interface SolveJob {
   readonly targetCells: number;
   readonly tolerance?: number;
   readonly warmStart?: boolean;
+  readonly wallSpeeds?: boolean;
   readonly reading?: ReadingOptions | null;
 }
 
