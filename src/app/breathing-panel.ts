@@ -2,6 +2,7 @@
 import type { PortDocument } from '../document/types.ts';
 import { metresPerUnit, partsBreathing, partsNotes } from '../parts/index.ts';
 import type { mountBenchPanel } from './bench-panel.ts';
+import { heading, readingTable, type ReadingRow } from './panel-table.ts';
 
 export function showBreathing(host: HTMLElement, doc: PortDocument, tightestWidth: number | null): void {
   const parts = doc.variants.find((v) => v.name === doc.activeVariant)?.parts;
@@ -14,33 +15,23 @@ export function showBreathing(host: HTMLElement, doc: PortDocument, tightestWidt
   if (!b) return host.replaceChildren();
   const len = (v: number) => `${v.toFixed(u === 'mm' ? 2 : 4)} ${u}`;
   const area = (v: number) => `${v.toFixed(u === 'mm' ? 1 : 4)} ${u}²`;
-  const rows: Array<[string, string, string?]> = [
+  const rows: ReadingRow[] = [
     ['lift, L/D', `${len(b.lift)}, ${b.ld.toFixed(3)}`],
     ['valve head area', area(b.headArea)],
     ['throat', `${len(b.throatDiameter)} (${b.throatPct.toFixed(1)}% of valve), ${area(b.throatArea)}`],
     ['curtain area (π D L)', area(b.curtainArea)],
     ['least valve flow area', `${area(b.minValveArea)} (stage ${b.stage})`],
-    ...(b.port ? [[`${b.port.name}`, area(b.port.area)] as [string, string]] : []),
+    ...(b.port ? [[b.port.name, area(b.port.area)] as ReadingRow] : []),
     ['greatest restriction now', b.greatest, 'greatest'],
     ['valve stops restricting at', b.crossoverLift === null ? 'not within the lift range' : `${len(b.crossoverLift)} lift`],
   ];
-  const title = document.createElement('h3');
-  title.textContent = 'Breathing at this lift';
-  const table = document.createElement('table');
-  for (const [label, value, key] of rows) {
-    const tr = table.insertRow();
-    tr.insertCell().textContent = label;
-    const cell = tr.insertCell();
-    cell.textContent = value;
-    if (key) cell.dataset.reading = key;
-  }
   const notes = partsNotes(parts, u).map((n) => {
     const p = document.createElement('p');
     p.className = `part-note ${n.level}`;
     p.textContent = `${n.level === 'warn' ? 'Check: ' : 'Note: '}${n.message}`;
     return p;
   });
-  host.replaceChildren(title, table, ...notes);
+  host.replaceChildren(heading('Breathing at this lift'), readingTable(rows), ...notes);
 }
 
 /** Hands the bench calculator the active variant's areas in SI (it works out C_D and port speed against them). */

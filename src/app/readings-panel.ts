@@ -1,6 +1,7 @@
 /** The readings beside the field: the numbers the solver and the flow reading computed, and the ranked findings. */
 import type { Finding } from '../solver/reading/index.ts';
 import type { FieldReply } from '../workers/protocol.ts';
+import { heading, readingTable, type ReadingRow } from './panel-table.ts';
 
 export interface ReadingsHooks {
   /** A finding was clicked: zoom the view to its place. */
@@ -13,7 +14,7 @@ export class ReadingsPanel {
   show(reply: FieldReply, units: string, refineMs: number): void {
     const digits = units === 'mm' ? 1 : 3;
     const reading = reply.reading;
-    const rows: Array<[string, string, string?]> = [
+    const rows: ReadingRow[] = [
       ['grid', `${reply.nx} × ${reply.ny} cells, ${reply.h.toFixed(units === 'mm' ? 2 : 4)} ${units}`],
       ['solve', `${reply.iterations} iterations, residual ${reply.residual.toExponential(1)}, ${refineMs.toFixed(0)} ms`],
       ['peak speed ratio (clear of sharp corners)', `${reply.peak.speedRatio.toFixed(2)} at (${reply.peak.x.toFixed(digits)}, ${reply.peak.y.toFixed(digits)})`, 'peak'],
@@ -25,7 +26,7 @@ export class ReadingsPanel {
     if (reading?.tightest) rows.push(['tightest section', `${reading.tightest.width.toFixed(digits)} ${units} wide`, 'tightest']);
     if (reading) rows.push(['slow share', `${(100 * reading.slow.share).toFixed(1)}% of the section`, 'slow-share']);
     rows.push(['conductance', `${reply.conductance.toFixed(4)} (per unit depth)`]);
-    this.host.replaceChildren(heading('Readings'), table(rows), ...this.findings(reading?.findings ?? []));
+    this.host.replaceChildren(heading('Readings'), readingTable(rows), ...this.findings(reading?.findings ?? []));
   }
 
   showStale(message: string): void {
@@ -54,24 +55,6 @@ export class ReadingsPanel {
     }
     return [heading('Findings'), list];
   }
-}
-
-function heading(text: string): HTMLElement {
-  const h = document.createElement('h3');
-  h.textContent = text;
-  return h;
-}
-
-function table(rows: ReadonlyArray<[string, string, string?]>): HTMLElement {
-  const t = document.createElement('table');
-  for (const [label, value, key] of rows) {
-    const tr = t.insertRow();
-    tr.insertCell().textContent = label;
-    const cell = tr.insertCell();
-    cell.textContent = value;
-    if (key) cell.dataset.reading = key;
-  }
-  return t;
 }
 
 function slug(name: string): string {

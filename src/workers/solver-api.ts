@@ -4,7 +4,7 @@ import { readFlow } from '../solver/reading/index.ts';
 import { solveFlow } from '../solver/solve.ts';
 import type { FlowReading } from '../solver/reading/index.ts';
 import type { PotentialField, SolveResult } from '../solver/types.ts';
-import type { FailureReply, FieldReply, SolveReply, SolveRequest, SolverWorkerApi } from './protocol.ts';
+import type { FailureReply, FieldReply, SolveReply, SolverWorkerApi } from './protocol.ts';
 
 export function createSolverApi(): SolverWorkerApi {
   let latest: Int32Array | null = null;

@@ -1,17 +1,10 @@
 /** Main-thread side of one solver worker: newest request wins, older results are dropped, at most one in flight. */
 import * as Comlink from 'comlink';
-import type { ReadingOptions } from '../solver/reading/index.ts';
 import type { FlowDomain } from '../solver/types.ts';
 import type { SolveReply, SolveRequest, SolverWorkerApi } from './protocol.ts';
 
-export interface SolveJob {
-  readonly domain: FlowDomain;
-  readonly targetCells: number;
-  readonly tolerance?: number;
-  readonly warmStart?: boolean;
-  readonly wallSpeeds?: boolean;
-  readonly reading?: ReadingOptions | null;
-}
+/** A request without its id: the client numbers them. */
+export type SolveJob = Omit<SolveRequest, 'id'>;
 
 interface Pending {
   readonly job: SolveJob;
