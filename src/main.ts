@@ -9,7 +9,7 @@ import { CELLS_BY_DETAIL, DRAG_CELLS } from './app/grid-detail.ts';
 import { fillHelp } from './app/help-overlay.ts';
 import { LiveSolve } from './app/live-solve.ts';
 import { mountBenchPanel } from './app/bench-panel.ts';
-import { feedBench, showBreathing } from './app/breathing-panel.ts';
+import { showPartsNumbers } from './app/breathing-panel.ts';
 import { PartsPanel } from './app/parts-panel.ts';
 import { PlotsPanel } from './app/plots-panel.ts';
 import { SelectionPanel } from './app/selection-panel.ts';
@@ -64,7 +64,6 @@ const live = new LiveSolve(pool.live, {
     if (kind === 'full') {
       readings.show(reply, store.doc.units, ms);
       if (reply.reading) plots.show(reply.reading, store.doc.units);
-      showPartsNumbers(store.doc, reply.reading?.tightest?.width ?? null);
       readings.clearStale();
       status.clearErrors();
     }
@@ -144,7 +143,7 @@ store.subscribe((doc, cause) => {
   showDocument(doc);
   selectionPanel.show(doc, editor.selection);
   partsPanel.update(doc);
-  showPartsNumbers(doc, lastReply?.reading?.tightest?.width ?? null);
+  showPartsNumbers(byId('breathing'), bench, doc);
   if (cause === 'open') {
     editor.reset();
     view.setUnits(doc.units);
@@ -207,12 +206,6 @@ const bench = mountBenchPanel(byId('bench-host'), {
   },
 });
 
-/** Breathing numbers beside the field, and the areas the bench calculator needs, for the active variant. */
-function showPartsNumbers(doc: PortDocument, tightestWidth: number | null): void {
-  showBreathing(byId('breathing'), doc, tightestWidth);
-  feedBench(bench, doc, tightestWidth);
-}
-
 const partsPanel = new PartsPanel(gui, (part, values) => {
   // A refused value leaves the document as it was; show its numbers again over what was typed.
   if (!tryEdit('setPart', { part, values }, false)) partsPanel.update(store.doc);
@@ -251,7 +244,7 @@ function tryEdit(name: string, args: unknown, resetSelection = true): boolean {
 }
 
 showDocument(store.doc);
-showPartsNumbers(store.doc, null);
+showPartsNumbers(byId('breathing'), bench, store.doc);
 view.fitToView(sectionBounds(activeSection(store.doc)));
 solve(store.doc, 'open');
 if (restored) status.show('Restored the work from your last visit. Open a sample or a file to start afresh.');
