@@ -50,13 +50,16 @@ const readings = new ReadingsPanel(byId('readings'), {
 const plots = new PlotsPanel(byId('plots'));
 let lastReply: FieldReply | null = null;
 let editTime = 0;
+/** True from the first drag step until the next edit of another kind (the release). */
+let dragging = false;
 /** Times from an edit to the repainted field, ms (read by the browser benchmark). */
 const timings: Array<{ kind: string; ms: number; cells: number }> = [];
 
 const live = new LiveSolve(pool.live, {
   onStart: (kind, cells) => showIndicator('busy', kind === 'drag' ? 'live preview…' : `solving ${(cells / 1000).toFixed(0)}k cells…`),
-  onField: (reply, kind, ms) => {
+  onField: (reply, kind, ms, domain) => {
     lastReply = reply;
+    if (kind === 'drag') showOutline(domain);
     if (kind === 'full') view.setContourLevels(parseLevels(settings.contourLevels));
     drawField(reply);
     view.renderNow();
@@ -67,9 +70,13 @@ const live = new LiveSolve(pool.live, {
       readings.clearStale();
       status.clearErrors();
     }
-    showIndicator(live.busy ? 'busy' : 'idle', `${reply.nx * reply.ny > 1e6 ? (reply.nx * reply.ny / 1e6).toFixed(1) + 'M' : Math.round(reply.nx * reply.ny / 1000) + 'k'} cells, ${ms.toFixed(0)} ms`);
+    const cells = reply.nx * reply.ny;
+    const cellsText = `${cells > 1e6 ? (cells / 1e6).toFixed(1) + 'M' : Math.round(cells / 1000) + 'k'} cells`;
+    // Mid-drag the text holds still (a changing time on every step would only flicker).
+    showIndicator(live.busy ? 'busy' : 'idle', kind === 'drag' ? `live preview, ${cellsText}` : `${cellsText}, ${ms.toFixed(0)} ms`);
   },
-  onFailure: (failure) => {
+  onFailure: (failure, kind, domain) => {
+    if (kind === 'drag') showOutline(domain);
     showIndicator('error', 'not solved');
     status.show(failure.message, 'error');
     readings.showStale('This reading belongs to the last shape that solved.');
@@ -85,9 +92,10 @@ function clearOverlays(): void {
   view.setFlags({ hatched: [], lines: [], markers: [] });
 }
 
+/** Touches the page only when something changes: each drag step calls it twice. */
 function showIndicator(state: 'busy' | 'idle' | 'error', text: string): void {
-  indicator.dataset.state = state;
-  indicator.textContent = text;
+  if (indicator.dataset.state !== state) indicator.dataset.state = state;
+  if (indicator.textContent !== text) indicator.textContent = text;
 }
 
 /** The field as the view wants it, with speed ratios against the chosen reference. */
@@ -120,13 +128,19 @@ function solve(doc: PortDocument, cause: ChangeCause): void {
   const domain = currentDomain(doc);
   if (!domain) return;
   // While dragging, draw the field alone: contours, streamlines and flags of the last full solve no longer fit.
-  if (cause === 'drag') clearOverlays();
-  view.setInteractive(cause === 'drag');
-  view.setWalls(wallLines(domain));
-  view.setClip(fluidClip(domain));
+  if (cause === 'drag' && !dragging) clearOverlays();
+  dragging = cause === 'drag';
+  view.setInteractive(dragging);
+  // Mid-drag the outline is drawn with the field solved for it (onField), not over the last one.
+  if (!dragging) showOutline(domain);
   const reading = { units: doc.units, slowFraction: settings.slowFraction, inletMeanSpeedMs: settings.inletSpeedMs };
   if (cause === 'drag') void live.request(domain, 'drag', DRAG_CELLS, null);
   else void live.request(domain, 'full', CELLS_BY_DETAIL[settings.gridDetail], reading);
+}
+
+function showOutline(domain: FlowDomain): void {
+  view.setWalls(wallLines(domain));
+  view.setClip(fluidClip(domain));
 }
 
 function showDocument(doc: PortDocument): void {

@@ -64,11 +64,18 @@ export class EditorController {
     }
     this.dispatch({ type: 'pointer-down', at, screen: [ev.clientX, ev.clientY], insert });
     const move = (e: PointerEvent) => this.dispatch({ type: 'pointer-move', at: this.sectionPoint(e), screen: [e.clientX, e.clientY] });
+    // Chromium sends each movement at once as pointerrawupdate; pointermove waits for the next frame, which on a
+    // busy or software-drawn page is tens of ms later. Acting on the raw update starts the solve that much sooner.
+    // The later pointermove at the same place is no new edit (the tool drops it).
+    const raw = newestOnly((e: Event) => move(e as PointerEvent));
     const up = (e: PointerEvent) => {
+      raw.cancel();
+      window.removeEventListener('pointerrawupdate', raw.handle);
       window.removeEventListener('pointermove', move);
       window.removeEventListener('pointerup', up);
       this.dispatch({ type: 'pointer-up', at: this.sectionPoint(e), screen: [e.clientX, e.clientY] });
     };
+    window.addEventListener('pointerrawupdate', raw.handle);
     window.addEventListener('pointermove', move);
     window.addEventListener('pointerup', up);
     return true;
@@ -180,4 +187,29 @@ const STYLE_BY_KIND: Partial<Record<HandleRef['kind'], HandleMark['style']>> = {
 function filletRadiusOf(section: ReturnType<typeof activeSection>, ref: Extract<HandleRef, { kind: 'fillet' }>): number {
   const outline = ref.island === undefined ? section.outline : section.islands[ref.island].outline;
   return outline.vertices[ref.vertex]?.filletRadius ?? 0;
+}
+
+/**
+ * Handles only the newest of events that arrive faster than the page takes them: each one replaces the one
+ * waiting, and the waiting one is handled in a task of its own right after the events queued before it.
+ */
+function newestOnly<E>(handle: (event: E) => void): { handle: (event: E) => void; cancel: () => void } {
+  let waiting: E | null = null;
+  let timer: ReturnType<typeof setTimeout> | undefined;
+  return {
+    handle: (event) => {
+      if (waiting === null) {
+        timer = setTimeout(() => {
+          const newest = waiting as E;
+          waiting = null;
+          handle(newest);
+        }, 0);
+      }
+      waiting = event;
+    },
+    cancel: () => {
+      clearTimeout(timer);
+      waiting = null;
+    },
+  };
 }

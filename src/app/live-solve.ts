@@ -8,14 +8,16 @@ export type SolveKind = 'drag' | 'full';
 
 export interface LiveSolveHooks {
   readonly onStart: (kind: SolveKind, cells: number) => void;
-  readonly onField: (reply: FieldReply, kind: SolveKind, roundTripMs: number) => void;
-  readonly onFailure: (failure: FailureReply) => void;
+  /** `domain` is the outline this field was solved for (mid-drag the view draws it with its field). */
+  readonly onField: (reply: FieldReply, kind: SolveKind, roundTripMs: number, domain: FlowDomain) => void;
+  readonly onFailure: (failure: FailureReply, kind: SolveKind, domain: FlowDomain) => void;
 }
 
 export class LiveSolve {
   constructor(private readonly client: SolverClient, private readonly hooks: LiveSolveHooks) {}
 
-  /** Ask for a solve; an older request still running is stopped and its result dropped. */
+  /** Ask for a solve; an older request still running is stopped and its result dropped, except that a drag
+   * preview in flight finishes and is shown when the next drag step arrives (see SolveOptions). */
   async request(domain: FlowDomain, kind: SolveKind, cells: number, reading: ReadingOptions | null): Promise<void> {
     this.hooks.onStart(kind, cells);
     const started = performance.now();
@@ -28,10 +30,10 @@ export class LiveSolve {
       // The drag preview draws the field alone; wall speeds come with the full solve.
       wallSpeeds: kind !== 'drag',
       reading,
-    });
+    }, { preview: kind === 'drag' });
     if (reply === null) return;
-    if (reply.ok) this.hooks.onField(reply, kind, performance.now() - started);
-    else this.hooks.onFailure(reply);
+    if (reply.ok) this.hooks.onField(reply, kind, performance.now() - started, domain);
+    else this.hooks.onFailure(reply, kind, domain);
   }
 
   get busy(): boolean {

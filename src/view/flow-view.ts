@@ -51,6 +51,9 @@ export class FlowView {
   private pixelRatio = 1;
   private frame = 0;
   private disposed = false;
+  private interactive = false;
+  /** False until a field has set the automatic range; a drag then holds it. */
+  private rangeFitted = false;
 
   /** Throws RangeError (before touching the page) when options.colourRange is fixed with its top not above its bottom. */
   constructor(container: HTMLElement, options: FlowViewOptions = {}) {
@@ -78,10 +81,19 @@ export class FlowView {
     this.resize();
   }
 
-  /** While the user drags a point: draw the field cell by cell (cheap) until set back to false. */
+  /**
+   * While the user drags a point: draw cheaply (cell by cell, at reduced resolution), hold the colour range still
+   * so speeds are seen rising and falling against one scale, and do not refit the view to the changing outline.
+   * Set back to false when the drag ends.
+   */
   setInteractive(on: boolean): void {
+    if (on === this.interactive) return;
+    this.interactive = on;
     this.scene.setInteractive(on);
-    this.requestRender();
+    if (!on) {
+      this.applyRange();
+      this.contentChanged();
+    } else this.requestRender();
   }
 
   /** Show a field (or none). Contours and the automatic colour range follow it. Throws RangeError for a field
@@ -90,7 +102,8 @@ export class FlowView {
     this.scene.setField(field);
     this.content.field = field;
     this.refreshContours();
-    this.applyRange();
+    if (!this.interactive || !this.rangeFitted) this.applyRange();
+    this.rangeFitted ||= field !== null;
     this.contentChanged();
   }
 
@@ -193,9 +206,11 @@ export class FlowView {
     });
   }
 
-  /** Draw at once (e.g. before reading pixels). */
+  /** Draw at once (e.g. before reading pixels); a render already asked for is then not needed. */
   renderNow(): void {
     if (this.disposed) return;
+    if (this.frame !== 0) cancelAnimationFrame(this.frame);
+    this.frame = 0;
     this.scene.render(this.nav.state);
     this.overlay.draw(this.nav.state, this.content);
   }
@@ -248,8 +263,9 @@ export class FlowView {
     this.colourBar.draw(this.content.range, this.content.peak, this.nav.state.height, this.pixelRatio);
   }
 
+  /** Mid-drag the view does not refit: the point dragged would run away from the pointer. */
   private contentChanged(): void {
-    this.nav.contentChanged(this.content.contentBounds());
+    if (!this.interactive) this.nav.contentChanged(this.content.contentBounds());
     this.requestRender();
   }
 

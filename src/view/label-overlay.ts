@@ -25,6 +25,9 @@ export class LabelOverlay {
   scaleBarLabel = '';
   /** How many contour labels were placed last time. */
   contourLabelCount = 0;
+  /** What the last drawing was made from; the same again leaves the canvas untouched (the browser then need not
+   * upload it again, which matters on every drag step). */
+  private drawnFrom: readonly unknown[] = [];
 
   constructor(parent: HTMLElement) {
     this.canvas = document.createElement('canvas');
@@ -40,13 +43,18 @@ export class LabelOverlay {
 
   setSize(width: number, height: number, pixelRatio: number): void {
     this.pixelRatio = pixelRatio;
-    this.canvas.width = Math.round(width * pixelRatio);
-    this.canvas.height = Math.round(height * pixelRatio);
+    // Rounded down, as three sizes the WebGL drawing buffer: the two layers then match pixel for pixel.
+    this.canvas.width = Math.floor(width * pixelRatio);
+    this.canvas.height = Math.floor(height * pixelRatio);
     this.canvas.style.width = `${width}px`;
     this.canvas.style.height = `${height}px`;
+    this.drawnFrom = [];
   }
 
   draw(view: ViewState, content: OverlayContent): void {
+    const from = drawnFrom(view, content);
+    if (from.length === this.drawnFrom.length && from.every((v, k) => Object.is(v, this.drawnFrom[k]))) return;
+    this.drawnFrom = from;
     const ctx = this.ctx;
     ctx.setTransform(1, 0, 0, 1, 0, 0);
     ctx.clearRect(0, 0, this.canvas.width, this.canvas.height);
@@ -74,4 +82,14 @@ export class LabelOverlay {
     this.canvas.width = this.canvas.height = 0;
     this.canvas.remove();
   }
+}
+
+/** Everything draw() reads, as values to compare: walls enter only through the inlet and outlet lines (end labels)
+ * and the centre of their extent, so a drag that reshapes a wall does not redraw the labels. */
+function drawnFrom(view: ViewState, c: OverlayContent): unknown[] {
+  const b = c.layers.walls ? c.wallBounds : null;
+  const ends = c.layers.walls ? c.walls.filter((w) => w.kind !== 'wall').map((w) => `${w.kind}:${Array.from(w.xy).join(',')}`).join(' ') : '';
+  const l = c.layers;
+  return [view.centreX, view.centreY, view.scale, view.width, view.height, c.units, l.walls, l.flags, l.contours,
+    c.anchors, c.flags, ends, b ? (b.minX + b.maxX) / 2 : NaN, b ? (b.minY + b.maxY) / 2 : NaN];
 }

@@ -3,8 +3,9 @@
 import { COLOUR_BAR } from './view-style.ts';
 
 /**
- * One canvas the size of the WebGL drawing buffer (device px). Call in the same task as the render, while the
- * WebGL drawing buffer still holds the frame.
+ * One canvas the size of the label layer (the view in device px; mid-drag the WebGL picture is drawn smaller and is
+ * scaled up to it, as on screen). Call in the same task as the render, while the WebGL drawing buffer still holds
+ * the frame.
  */
 export function composeSnapshot(
   picture: HTMLCanvasElement,
@@ -13,14 +14,14 @@ export function composeSnapshot(
   pixelRatio: number,
 ): HTMLCanvasElement {
   const out = document.createElement('canvas');
-  out.width = picture.width;
-  out.height = picture.height;
+  out.width = labels.width;
+  out.height = labels.height;
   const ctx = out.getContext('2d');
   if (!ctx) throw new Error('This browser cannot draw 2D canvas images.');
-  ctx.drawImage(picture, 0, 0);
+  ctx.drawImage(picture, 0, 0, out.width, out.height);
   ctx.drawImage(labels, 0, 0);
   // The colour bar sits in the top right corner, COLOUR_BAR.margin CSS px in.
   const margin = Math.round(COLOUR_BAR.margin * pixelRatio);
-  ctx.drawImage(colourBar, picture.width - colourBar.width - margin, margin);
+  ctx.drawImage(colourBar, out.width - colourBar.width - margin, margin);
   return out;
 }

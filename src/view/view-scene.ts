@@ -21,6 +21,13 @@ import { visibleBounds, type ViewState } from './view-transform.ts';
 /** Draw order, bottom to top: field, contours, streamlines, flags, walls (walls stay crisp on top of everything). */
 const ORDER = { field: 0, casing: 1, contours: 2, streamlines: 3, flags: 4, walls: 10 } as const;
 
+/**
+ * While a point is dragged the picture is drawn at this fraction of the screen's resolution and scaled up by the
+ * browser: a quarter of the pixels to shade. Measured on software WebGL (npm run bench:browser), a full-resolution
+ * drag frame was most of the time from pointer event to repaint. Line widths stay in CSS px.
+ */
+const DRAG_RESOLUTION = 0.5;
+
 export class ViewScene {
   readonly renderer: WebGLRenderer;
   private readonly scene = new Scene();
@@ -34,6 +41,8 @@ export class ViewScene {
   private readonly inlets = new LineLayer(INLET_STYLE, ORDER.walls + 1);
   private readonly outlets = new LineLayer(OUTLET_STYLE, ORDER.walls + 2);
   private readonly groups: Record<keyof ViewLayers, Group>;
+  private size = { width: 1, height: 1, pixelRatio: 1 };
+  private interactive = false;
 
   constructor(parent: HTMLElement) {
     this.renderer = new WebGLRenderer({ antialias: true, alpha: false });
@@ -53,9 +62,12 @@ export class ViewScene {
     for (const g of Object.values(this.groups)) this.scene.add(g);
   }
 
-  /** Cheaper field drawing while a point is dragged. */
+  /** Cheaper drawing while a point is dragged: nearest-cell field at reduced resolution. */
   setInteractive(on: boolean): void {
+    if (on === this.interactive) return;
+    this.interactive = on;
     this.field.setNearest(on);
+    this.applySize();
   }
 
   /** Throws RangeError when the grid is larger than this GPU's biggest texture. */
@@ -106,9 +118,15 @@ export class ViewScene {
 
   /** Container size in CSS px and the device pixel ratio; lines keep their CSS px widths. */
   setSize(width: number, height: number, pixelRatio: number): void {
-    this.renderer.setPixelRatio(pixelRatio);
-    this.renderer.setSize(width, height, true);
+    this.size = { width, height, pixelRatio };
+    this.applySize();
     this.flags.setPixelRatio(pixelRatio);
+  }
+
+  private applySize(): void {
+    const { width, height, pixelRatio } = this.size;
+    this.renderer.setPixelRatio(this.interactive ? pixelRatio * DRAG_RESOLUTION : pixelRatio);
+    this.renderer.setSize(width, height, true);
   }
 
   render(view: ViewState): void {

@@ -6,8 +6,19 @@ import type { SolveReply, SolveRequest, SolverWorkerApi } from './protocol.ts';
 /** A request without its id: the client numbers them. */
 export type SolveJob = Omit<SolveRequest, 'id'>;
 
+export interface SolveOptions {
+  /**
+   * A preview (e.g. while a point is dragged) in flight is not stopped by a newer preview: it finishes and its
+   * result is delivered, then the newest waiting preview runs. Requests that come faster than a solve then still
+   * show a result every solve; stopping each one would show nothing until they pause. Any other request stops
+   * whatever is in flight.
+   */
+  readonly preview?: boolean;
+}
+
 interface Pending {
   readonly job: SolveJob;
+  readonly preview: boolean;
   readonly resolve: (reply: SolveReply | null) => void;
 }
 
@@ -17,6 +28,7 @@ export class SolverClient {
   private readonly latest: Int32Array | null;
   private nextId = 1;
   private inFlight = false;
+  private inFlightPreview = false;
   private pending: Pending | null = null;
   readonly ready: Promise<void>;
 
@@ -40,27 +52,31 @@ export class SolverClient {
 
   /**
    * Solve the newest job. Resolves with the reply, or null when a newer job replaced this one
-   * before its result arrived (the stale result is dropped).
+   * before its result arrived (the stale result is dropped; see SolveOptions for previews).
    */
-  solveLatest(job: SolveJob): Promise<SolveReply | null> {
+  solveLatest(job: SolveJob, { preview = false }: SolveOptions = {}): Promise<SolveReply | null> {
     return new Promise((resolve) => {
       this.pending?.resolve(null);
-      this.pending = { job, resolve };
-      if (this.latest) Atomics.store(this.latest, 0, this.nextId);
+      this.pending = { job, preview, resolve };
+      const keepRunning = preview && this.inFlight && this.inFlightPreview;
+      if (this.latest && !keepRunning) Atomics.store(this.latest, 0, this.nextId);
       this.pump();
     });
   }
 
   private pump(): void {
     if (this.inFlight || !this.pending) return;
-    const { job, resolve } = this.pending;
+    const { job, preview, resolve } = this.pending;
     this.pending = null;
     const id = this.nextId++;
     if (this.latest) Atomics.store(this.latest, 0, id);
     this.inFlight = true;
+    this.inFlightPreview = preview;
     void this.send(id, job).then((reply) => {
       this.inFlight = false;
-      const stale = this.pending !== null || (!reply.ok && reply.code === 'superseded');
+      const next = this.pending;
+      const replaced = next !== null && !(preview && next.preview);
+      const stale = replaced || (!reply.ok && reply.code === 'superseded');
       resolve(stale ? null : reply);
       this.pump();
     });

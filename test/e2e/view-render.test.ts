@@ -265,6 +265,61 @@ describe('flow view in a browser', () => {
     expect(r.back).toBe(0);
   });
 
+  it('mid-drag draws at half resolution and holds the colour range through new fields, then refits both on release', async () => {
+    const r = await inPage(async (h) => {
+      const canvas = h.view.scene.renderer.domElement as HTMLCanvasElement;
+      const f = h.overlays.field;
+      const full = { width: canvas.width, range: h.view.colourRange };
+      h.view.setInteractive(true);
+      // A field twice as fast, as a drag step might bring: the colour scale must not move mid-drag.
+      h.view.setField({ ...f, values: Float32Array.from(f.values, (v: number) => 2 * v) });
+      h.view.renderNow();
+      const dragging = { width: canvas.width, range: h.view.colourRange, snapshotWidth: h.view.snapshot().width };
+      h.view.setInteractive(false);
+      h.view.renderNow();
+      const released = { width: canvas.width, range: h.view.colourRange };
+      h.view.setField(f);
+      h.view.renderNow();
+      return { full, dragging, released, back: h.view.colourRange };
+    });
+    expect(r.dragging.width).toBe(r.full.width / 2);
+    // A snapshot mid-drag still has the view's full size.
+    expect(r.dragging.snapshotWidth).toBe(r.full.width);
+    expect(r.dragging.range).toEqual(r.full.range);
+    expect(r.released.width).toBe(r.full.width);
+    expect(r.released.range.max).toBeCloseTo(2 * r.full.range.max, 5);
+    expect(r.back).toEqual(r.full.range);
+  });
+
+  it('leaves the label layer untouched when a frame changes nothing it shows (each drag step), and redraws it on a pan', async () => {
+    const r = await inPage(async (h) => {
+      const ctx = h.view.overlay.canvas.getContext('2d') as CanvasRenderingContext2D;
+      let clears = 0;
+      const clearRect = ctx.clearRect.bind(ctx);
+      ctx.clearRect = (...a: [number, number, number, number]) => {
+        clears++;
+        clearRect(...a);
+      };
+      h.view.setField(h.overlays.field);
+      h.view.renderNow();
+      const afterField = clears;
+      h.view.renderNow();
+      const afterRepeat = clears;
+      h.view.zoomBy(1.1);
+      h.view.renderNow();
+      const afterZoom = clears;
+      h.view.zoomBy(1 / 1.1);
+      h.view.fitToView();
+      h.view.renderNow();
+      delete (ctx as { clearRect?: unknown }).clearRect;
+      return { afterField, afterRepeat, afterZoom };
+    });
+    // A new field brings new contour labels; the same frame again brings nothing new; a zoom moves every label.
+    expect(r.afterField).toBe(1);
+    expect(r.afterRepeat).toBe(1);
+    expect(r.afterZoom).toBe(2);
+  });
+
   it('frees every GPU object on dispose and leaves the container empty, with no errors', async () => {
     const result = await inPage((h) => {
       const before = h.view.diagnostics.memory;

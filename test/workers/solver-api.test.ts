@@ -78,6 +78,45 @@ describe('solver worker API over a MessageChannel', () => {
     console.log(`superseded 1M-cell solve gave way after ${(performance.now() - started).toFixed(0)} ms in all`);
   });
 
+  it('lets a preview in flight finish and shows it when newer previews arrive; the newest waiting one runs next', async () => {
+    const { client, close } = channelClient();
+    open.push(close);
+    const domain = sampleDomain();
+    const preview = { preview: true } as const;
+    const first = client.solveLatest({ domain, targetCells: 12_000 }, preview);
+    const second = client.solveLatest({ domain, targetCells: 8_000 }, preview);
+    const third = client.solveLatest({ domain, targetCells: 4_000 }, preview);
+    const [a, b, c] = await Promise.all([first, second, third]);
+    expect(a?.ok && a.nx * a.ny).toBeGreaterThan(10_000);
+    // The second never ran: the third replaced it while it waited.
+    expect(b).toBeNull();
+    expect(c?.ok && c.nx * c.ny).toBeLessThan(6_000);
+  });
+
+  it('stops a preview in flight when a request that is not a preview arrives', async () => {
+    const { client, close } = channelClient();
+    open.push(close);
+    const domain = sampleDomain();
+    const dragged = client.solveLatest({ domain, targetCells: 12_000 }, { preview: true });
+    const released = client.solveLatest({ domain, targetCells: 4_000 });
+    expect(await dragged).toBeNull();
+    expect((await released)?.ok).toBe(true);
+  });
+
+  it('keeps a preview running in a real worker thread while a newer preview waits (no stop flag raised)', async () => {
+    const worker = new Worker(new URL('./node-solver-worker.mjs', import.meta.url));
+    const client = new SolverClient(nodeEndpoint(worker));
+    open.push(() => { client.dispose(); void worker.terminate(); });
+    const domain = sampleDomain();
+    await client.ready;
+    const long = client.solveLatest({ domain, targetCells: 300_000 }, { preview: true });
+    await new Promise((r) => setTimeout(r, 50));
+    const next = client.solveLatest({ domain, targetCells: 5_000 }, { preview: true });
+    const [a, b] = await Promise.all([long, next]);
+    expect(a?.ok && a.nx * a.ny).toBeGreaterThan(250_000);
+    expect(b?.ok && b.nx * b.ny).toBeLessThan(8_000);
+  });
+
   it('returns a blocked passage as a typed failure with a plain message', async () => {
     const { client, close } = channelClient();
     open.push(close);
