@@ -91,10 +91,12 @@ export class EditorController {
 
   private dispatch(event: ToolEvent): void {
     const step = stepTool(this.state, event, this.context());
+    const docBefore = this.store.doc;
     this.state = step.state;
     this.lastHandled = step.actions.length > 0;
     for (const action of step.actions) this.perform(action);
-    this.drawHandles();
+    // An edit has drawn them already (store subscription); a selection alone has not.
+    if (this.store.doc === docBefore) this.drawHandles();
     this.hooks.onSelection?.(this.state.selection);
   }
 

@@ -18,6 +18,8 @@ import type {
 } from './types.ts';
 
 const NO_FLAGS: FlagShapes = { hatched: [], hatchedCells: null, lines: [], markers: [] };
+const NO_CONTOURS: ContourLine[] = [];
+const NO_ANCHORS: LabelAnchor[] = [];
 const ALL_LAYERS: ViewLayers = { field: true, contours: true, streamlines: true, walls: true, flags: true };
 
 export class ViewContent {
@@ -43,8 +45,9 @@ export class ViewContent {
   updateContours(): void {
     const f = this.field;
     if (!f || this.levels.length === 0) {
-      this.contours = [];
-      this.anchors = [];
+      // The same empty lists each time (every drag step comes here): the label layer sees nothing new to draw.
+      this.contours = NO_CONTOURS;
+      this.anchors = NO_ANCHORS;
       return;
     }
     const inside = this.clip ? ringsInside(this.clip) : cellMaskInside(f);
