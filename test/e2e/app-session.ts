@@ -28,8 +28,9 @@ export interface AppSession {
   close(): Promise<void>;
 }
 
-/** Starts the dev server (the repo's vite.config.ts, so the cross-origin isolation headers apply) and the browser. */
-export async function startApp(): Promise<AppSession> {
+/** Starts the dev server (the repo's vite.config.ts, so the cross-origin isolation headers apply) and the browser,
+ * with CHROMIUM_ARGS and any `extraArgs` (e.g. the benchmark's other compositing mode). */
+export async function startApp(extraArgs: readonly string[] = []): Promise<AppSession> {
   const server = await createServer({
     root: ROOT,
     configFile: resolve(ROOT, 'vite.config.ts'),
@@ -45,7 +46,7 @@ export async function startApp(): Promise<AppSession> {
     await server.listen();
     const url = server.resolvedUrls?.local[0];
     if (!url) throw new Error('Vite dev server reported no local address');
-    browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: CHROMIUM_ARGS });
+    browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: [...CHROMIUM_ARGS, ...extraArgs] });
     const opened = browser;
     return {
       server,
