@@ -23,8 +23,8 @@ const ORDER = { field: 0, casing: 1, contours: 2, streamlines: 3, flags: 4, wall
 
 /**
  * While a point is dragged the picture is drawn at this fraction of the screen's resolution and scaled up by the
- * browser: a quarter of the pixels to shade. Measured on software WebGL (npm run bench:browser), a full-resolution
- * drag frame was most of the time from pointer event to repaint. Line widths stay in CSS px.
+ * browser: a quarter of the pixels to shade. On software WebGL it took the pointer-to-repaint median from 100-114 ms
+ * to 78-80 ms (measured in the drag benchmark before the other drag changes). Line widths stay in CSS px.
  */
 const DRAG_RESOLUTION = 0.5;
 
