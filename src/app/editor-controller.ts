@@ -63,7 +63,14 @@ export class EditorController {
       return false;
     }
     this.dispatch({ type: 'pointer-down', at, screen: [ev.clientX, ev.clientY], insert });
-    const move = (e: PointerEvent) => this.dispatch({ type: 'pointer-move', at: this.sectionPoint(e), screen: [e.clientX, e.clientY] });
+    // Where the view lies on the page, read once: read on every move it would force a layout of the handles just
+    // redrawn before the edit could start.
+    const host = this.host.getBoundingClientRect();
+    const sectionPoint = (e: PointerEvent): Point => {
+      const p = this.view.screenToSection(e.clientX - host.left, e.clientY - host.top);
+      return [p.x, p.y];
+    };
+    const move = (e: PointerEvent) => this.dispatch({ type: 'pointer-move', at: sectionPoint(e), screen: [e.clientX, e.clientY] });
     // Chromium sends each movement at once as pointerrawupdate; pointermove waits for the next frame, which on a
     // busy or software-drawn page is tens of ms later. Acting on the raw update starts the solve that much sooner.
     // The later pointermove at the same place is no new edit (the tool drops it).
@@ -73,11 +80,14 @@ export class EditorController {
       window.removeEventListener('pointerrawupdate', raw.handle);
       window.removeEventListener('pointermove', move);
       window.removeEventListener('pointerup', up);
-      this.dispatch({ type: 'pointer-up', at: this.sectionPoint(e), screen: [e.clientX, e.clientY] });
+      this.dispatch({ type: 'pointer-up', at: sectionPoint(e), screen: [e.clientX, e.clientY] });
     };
     window.addEventListener('pointerrawupdate', raw.handle);
     window.addEventListener('pointermove', move);
     window.addEventListener('pointerup', up);
+    // Captured, the pointer's events go straight to the view: the browser need not find what lies under the pointer
+    // (and bring the layout up to date first) on every move. Released on pointerup by the browser.
+    this.host.setPointerCapture?.(ev.pointerId);
     return true;
   }
 
@@ -143,12 +153,6 @@ export class EditorController {
 
   private tolerance(): number {
     return PICK_PX / this.view.transform.scale;
-  }
-
-  private sectionPoint(e: PointerEvent): Point {
-    const r = this.host.getBoundingClientRect();
-    const p = this.view.screenToSection(e.clientX - r.left, e.clientY - r.top);
-    return [p.x, p.y];
   }
 
   private drawHandles(): void {
