@@ -20,6 +20,8 @@ export class HandleOverlay {
   private readonly svg: SVGSVGElement;
   private marks: readonly HandleMark[] = [];
   private transform: SectionToScreen = { scale: 1, offsetX: 0, offsetY: 0 };
+  /** Markup of each handle's group as drawn. */
+  private drawn: string[] = [];
 
   constructor(container: HTMLElement) {
     this.svg = document.createElementNS(SVG_NS, 'svg');
@@ -38,19 +40,28 @@ export class HandleOverlay {
     this.draw();
   }
 
+  /** Each handle is a group of its own, rewritten only when its markup changes: a drag step then touches one or two
+   * small groups, not the whole layer (which the browser would lay out and paint again). */
   private draw(): void {
     const { scale, offsetX, offsetY } = this.transform;
-    const parts: string[] = [];
-    for (const m of this.marks) {
+    const markup = this.marks.map((m) => {
       const sx = offsetX + scale * m.x;
       const sy = offsetY - scale * m.y;
       const r = RADIUS_PX[m.style] + (m.selected ? 1.5 : 0);
       const fill = m.selected ? '#e8a33d' : m.style === 'fillet' ? '#1d2127' : '#f2f4f6';
       const stroke = m.style === 'fillet' ? '#e8a33d' : '#1d2127';
-      parts.push(shape(m.style, sx, sy, r, fill, stroke));
-      if (m.label) parts.push(`<text x="${sx + 9}" y="${sy - 9}" fill="#e8a33d" font-size="12" font-family="system-ui" paint-order="stroke" stroke="#15181d" stroke-width="3">${escapeText(m.label)}</text>`);
-    }
-    this.svg.innerHTML = parts.join('');
+      const label = m.label
+        ? `<text x="${sx + 9}" y="${sy - 9}" fill="#e8a33d" font-size="12" font-family="system-ui" paint-order="stroke" stroke="#15181d" stroke-width="3">${escapeText(m.label)}</text>`
+        : '';
+      return shape(m.style, sx, sy, r, fill, stroke) + label;
+    });
+    const groups = this.svg.children;
+    while (groups.length > markup.length) groups[groups.length - 1].remove();
+    while (groups.length < markup.length) this.svg.appendChild(document.createElementNS(SVG_NS, 'g'));
+    markup.forEach((html, k) => {
+      if (this.drawn[k] !== html) groups[k].innerHTML = html;
+    });
+    this.drawn = markup;
   }
 
   dispose(): void {

@@ -77,10 +77,18 @@ describe('Portwright in a browser', () => {
       const nearest = Math.min(...(await overlayCircles(page)).map(([x, y]) => Math.hypot(x - grip.handle[0], y - grip.handle[1])));
       expect(nearest, 'a fillet handle is drawn where the editor puts it').toBeLessThan(1);
 
+      // Mark every handle's drawn shape: a handle the drag does not move must keep its element.
+      const shapes = '#view-host svg.editor-overlay > g > :first-child';
+      await page.$$eval(shapes, (els) => els.forEach((e) => e.setAttribute('data-kept', '')));
       const fullBefore = await solveCount(page, 'full');
       const target = 10;
       await dragFillet(page, grip, target, 8);
       await waitForFullSolves(page, fullBefore + 1);
+      const kept = await page.$$eval(shapes, (els) => els.map((e) => e.hasAttribute('data-kept')));
+      expect(kept.length).toBeGreaterThan(10);
+      // The dragged handle is redrawn (moved, selected, labelled); the corners and other handles are left alone.
+      expect(kept.filter((k) => !k).length).toBeGreaterThanOrEqual(1);
+      expect(kept.filter((k) => !k).length).toBeLessThanOrEqual(3);
 
       const radius = activeSection(await appDocument(page)).outline.vertices[grip.vertex].filletRadius ?? 0;
       // Within a pixel's worth of the aimed radius (the mouse lands on whole or fractional CSS px).
