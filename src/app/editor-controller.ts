@@ -70,21 +70,30 @@ export class EditorController {
       const p = this.view.screenToSection(e.clientX - host.left, e.clientY - host.top);
       return [p.x, p.y];
     };
-    const move = (e: PointerEvent) => this.dispatch({ type: 'pointer-move', at: sectionPoint(e), screen: [e.clientX, e.clientY] });
+    // Only this pointer: a second finger or pen does not move the point.
+    const ours = (e: PointerEvent) => e.pointerId === ev.pointerId;
+    const move = (e: PointerEvent) => {
+      if (ours(e)) this.dispatch({ type: 'pointer-move', at: sectionPoint(e), screen: [e.clientX, e.clientY] });
+    };
     // Chromium sends each movement at once as pointerrawupdate; pointermove waits for the next frame, which on a
     // busy or software-drawn page is tens of ms later. Acting on the raw update starts the solve that much sooner.
     // The later pointermove at the same place is no new edit (the tool drops it).
     const raw = newestOnly((e: Event) => move(e as PointerEvent));
-    const up = (e: PointerEvent) => {
+    const listeners: Array<[string, (e: Event) => void]> = [
+      ['pointerrawupdate', raw.handle],
+      ['pointermove', (e) => move(e as PointerEvent)],
+      ['pointerup', (e) => end(e as PointerEvent, 'pointer-up')],
+      // The browser took the pointer (e.g. a touch became a scroll): the drag is undone, as with Escape.
+      ['pointercancel', (e) => end(e as PointerEvent, 'pointer-cancel')],
+    ];
+    const end = (e: PointerEvent, type: 'pointer-up' | 'pointer-cancel') => {
+      if (!ours(e)) return;
       raw.cancel();
-      window.removeEventListener('pointerrawupdate', raw.handle);
-      window.removeEventListener('pointermove', move);
-      window.removeEventListener('pointerup', up);
-      this.dispatch({ type: 'pointer-up', at: sectionPoint(e), screen: [e.clientX, e.clientY] });
+      for (const [name, listener] of listeners) window.removeEventListener(name, listener);
+      if (type === 'pointer-up') this.dispatch({ type, at: sectionPoint(e), screen: [e.clientX, e.clientY] });
+      else this.dispatch({ type });
     };
-    window.addEventListener('pointerrawupdate', raw.handle);
-    window.addEventListener('pointermove', move);
-    window.addEventListener('pointerup', up);
+    for (const [name, listener] of listeners) window.addEventListener(name, listener);
     // Captured, the pointer's events go straight to the view: the browser need not find what lies under the pointer
     // (and bring the layout up to date first) on every move. Released on pointerup by the browser.
     this.host.setPointerCapture?.(ev.pointerId);

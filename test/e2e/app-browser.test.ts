@@ -103,6 +103,29 @@ describe('Portwright in a browser', () => {
     });
   }, CHECK_MS);
 
+  it('a drag the browser cancels (pointercancel) puts the radius back and solves the full grid again', async () => {
+    await withFreshApp(async ({ page, problems }) => {
+      let grip = await shortSideGrip(page);
+      await zoomAbout(page, grip.handle, 4);
+      grip = await shortSideGrip(page);
+      const radiusOf = async () => activeSection(await appDocument(page)).outline.vertices[grip.vertex].filletRadius;
+      const fullBefore = await solveCount(page, 'full');
+      const to = await grip.handleFor(10);
+      await page.mouse.move(...grip.handle);
+      await page.mouse.down();
+      for (let k = 1; k <= 4; k++) await page.mouse.move(grip.handle[0] + (k / 4) * (to[0] - grip.handle[0]), grip.handle[1] + (k / 4) * (to[1] - grip.handle[1]));
+      await expect.poll(radiusOf).toBeGreaterThan(grip.radius + 1);
+      // What a browser sends when it takes the pointer over (playwright's mouse is pointer 1).
+      await page.evaluate(() => window.dispatchEvent(new PointerEvent('pointercancel', { pointerId: 1 })));
+      expect(await radiusOf()).toBe(grip.radius);
+      await waitForFullSolves(page, fullBefore + 1);
+      // The mouse is let go afterwards: nothing more happens to the document.
+      await page.mouse.up();
+      expect(await radiusOf()).toBe(grip.radius);
+      expect(problems).toEqual([]);
+    });
+  }, CHECK_MS);
+
   it('saves the document and opens the saved file back to the same document', async () => {
     await withFreshApp(async ({ page, problems }) => {
       // Make the saved document differ from the sample, and the one open at the time of opening differ from both.
