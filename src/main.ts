@@ -13,6 +13,7 @@ import { showPartsNumbers } from './app/breathing-panel.ts';
 import { PartsPanel } from './app/parts-panel.ts';
 import { PlotsPanel } from './app/plots-panel.ts';
 import { SelectionPanel } from './app/selection-panel.ts';
+import { SolveIndicator } from './app/solve-indicator.ts';
 import { ReadingsPanel } from './app/readings-panel.ts';
 import { fluidClip, wallLines } from './app/section-shapes.ts';
 import { defaultSettings, parseLevels } from './app/settings.ts';
@@ -32,7 +33,7 @@ import type { FieldReply } from './workers/protocol.ts';
 const byId = <T extends HTMLElement>(id: string) => document.getElementById(id) as T;
 const viewHost = byId<HTMLElement>('view-host');
 const status = new StatusLine(byId('status'));
-const indicator = byId<HTMLElement>('solve-indicator');
+const indicator = new SolveIndicator(byId('solve-indicator'));
 const helpOverlay = byId<HTMLElement>('help-overlay');
 const variantSelect = byId<HTMLSelectElement>('variant-select');
 
@@ -56,7 +57,7 @@ let dragging = false;
 const timings: Array<{ kind: string; ms: number; cells: number }> = [];
 
 const live = new LiveSolve(pool.live, {
-  onStart: (kind, cells) => showIndicator('busy', kind === 'drag' ? 'live preview…' : `solving ${(cells / 1000).toFixed(0)}k cells…`),
+  onStart: (kind, cells) => indicator.started(kind, cells),
   onField: (reply, kind, ms, domain) => {
     lastReply = reply;
     if (kind === 'drag') showOutline(domain);
@@ -70,14 +71,11 @@ const live = new LiveSolve(pool.live, {
       readings.clearStale();
       status.clearErrors();
     }
-    const cells = reply.nx * reply.ny;
-    const cellsText = `${cells > 1e6 ? (cells / 1e6).toFixed(1) + 'M' : Math.round(cells / 1000) + 'k'} cells`;
-    // Mid-drag the text holds still (a changing time on every step would only flicker).
-    showIndicator(live.busy ? 'busy' : 'idle', kind === 'drag' ? `live preview, ${cellsText}` : `${cellsText}, ${ms.toFixed(0)} ms`);
+    indicator.solved(kind, reply.nx * reply.ny, ms, live.busy);
   },
   onFailure: (failure, kind, domain) => {
     if (kind === 'drag') showOutline(domain);
-    showIndicator('error', 'not solved');
+    indicator.show('error', 'not solved');
     status.show(failure.message, 'error');
     readings.showStale('This reading belongs to the last shape that solved.');
     // Where the solver says the trouble is (e.g. where a passage closes), mark it on the section.
@@ -90,12 +88,6 @@ function clearOverlays(): void {
   view.setContourLevels([]);
   view.setStreamlines([]);
   view.setFlags({ hatched: [], lines: [], markers: [] });
-}
-
-/** Touches the page only when something changes: each drag step calls it twice. */
-function showIndicator(state: 'busy' | 'idle' | 'error', text: string): void {
-  if (indicator.dataset.state !== state) indicator.dataset.state = state;
-  if (indicator.textContent !== text) indicator.textContent = text;
 }
 
 /** The field as the view wants it, with speed ratios against the chosen reference. */

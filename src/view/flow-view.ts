@@ -14,24 +14,11 @@ import { LabelOverlay } from './label-overlay.ts';
 import { PointerControls } from './pointer-controls.ts';
 import { composeSnapshot } from './snapshot.ts';
 import type * as T from './types.ts';
+import type { FlowViewOptions, ViewDiagnostics } from './types.ts';
 import { ViewContent } from './view-content.ts';
 import { ViewScene } from './view-scene.ts';
 import { ViewNavigator } from './view-navigator.ts';
 import * as VT from './view-transform.ts';
-
-export interface FlowViewOptions {
-  readonly units?: T.LengthUnits;
-  readonly contourLevels?: T.ContourLevels;
-  readonly colourRange?: T.ColourRange;
-  readonly layers?: Partial<T.ViewLayers>;
-}
-
-export interface ViewDiagnostics {
-  readonly scaleBarLabel: string;
-  readonly contourLabels: number;
-  readonly frames: number;
-  readonly memory: { readonly geometries: number; readonly textures: number };
-}
 
 export class FlowView {
   /** False stops all drag panning (wheel zoom still works). */

@@ -128,3 +128,19 @@ export interface SectionBounds {
   readonly maxX: number;
   readonly maxY: number;
 }
+
+/** Options of a new FlowView; each can be changed later through its setter. */
+export interface FlowViewOptions {
+  readonly units?: LengthUnits;
+  readonly contourLevels?: ContourLevels;
+  readonly colourRange?: ColourRange;
+  readonly layers?: Partial<ViewLayers>;
+}
+
+/** What the view has drawn, for checks and status lines (FlowView.diagnostics). */
+export interface ViewDiagnostics {
+  readonly scaleBarLabel: string;
+  readonly contourLabels: number;
+  readonly frames: number;
+  readonly memory: { readonly geometries: number; readonly textures: number };
+}
