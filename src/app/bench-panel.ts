@@ -8,6 +8,7 @@ import {
 } from './bench-panel-model.ts';
 import { benchOutputs, flowScaleSpeed } from './bench-panel-outputs.ts';
 import { renderResults } from './bench-panel-results.ts';
+import { benchStore, type BenchStorage } from './bench-panel-store.ts';
 import { injectBenchStyles } from './bench-panel-style.ts';
 import { syncForm } from './bench-panel-sync.ts';
 import { UNIT_OPTIONS, type PanelUnits } from './bench-panel-units.ts';
@@ -17,6 +18,8 @@ export interface BenchPanelOptions {
   readonly onInletSpeed?: (ms: number) => void;
   /** Units to start in (defaults: mm, m/s, CFM, in H2O, barometer in Pa, °C). */
   readonly units?: Partial<PanelUnits>;
+  /** Where the porter's inputs are kept between visits (default the page's localStorage); null keeps nothing. */
+  readonly storage?: BenchStorage | null;
 }
 
 export interface BenchPanel {
@@ -37,7 +40,8 @@ export function mountBenchPanel(host: HTMLElement, options: BenchPanelOptions = 
   const idPrefix = `bench-${++panelCount}`;
   const lifetime = new AbortController();
   const signal = lifetime.signal;
-  let state: BenchPanelState = initialBenchState(options.units);
+  const kept = benchStore(options.storage === undefined ? pageStorage(doc) : options.storage);
+  let state: BenchPanelState = kept.restore(initialBenchState(options.units));
 
   // A fold, like the cautions box: the panel is long and the side bar is shared.
   const root = doc.createElement('details');
@@ -67,18 +71,31 @@ export function mountBenchPanel(host: HTMLElement, options: BenchPanelOptions = 
     results.speed.value = state.units.speed;
     renderResults(results.list, benchOutputs(state));
     scale.sync(state);
+    kept.changed(state);
   }
   update(state);
+  // A reload soon after typing must not lose the last number to the write delay.
+  doc.defaultView?.addEventListener('pagehide', () => kept.flush(), { signal });
 
   return {
     setAreas: (areasM2) => update(setAreas(state, areasM2)),
     setPortArea: (m2, source) => update(setPortArea(state, m2, source)),
     setLengthUnits: (units) => update(setUnit(state, 'length', units)),
     dispose: () => {
+      kept.flush();
       lifetime.abort();
       root.remove();
     },
   };
+}
+
+/** The page's localStorage, or null where reading it throws (storage disabled, sandboxed frame). */
+function pageStorage(doc: Document): BenchStorage | null {
+  try {
+    return doc.defaultView?.localStorage ?? null;
+  } catch {
+    return null;
+  }
 }
 
 function resultsBlock(doc: Document, idPrefix: string, signal: AbortSignal, onSpeed: (speed: PanelUnits['speed']) => void) {

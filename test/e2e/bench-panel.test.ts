@@ -1,4 +1,4 @@
-/** Browser check of the "Air and bench" panel: typed numbers, unit switches, messages and the flow-scale button in chromium. */
+/** Browser check of the "Air and bench" panel: typed numbers, unit switches, messages, the flow-scale button, a reload, in chromium. */
 
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
@@ -104,6 +104,30 @@ describe('bench panel in a browser', () => {
     expect(sent).toBeCloseTo(106.71, 2); // REFERENCES.md §3b: 106.710 m/s at 28 in H2O, 1.225 kg/m³ [derived]
     await page.selectOption('.bench-panel select[id$="-flow-scale"]', 'mean port speed');
     expect(await page.isDisabled('.bench-panel button:has-text("Use as flow scale")')).toBe(true);
+    expect(problems).toEqual([]);
+  });
+
+  it('what the porter typed and chose is still there after the page is reloaded', async () => {
+    await page.evaluate(() => (window as unknown as { harness: { remount: () => void } }).harness.remount());
+    await page.selectOption('.bench-panel select[aria-label="Bore unit"]', 'inch');
+    await type('bore', '4.03');
+    await page.selectOption('.bench-panel select[aria-label="Measured flow unit"]', 'L/s');
+    await type('flow', '98.5');
+    // Written once typing pauses: wait for it, then type more and reload at once (kept when the page goes away).
+    await page.waitForFunction(() => localStorage.getItem('portwright.bench')?.includes('98.5') === true);
+    await type('stroke', '3.25');
+    await page.selectOption('.bench-panel select[id$="-humidityModel"]', 'ideal-mixture');
+    await page.selectOption('.bench-panel select[id$="-flow-scale"]', 'mean port speed');
+    await page.reload();
+    await page.waitForFunction(() => (window as unknown as { harness?: { ready: boolean } }).harness?.ready === true);
+    expect(await page.inputValue('.bench-panel input[data-field="bore"]')).toBe('4.03');
+    expect(await page.inputValue('.bench-panel input[data-field="stroke"]')).toBe('3.25');
+    expect(await page.inputValue('.bench-panel input[data-field="flow"]')).toBe('98.5');
+    expect(await page.inputValue('.bench-panel select[aria-label="Bore unit"]')).toBe('inch');
+    expect(await page.inputValue('.bench-panel select[aria-label="Measured flow unit"]')).toBe('L/s');
+    expect(await page.inputValue('.bench-panel select[id$="-humidityModel"]')).toBe('ideal-mixture');
+    expect(await page.inputValue('.bench-panel select[id$="-flow-scale"]')).toBe('mean port speed');
+    expect(await page.inputValue('.bench-panel input[data-field="temperature"]')).toBe('20'); // untouched: the default
     expect(problems).toEqual([]);
   });
 });
