@@ -118,7 +118,12 @@ function currentDomain(doc: PortDocument): FlowDomain | null {
 function solve(doc: PortDocument, cause: ChangeCause): void {
   editTime = performance.now();
   const domain = currentDomain(doc);
-  if (!domain) return;
+  if (!domain) {
+    // Let go on a shape that cannot be solved (e.g. the valve shut on its seat): the drag's drawing still ends.
+    if (cause !== 'drag') dragging = false;
+    view.setInteractive(dragging);
+    return;
+  }
   // While dragging, draw the field alone: contours, streamlines and flags of the last full solve no longer fit.
   if (cause === 'drag' && !dragging) clearOverlays();
   dragging = cause === 'drag';
