@@ -25,6 +25,8 @@ export class EditorController {
   private readonly overlay: HandleOverlay;
   /** Whether the tool did something with the last event (then a key press is not passed on to the page). */
   private lastHandled = false;
+  /** The pointer whose press the tool follows now, from its pointerdown to its pointerup or pointercancel. */
+  private pressedBy: number | null = null;
   insertMode = false;
 
   constructor(
@@ -56,6 +58,8 @@ export class EditorController {
 
   /** Claim a press on a handle or an edge so the view does not pan; a press on empty space pans and clears the selection. */
   private claim(ev: PointerEvent, at: Point): boolean {
+    // A second finger or pen while one is pressed is left alone: it neither takes over nor cancels the drag, nor pans.
+    if (this.pressedBy !== null && this.pressedBy !== ev.pointerId) return true;
     const insert = this.insertMode || ev.shiftKey;
     const hit = hitTest(activeSection(this.store.doc), at, this.tolerance(), { parts: activeVariant(this.store.doc).parts });
     if (!hit) {
@@ -63,6 +67,7 @@ export class EditorController {
       return false;
     }
     this.dispatch({ type: 'pointer-down', at, screen: [ev.clientX, ev.clientY], insert });
+    this.pressedBy = ev.pointerId;
     // Where the view lies on the page, read once: read on every move it would force a layout of the handles just
     // redrawn before the edit could start.
     const host = this.host.getBoundingClientRect();
@@ -88,6 +93,7 @@ export class EditorController {
     ];
     const end = (e: PointerEvent, type: 'pointer-up' | 'pointer-cancel') => {
       if (!ours(e)) return;
+      this.pressedBy = null;
       raw.cancel();
       for (const [name, listener] of listeners) window.removeEventListener(name, listener);
       if (type === 'pointer-up') this.dispatch({ type, at: sectionPoint(e), screen: [e.clientX, e.clientY] });

@@ -1,10 +1,10 @@
-/** The app after drags that end unusually: let go on a shape that cannot be solved. */
+/** The app after drags that end unusually: let go on a shape that cannot be solved, a second finger on a handle. */
 
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import type { PortDocument } from '../../src/document/types.ts';
-import { activeVariant, liftHandlePosition } from '../../src/editor/index.ts';
-import { appDocument, toPage } from './app-fillet.ts';
+import { activeSection, activeVariant, liftHandlePosition } from '../../src/editor/index.ts';
+import { appDocument, shortSideGrip, toPage, zoomAbout } from './app-fillet.ts';
 import { openApp, startApp, type AppSession } from './app-session.ts';
 
 /** Solves on the standard grid take seconds, longer when the machine is shared: each check gets minutes. */
@@ -56,4 +56,40 @@ describe('drags that end unusually', () => {
     }
   }, CHECK_MS);
 
+  it('a second finger put down on a handle mid-drag does not move the point held by the first', async () => {
+    const { context, page, problems } = await openApp(session);
+    try {
+      let grip = await shortSideGrip(page);
+      await zoomAbout(page, grip.handle, 4);
+      grip = await shortSideGrip(page);
+      const radiusOf = async () => activeSection(await appDocument(page)).outline.vertices[grip.vertex].filletRadius ?? 0;
+      // Another handle in sight: the corner next to the held one.
+      const section = activeSection(await appDocument(page));
+      const [other] = await toPage(page, [section.outline.vertices[grip.vertex + 1].at]);
+      const cdp = await context.newCDPSession(page);
+      await cdp.send('Emulation.setTouchEmulationEnabled', { enabled: true, maxTouchPoints: 2 });
+      const touch = (type: 'touchStart' | 'touchMove' | 'touchEnd', points: ReadonlyArray<readonly [number, number, number]>) =>
+        cdp.send('Input.dispatchTouchEvent', { type, touchPoints: points.map(([id, x, y]) => ({ id, x, y })) });
+      // First finger: on the fillet handle, then out along the corner's bisector to the handle of a 7 mm radius.
+      const to = await grip.handleFor(7);
+      const [x0, y0] = grip.handle;
+      await touch('touchStart', [[0, x0, y0]]);
+      for (let k = 1; k <= 4; k++) await touch('touchMove', [[0, x0 + (k / 4) * (to[0] - x0), y0 + (k / 4) * (to[1] - y0)]]);
+      await expect.poll(radiusOf).toBeGreaterThan(grip.radius + 1);
+      const held = await radiusOf();
+      // Second finger: down on that corner and moved to where the fillet handle of a 5 mm radius would be, while the
+      // first stays still.
+      const lure = await grip.handleFor(5);
+      await touch('touchStart', [[0, ...to], [1, ...other]]);
+      for (let k = 1; k <= 4; k++) await touch('touchMove', [[0, ...to], [1, other[0] + (k / 4) * (lure[0] - other[0]), other[1] + (k / 4) * (lure[1] - other[1])]]);
+      // (Touch points listed with touchEnd are the ones lifted.) The second finger is lifted first, then the first.
+      await touch('touchEnd', [[1, ...lure]]);
+      expect(await radiusOf(), 'the fillet follows the first finger only').toBeCloseTo(held, 6);
+      await touch('touchEnd', [[0, ...to]]);
+      expect(await radiusOf()).toBeCloseTo(held, 6);
+      expect(problems).toEqual([]);
+    } finally {
+      await context.close();
+    }
+  }, CHECK_MS);
 });
