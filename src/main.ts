@@ -4,7 +4,7 @@ import { acceptDrops, downloadDocument, pickFile, type FileHandlers } from './ap
 import { autosaver, restoreAutosave } from './app/autosave.ts';
 import { DocumentStore, type ChangeCause } from './app/document-store.ts';
 import { EditorController } from './app/editor-controller.ts';
-import { flagShapes } from './app/flag-shapes.ts';
+import { FlowPicture } from './app/flow-picture.ts';
 import { CELLS_BY_DETAIL, DRAG_CELLS } from './app/grid-detail.ts';
 import { fillHelp } from './app/help-overlay.ts';
 import { LiveSolve } from './app/live-solve.ts';
@@ -15,18 +15,15 @@ import { PlotsPanel } from './app/plots-panel.ts';
 import { SelectionPanel } from './app/selection-panel.ts';
 import { SolveIndicator } from './app/solve-indicator.ts';
 import { ReadingsPanel } from './app/readings-panel.ts';
-import { fluidClip, wallLines } from './app/section-shapes.ts';
 import { defaultSettings, parseLevels } from './app/settings.ts';
 import { buildSettingsPanel, type SettingsGroup } from './app/settings-panel.ts';
 import { StatusLine } from './app/status.ts';
-import { thinPolyline } from './app/thin-polyline.ts';
 import { loadDocument } from './document/load.ts';
 import type { PortDocument } from './document/types.ts';
 import { activeSection, applyEdit, type CommandName } from './editor/index.ts';
 import { defaultTolerance, sectionBounds, sectionToDomain } from './geometry/index.ts';
 import type { FlowDomain } from './solver/types.ts';
 import { FlowView } from './view/flow-view.ts';
-import type { FieldImage } from './view/types.ts';
 import { SolverPool } from './workers/pool.ts';
 import type { FieldReply } from './workers/protocol.ts';
 
@@ -49,6 +46,7 @@ const readings = new ReadingsPanel(byId('readings'), {
   onFinding: (f) => view.fitToView({ minX: f.x - f.radius, minY: f.y - f.radius, maxX: f.x + f.radius, maxY: f.y + f.radius }),
 });
 const plots = new PlotsPanel(byId('plots'));
+const picture = new FlowPicture(view, settings, () => store.doc.units);
 let lastReply: FieldReply | null = null;
 let editTime = 0;
 /** True from the first drag step until the next edit of another kind (the release). */
@@ -60,10 +58,7 @@ const live = new LiveSolve(pool.live, {
   onStart: (kind, cells) => indicator.started(kind, cells),
   onField: (reply, kind, ms, domain) => {
     lastReply = reply;
-    if (kind === 'drag') showOutline(domain);
-    if (kind === 'full') view.setContourLevels(parseLevels(settings.contourLevels));
-    drawField(reply);
-    view.renderNow();
+    picture.solved(reply, kind, domain);
     timings.push({ kind, ms: performance.now() - editTime, cells: reply.nx * reply.ny });
     if (kind === 'full') {
       readings.show(reply, store.doc.units, ms);
@@ -74,34 +69,12 @@ const live = new LiveSolve(pool.live, {
     indicator.solved(kind, reply.nx * reply.ny, ms, live.busy);
   },
   onFailure: (failure, kind, domain) => {
-    if (kind === 'drag') showOutline(domain);
+    picture.failed(failure, kind, domain);
     indicator.show('error', 'not solved');
     status.show(failure.message, 'error');
     readings.showStale('This reading belongs to the last shape that solved.');
-    // Where the solver says the trouble is (e.g. where a passage closes), mark it on the section.
-    const markers = failure.where ? [{ x: failure.where[0], y: failure.where[1], label: 'here' }] : [];
-    view.setFlags({ hatched: [], lines: [], markers });
   },
 });
-
-function clearOverlays(): void {
-  view.setContourLevels([]);
-  view.setStreamlines([]);
-  view.setFlags({ hatched: [], lines: [], markers: [] });
-}
-
-/** The field as the view wants it, with speed ratios against the chosen reference. */
-function drawField(reply: FieldReply): void {
-  const tightest = reply.reading?.tightest ? reply.reading.stations[reply.reading.tightest.index] : null;
-  const scale = settings.reference === 'tightest station' && tightest ? 1 / tightest.meanSpeedRatio : 1;
-  const values = scale === 1 ? reply.speedRatio : reply.speedRatio.map((v) => v * scale);
-  const field: FieldImage = { nx: reply.nx, ny: reply.ny, x0: reply.x0, y0: reply.y0, h: reply.h, values };
-  view.setField(field);
-  if (reply.reading) {
-    view.setStreamlines(reply.reading.streamlines.map((s) => ({ xy: thinPolyline(s.xy, 2 * reply.h), closed: false })));
-    view.setFlags(flagShapes(reply, store.doc.units));
-  }
-}
 
 function currentDomain(doc: PortDocument): FlowDomain | null {
   const section = activeSection(doc);
@@ -124,20 +97,14 @@ function solve(doc: PortDocument, cause: ChangeCause): void {
     view.setInteractive(dragging);
     return;
   }
-  // While dragging, draw the field alone: contours, streamlines and flags of the last full solve no longer fit.
-  if (cause === 'drag' && !dragging) clearOverlays();
+  if (cause === 'drag' && !dragging) picture.dragStarted();
   dragging = cause === 'drag';
   view.setInteractive(dragging);
   // Mid-drag the outline is drawn with the field solved for it (onField), not over the last one.
-  if (!dragging) showOutline(domain);
+  if (!dragging) picture.outline(domain);
   const reading = { units: doc.units, slowFraction: settings.slowFraction, inletMeanSpeedMs: settings.inletSpeedMs };
   if (cause === 'drag') void live.request(domain, 'drag', DRAG_CELLS, null);
   else void live.request(domain, 'full', CELLS_BY_DETAIL[settings.gridDetail], reading);
-}
-
-function showOutline(domain: FlowDomain): void {
-  view.setWalls(wallLines(domain));
-  view.setClip(fluidClip(domain));
 }
 
 function showDocument(doc: PortDocument): void {
@@ -197,7 +164,7 @@ function applySettings(group: SettingsGroup): void {
   view.setLayers(settings.layers);
   view.setContourLevels(parseLevels(settings.contourLevels));
   view.setColourRange({ mode: settings.colourMode, min: settings.colourMin, max: settings.colourMax });
-  if (group === 'draw' && lastReply) drawField(lastReply);
+  if (group === 'draw' && lastReply) picture.field(lastReply);
   if (group === 'solve' || group === 'reading') solve(store.doc, 'edit');
   if (group === 'units' && settings.units !== store.doc.units) {
     store.edit('setUnits', { units: settings.units }, 'open');

@@ -102,7 +102,11 @@ export class EditorController {
     for (const [name, listener] of listeners) window.addEventListener(name, listener);
     // Captured, the pointer's events go straight to the view: the browser need not find what lies under the pointer
     // (and bring the layout up to date first) on every move. Released on pointerup by the browser.
-    this.host.setPointerCapture?.(ev.pointerId);
+    try {
+      this.host.setPointerCapture(ev.pointerId);
+    } catch {
+      // Not an active pointer (a synthetic event): without capture the drag still works, only slower.
+    }
     return true;
   }
 

@@ -1,11 +1,11 @@
-/** The app after drags that end unusually: let go on a shape that cannot be solved, a second finger on a handle. */
+/** The app during and after drags: let go on a shape that cannot be solved, a second finger on a handle, the speed reference mid-drag. */
 
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import type { PortDocument } from '../../src/document/types.ts';
 import { activeSection, activeVariant, liftHandlePosition } from '../../src/editor/index.ts';
 import { appDocument, shortSideGrip, toPage, zoomAbout } from './app-fillet.ts';
-import { openApp, startApp, type AppSession } from './app-session.ts';
+import { openApp, solveCount, startApp, waitForFullSolves, type AppSession } from './app-session.ts';
 
 /** Solves on the standard grid take seconds, longer when the machine is shared: each check gets minutes. */
 const CHECK_MS = 180_000;
@@ -31,7 +31,7 @@ function layerWidths(page: Page): Promise<{ picture: number; labels: number }> {
 
 const liftOf = (doc: PortDocument) => activeVariant(doc).parts?.valve?.lift;
 
-describe('drags that end unusually', () => {
+describe('drags: unusual ends and the picture mid-drag', () => {
   it('letting go with the valve shut on its seat (a shape that cannot be solved) ends the drag drawing', async () => {
     const { context, page, problems } = await openApp(session);
     try {
@@ -87,6 +87,42 @@ describe('drags that end unusually', () => {
       expect(await radiusOf(), 'the fillet follows the first finger only').toBeCloseTo(held, 6);
       await touch('touchEnd', [[0, ...to]]);
       expect(await radiusOf()).toBeCloseTo(held, 6);
+      expect(problems).toEqual([]);
+    } finally {
+      await context.close();
+    }
+  }, CHECK_MS);
+
+  it('with speeds against the tightest station, drag previews are scaled as the full solve was (the colour bar holds)', async () => {
+    const { context, page, problems } = await openApp(session);
+    try {
+      const choose = page.locator('.lil-controller', { has: page.locator('.lil-name', { hasText: 'ratio of speed to' }) }).locator('select');
+      // The setting sits in a folded group of the settings panel.
+      await choose.selectOption('tightest station', { force: true });
+      // Field shown over the solver's own ratio, at the first cell that is in the flow.
+      const shownOverSolved = () => page.evaluate(() => {
+        type App = { view: { content: { field: { values: ArrayLike<number> } } }; lastReply: { speedRatio: Float32Array } };
+        const app = (window as unknown as { portwright: App }).portwright;
+        const solved = app.lastReply.speedRatio;
+        const k = solved.findIndex((v) => Number.isFinite(v) && v > 0.5);
+        return app.view.content.field.values[k] / solved[k];
+      });
+      const full = await shownOverSolved();
+      // The sample's tightest station is a little faster than the inlet: every ratio is divided by its mean.
+      expect(full).toBeLessThan(0.999);
+      let grip = await shortSideGrip(page);
+      await zoomAbout(page, grip.handle, 4);
+      grip = await shortSideGrip(page);
+      const to = await grip.handleFor(8);
+      const drags = await solveCount(page, 'drag');
+      await page.mouse.move(...grip.handle);
+      await page.mouse.down();
+      for (let k = 1; k <= 4; k++) await page.mouse.move(grip.handle[0] + (k / 4) * (to[0] - grip.handle[0]), grip.handle[1] + (k / 4) * (to[1] - grip.handle[1]));
+      await expect.poll(() => solveCount(page, 'drag')).toBeGreaterThan(drags);
+      expect(await shownOverSolved()).toBeCloseTo(full, 6);
+      const fulls = await solveCount(page, 'full');
+      await page.mouse.up();
+      await waitForFullSolves(page, fulls + 1);
       expect(problems).toEqual([]);
     } finally {
       await context.close();
