@@ -1,4 +1,5 @@
 /** Defaults and range checks for the flow-reading settings. */
+import { DEFAULT_SHAPE_FACTOR_LIMIT } from '../boundary-layer/march.ts';
 import { ReadingSettingError } from './errors.ts';
 import type { LengthUnits, ReadingOptions } from './types.ts';
 
@@ -46,7 +47,7 @@ export function readingSettings(options: ReadingOptions = {}): ReadingSettings {
     inletMeanSpeedMs: inRange('inletMeanSpeedMs', 'mean inlet speed (m/s)', options.inletMeanSpeedMs ?? 60, 0.01, 1000),
     kinematicViscosityM2s: inRange('kinematicViscosityM2s', 'air kinematic viscosity (m²/s)', options.kinematicViscosityM2s ?? 1.5e-5, 1e-9, 1),
     start,
-    shapeFactorLimit: inRange('shapeFactorLimit', 'detachment shape factor', options.shapeFactorLimit ?? 2.4, 1.5, 4),
+    shapeFactorLimit: inRange('shapeFactorLimit', 'detachment shape factor', options.shapeFactorLimit ?? DEFAULT_SHAPE_FACTOR_LIMIT, 1.5, 4),
     streamlineCount: inRange('streamlineCount', 'number of streamlines', options.streamlineCount ?? 24, 0, 1000, true),
   };
 }
