@@ -12,7 +12,7 @@
 
 import { cpus, loadavg } from 'node:os';
 import type { Page } from 'playwright-core';
-import { shortSideGrip, zoomAbout, type FilletGrip } from '../test/e2e/app-fillet.ts';
+import { between, zoomedShortSideGrip } from '../test/e2e/app-fillet.ts';
 import { openApp, solveCount, startApp, waitForFullSolves, type AppSession } from '../test/e2e/app-session.ts';
 import { screenTimes, type TraceEvent } from './screen-times.ts';
 
@@ -152,13 +152,11 @@ async function measure(label: string, args: readonly string[]): Promise<void> {
   try {
     const { page, problems } = await openApp(session);
     const firstFull = (await page.evaluate(() => (window as unknown as { portwright: { timings: Stamped[] } }).portwright.timings))[0];
-    let grip: FilletGrip = await shortSideGrip(page);
-    await zoomAbout(page, grip.handle, ZOOM);
-    grip = await shortSideGrip(page);
+    const grip = await zoomedShortSideGrip(page, ZOOM);
     const tight = grip.handle;
     const generous = await grip.handleFor(END_RADIUS_MM);
     const lengthPx = Math.hypot(generous[0] - tight[0], generous[1] - tight[1]);
-    const out: Along = (t) => [tight[0] + t * (generous[0] - tight[0]), tight[1] + t * (generous[1] - tight[1])];
+    const out: Along = (t) => between(tight, generous, t);
     const back: Along = (t) => out(1 - t);
     await instrument(page);
 

@@ -3,12 +3,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { activeSection } from '../../src/editor/index.ts';
-import { appDocument, dragFillet, overlayCircles, shortSideGrip, zoomAbout } from './app-fillet.ts';
+import { appDocument, dragFillet, overlayCircles, pressAndMove, zoomedShortSideGrip } from './app-fillet.ts';
 import { fieldPixels } from './app-pixels.ts';
-import { openApp, solveCount, startApp, waitForFullSolves, type AppPage, type AppSession } from './app-session.ts';
-
-/** Solves on the standard grid take seconds, longer when the machine is shared: each check gets minutes. */
-const CHECK_MS = 180_000;
+import { CHECK_MS, openApp, solveCount, startApp, waitForFullSolves, withApp, type AppPage, type AppSession } from './app-session.ts';
 
 let session: AppSession;
 /** One page opened on the sample, shared by the checks that only look (load, pixels, help). */
@@ -22,16 +19,6 @@ beforeAll(async () => {
 afterAll(async () => {
   await session?.close();
 });
-
-/** A fresh context per editing check: no autosave or selection left over from another check. */
-async function withFreshApp(check: (app: AppPage) => Promise<void>): Promise<void> {
-  const app = await openApp(session);
-  try {
-    await check(app);
-  } finally {
-    await app.context.close();
-  }
-}
 
 const text = (page: Page, selector: string) => page.locator(selector).innerText();
 
@@ -68,12 +55,9 @@ describe('Portwright in a browser', () => {
   }, CHECK_MS);
 
   it('a larger short-side radius dragged with the mouse lowers the reported short-side peak speed ratio', async () => {
-    await withFreshApp(async ({ page, problems }) => {
+    await withApp(session, async ({ page, problems }) => {
       const before = await text(page, '[data-reading="short-side-peak"]');
-      let grip = await shortSideGrip(page);
-      // Zoom on the corner as a porter would: at the fitted scale a few mm of radius are only a few pixels.
-      await zoomAbout(page, grip.handle, 4);
-      grip = await shortSideGrip(page);
+      const grip = await zoomedShortSideGrip(page, 4);
       const nearest = Math.min(...(await overlayCircles(page)).map(([x, y]) => Math.hypot(x - grip.handle[0], y - grip.handle[1])));
       expect(nearest, 'a fillet handle is drawn where the editor puts it').toBeLessThan(1);
 
@@ -104,16 +88,11 @@ describe('Portwright in a browser', () => {
   }, CHECK_MS);
 
   it('a drag the browser cancels (pointercancel) puts the radius back and solves the full grid again', async () => {
-    await withFreshApp(async ({ page, problems }) => {
-      let grip = await shortSideGrip(page);
-      await zoomAbout(page, grip.handle, 4);
-      grip = await shortSideGrip(page);
+    await withApp(session, async ({ page, problems }) => {
+      const grip = await zoomedShortSideGrip(page, 4);
       const radiusOf = async () => activeSection(await appDocument(page)).outline.vertices[grip.vertex].filletRadius;
       const fullBefore = await solveCount(page, 'full');
-      const to = await grip.handleFor(10);
-      await page.mouse.move(...grip.handle);
-      await page.mouse.down();
-      for (let k = 1; k <= 4; k++) await page.mouse.move(grip.handle[0] + (k / 4) * (to[0] - grip.handle[0]), grip.handle[1] + (k / 4) * (to[1] - grip.handle[1]));
+      await pressAndMove(page, grip.handle, await grip.handleFor(10), 4);
       await expect.poll(radiusOf).toBeGreaterThan(grip.radius + 1);
       // What a browser sends when it takes the pointer over (playwright's mouse is pointer 1).
       await page.evaluate(() => window.dispatchEvent(new PointerEvent('pointercancel', { pointerId: 1 })));
@@ -127,7 +106,7 @@ describe('Portwright in a browser', () => {
   }, CHECK_MS);
 
   it('saves the document and opens the saved file back to the same document', async () => {
-    await withFreshApp(async ({ page, problems }) => {
+    await withApp(session, async ({ page, problems }) => {
       // Make the saved document differ from the sample, and the one open at the time of opening differ from both.
       await page.selectOption('#variant-select', 'generous short side');
       const [download] = await Promise.all([page.waitForEvent('download'), page.click('#save-button')]);
@@ -147,7 +126,7 @@ describe('Portwright in a browser', () => {
   }, CHECK_MS);
 
   it('a broken file or a bad field is named in an error and the current work is kept', async () => {
-    await withFreshApp(async ({ page, problems }) => {
+    await withApp(session, async ({ page, problems }) => {
       const before = await appDocument(page);
       const fullBefore = await solveCount(page, 'full');
       const good = JSON.stringify(before);

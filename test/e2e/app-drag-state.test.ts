@@ -4,11 +4,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import type { PortDocument } from '../../src/document/types.ts';
 import { activeSection, activeVariant, liftHandlePosition } from '../../src/editor/index.ts';
-import { appDocument, shortSideGrip, toPage, zoomAbout } from './app-fillet.ts';
-import { openApp, solveCount, startApp, waitForFullSolves, type AppSession } from './app-session.ts';
-
-/** Solves on the standard grid take seconds, longer when the machine is shared: each check gets minutes. */
-const CHECK_MS = 180_000;
+import { appDocument, between, pressAndMove, toPage, zoomedShortSideGrip } from './app-fillet.ts';
+import { CHECK_MS, solveCount, startApp, waitForFullSolves, withApp, type AppSession } from './app-session.ts';
 
 let session: AppSession;
 
@@ -33,16 +30,13 @@ const liftOf = (doc: PortDocument) => activeVariant(doc).parts?.valve?.lift;
 
 describe('drags: unusual ends and the picture mid-drag', () => {
   it('letting go with the valve shut on its seat (a shape that cannot be solved) ends the drag drawing', async () => {
-    const { context, page, problems } = await openApp(session);
-    try {
+    await withApp(session, async ({ page, problems }) => {
       const valve = activeVariant(await appDocument(page)).parts?.valve;
       if (!valve) throw new Error('the sample has no valve');
       // The lift handle dragged 4 mm past the seat: the tool holds the lift at 0, where the valve head touches the seat.
       const [from, past] = await toPage(page, [liftHandlePosition(valve), liftHandlePosition({ ...valve, lift: -4 })]);
       expect((await layerWidths(page)).picture).toBe((await layerWidths(page)).labels);
-      await page.mouse.move(...from);
-      await page.mouse.down();
-      for (let k = 1; k <= 6; k++) await page.mouse.move(from[0] + (k / 6) * (past[0] - from[0]), from[1] + (k / 6) * (past[1] - from[1]));
+      await pressAndMove(page, from, past, 6);
       await expect.poll(async () => liftOf(await appDocument(page))).toBe(0);
       await page.mouse.up();
       await expect.poll(() => page.locator('#status').getAttribute('data-level')).toBe('error');
@@ -51,17 +45,12 @@ describe('drags: unusual ends and the picture mid-drag', () => {
       const widths = await layerWidths(page);
       expect(widths.picture).toBe(widths.labels);
       expect(problems).toEqual([]);
-    } finally {
-      await context.close();
-    }
+    });
   }, CHECK_MS);
 
   it('a second finger put down on a handle mid-drag does not move the point held by the first', async () => {
-    const { context, page, problems } = await openApp(session);
-    try {
-      let grip = await shortSideGrip(page);
-      await zoomAbout(page, grip.handle, 4);
-      grip = await shortSideGrip(page);
+    await withApp(session, async ({ context, page, problems }) => {
+      const grip = await zoomedShortSideGrip(page, 4);
       const radiusOf = async () => activeSection(await appDocument(page)).outline.vertices[grip.vertex].filletRadius ?? 0;
       // Another handle in sight: the corner next to the held one.
       const section = activeSection(await appDocument(page));
@@ -72,30 +61,26 @@ describe('drags: unusual ends and the picture mid-drag', () => {
         cdp.send('Input.dispatchTouchEvent', { type, touchPoints: points.map(([id, x, y]) => ({ id, x, y })) });
       // First finger: on the fillet handle, then out along the corner's bisector to the handle of a 7 mm radius.
       const to = await grip.handleFor(7);
-      const [x0, y0] = grip.handle;
-      await touch('touchStart', [[0, x0, y0]]);
-      for (let k = 1; k <= 4; k++) await touch('touchMove', [[0, x0 + (k / 4) * (to[0] - x0), y0 + (k / 4) * (to[1] - y0)]]);
+      await touch('touchStart', [[0, ...grip.handle]]);
+      for (let k = 1; k <= 4; k++) await touch('touchMove', [[0, ...between(grip.handle, to, k / 4)]]);
       await expect.poll(radiusOf).toBeGreaterThan(grip.radius + 1);
       const held = await radiusOf();
       // Second finger: down on that corner and moved to where the fillet handle of a 5 mm radius would be, while the
       // first stays still.
       const lure = await grip.handleFor(5);
       await touch('touchStart', [[0, ...to], [1, ...other]]);
-      for (let k = 1; k <= 4; k++) await touch('touchMove', [[0, ...to], [1, other[0] + (k / 4) * (lure[0] - other[0]), other[1] + (k / 4) * (lure[1] - other[1])]]);
+      for (let k = 1; k <= 4; k++) await touch('touchMove', [[0, ...to], [1, ...between(other, lure, k / 4)]]);
       // (Touch points listed with touchEnd are the ones lifted.) The second finger is lifted first, then the first.
       await touch('touchEnd', [[1, ...lure]]);
       expect(await radiusOf(), 'the fillet follows the first finger only').toBeCloseTo(held, 6);
       await touch('touchEnd', [[0, ...to]]);
       expect(await radiusOf()).toBeCloseTo(held, 6);
       expect(problems).toEqual([]);
-    } finally {
-      await context.close();
-    }
+    });
   }, CHECK_MS);
 
   it('with speeds against the tightest station, drag previews are scaled as the full solve was (the colour bar holds)', async () => {
-    const { context, page, problems } = await openApp(session);
-    try {
+    await withApp(session, async ({ page, problems }) => {
       const choose = page.locator('.lil-controller', { has: page.locator('.lil-name', { hasText: 'ratio of speed to' }) }).locator('select');
       // The setting sits in a folded group of the settings panel.
       await choose.selectOption('tightest station', { force: true });
@@ -110,22 +95,15 @@ describe('drags: unusual ends and the picture mid-drag', () => {
       const full = await shownOverSolved();
       // The sample's tightest station is a little faster than the inlet: every ratio is divided by its mean.
       expect(full).toBeLessThan(0.999);
-      let grip = await shortSideGrip(page);
-      await zoomAbout(page, grip.handle, 4);
-      grip = await shortSideGrip(page);
-      const to = await grip.handleFor(8);
+      const grip = await zoomedShortSideGrip(page, 4);
       const drags = await solveCount(page, 'drag');
-      await page.mouse.move(...grip.handle);
-      await page.mouse.down();
-      for (let k = 1; k <= 4; k++) await page.mouse.move(grip.handle[0] + (k / 4) * (to[0] - grip.handle[0]), grip.handle[1] + (k / 4) * (to[1] - grip.handle[1]));
+      await pressAndMove(page, grip.handle, await grip.handleFor(8), 4);
       await expect.poll(() => solveCount(page, 'drag')).toBeGreaterThan(drags);
       expect(await shownOverSolved()).toBeCloseTo(full, 6);
       const fulls = await solveCount(page, 'full');
       await page.mouse.up();
       await waitForFullSolves(page, fulls + 1);
       expect(problems).toEqual([]);
-    } finally {
-      await context.close();
-    }
+    });
   }, CHECK_MS);
 });

@@ -73,24 +73,31 @@ export async function shortSideGrip(page: Page): Promise<FilletGrip> {
   return { vertex, radius: section.outline.vertices[vertex].filletRadius ?? 0, handle, handleFor };
 }
 
-/**
- * Presses on the handle, moves in `steps` equal screen steps to the handle position of `radius`, calling
- * `afterMove` after each move (e.g. to wait for the repaint), and releases.
- */
-export async function dragFillet(
-  page: Page, grip: FilletGrip, radius: number, steps: number, afterMove: (step: number) => Promise<void> = async () => {},
-): Promise<Point> {
-  const to = await grip.handleFor(radius);
-  const [x0, y0] = grip.handle;
-  await page.mouse.move(x0, y0);
+/** The point a fraction `t` of the way from `a` to `b`. */
+export function between(a: Point, b: Point, t: number): Point {
+  return [a[0] + t * (b[0] - a[0]), a[1] + t * (b[1] - a[1])];
+}
+
+/** Presses the mouse at `from` and moves it in `steps` equal steps to `to`; the button stays down. */
+export async function pressAndMove(page: Page, from: Point, to: Point, steps: number): Promise<void> {
+  await page.mouse.move(...from);
   await page.mouse.down();
-  for (let k = 1; k <= steps; k++) {
-    const t = k / steps;
-    await page.mouse.move(x0 + t * (to[0] - x0), y0 + t * (to[1] - y0));
-    await afterMove(k);
-  }
+  for (let k = 1; k <= steps; k++) await page.mouse.move(...between(from, to, k / steps));
+}
+
+/** Drags the handle in `steps` equal screen steps to the handle position of `radius` and lets go. */
+export async function dragFillet(page: Page, grip: FilletGrip, radius: number, steps: number): Promise<Point> {
+  const to = await grip.handleFor(radius);
+  await pressAndMove(page, grip.handle, to, steps);
   await page.mouse.up();
   return to;
+}
+
+/** Zooms on the short-side corner as a porter would (at the fitted scale a few mm of radius are a few pixels) and
+ * finds its handle again there. */
+export async function zoomedShortSideGrip(page: Page, factor: number): Promise<FilletGrip> {
+  await zoomAbout(page, (await shortSideGrip(page)).handle, factor);
+  return shortSideGrip(page);
 }
 
 /** Zooms the view by `factor` about a page point (as the wheel would), so a drag of a few mm spans many pixels. */

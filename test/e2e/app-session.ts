@@ -71,6 +71,9 @@ export interface AppPage {
   readonly problems: string[];
 }
 
+/** Solves on the standard grid take seconds, longer when the machine is shared: each app check gets minutes. */
+export const CHECK_MS = 180_000;
+
 /** Viewport of every check: a laptop screen. */
 export const VIEWPORT = { width: 1280, height: 800 } as const;
 
@@ -124,4 +127,15 @@ export function solveCount(page: Page, kind: 'drag' | 'full'): Promise<number> {
     (k) => (window as unknown as { portwright: { timings: Array<{ kind: string }> } }).portwright.timings.filter((t) => t.kind === k).length,
     kind,
   );
+}
+
+/** Runs `check` on the app opened in a fresh context (no autosave or selection left over from another check), and
+ * closes that context whatever happens. */
+export async function withApp(session: AppSession, check: (app: AppPage) => Promise<void>): Promise<void> {
+  const app = await openApp(session);
+  try {
+    await check(app);
+  } finally {
+    await app.context.close();
+  }
 }

@@ -1,10 +1,8 @@
 /** Typed values in the app: an exact short-side radius typed after clicking its handle; a wall named from the panel. */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { activeSection } from '../../src/editor/index.ts';
-import { appDocument, shortSideGrip, zoomAbout } from './app-fillet.ts';
-import { openApp, startApp, waitForFullSolves, type AppSession } from './app-session.ts';
-
-const CHECK_MS = 180_000;
+import { appDocument, zoomedShortSideGrip } from './app-fillet.ts';
+import { CHECK_MS, startApp, waitForFullSolves, withApp, type AppSession } from './app-session.ts';
 let session: AppSession;
 
 beforeAll(async () => {
@@ -17,11 +15,8 @@ afterAll(async () => {
 
 describe('typed values for the selection', () => {
   it('clicking the short-side fillet handle offers its radius; typing 9.5 sets exactly 9.5 and re-solves', async () => {
-    const { page, context, problems } = await openApp(session);
-    try {
-      let grip = await shortSideGrip(page);
-      await zoomAbout(page, grip.handle, 4);
-      grip = await shortSideGrip(page);
+    await withApp(session, async ({ page, problems }) => {
+      const grip = await zoomedShortSideGrip(page, 4);
       await page.mouse.click(grip.handle[0], grip.handle[1]);
       const field = page.locator('[data-field="fillet-radius"]');
       await expect.poll(() => field.inputValue()).toBe(String(grip.radius));
@@ -32,8 +27,6 @@ describe('typed values for the selection', () => {
       await waitForFullSolves(page, 2);
       await expect.poll(() => page.locator('[data-reading="short-side-peak"]').innerText(), { timeout: 60_000 }).not.toBe(before);
       expect(problems).toEqual([]);
-    } finally {
-      await context.close();
-    }
+    });
   }, CHECK_MS);
 });
