@@ -1,6 +1,7 @@
 /** Argument schemas shared by the edits, and the one place that turns a bad argument into an EditError. */
 
 import { z } from 'zod';
+import { formatPath } from '../document/errors.ts';
 import { EditError } from './errors.ts';
 
 /** A finite number (zod 4 rejects NaN and infinities). */
@@ -36,9 +37,3 @@ export function parseArgs<T>(schema: z.ZodType<T>, edit: string, raw: unknown): 
   throw new EditError(edit, path === '' ? `${edit}: ${issue.message}` : `${edit}: ${path}: ${issue.message}`);
 }
 
-/** `['point', 'vertex']` -> `point.vertex`, `['to', 1]` -> `to[1]`. */
-function formatPath(path: readonly PropertyKey[]): string {
-  let out = '';
-  for (const key of path) out += typeof key === 'number' ? `[${key}]` : `${out === '' ? '' : '.'}${String(key)}`;
-  return out;
-}

@@ -6,6 +6,7 @@
 
 import { z } from 'zod';
 import type { Parts, PortDocument, Section, Variant } from '../document/types.ts';
+import { formatPath } from '../document/errors.ts';
 import { borePartSchema, partsSchema, portPartSchema, seatPartSchema, valvePartSchema } from '../document/parts-schema.ts';
 import { variantSchema } from '../document/schema.ts';
 import { applyParts } from '../parts/apply.ts';
@@ -26,11 +27,10 @@ function variantIndex(doc: PortDocument, name: string | undefined, edit: string)
   return index;
 }
 
-/** First zod issue as "path: requirement". */
+/** First zod issue as "path: requirement", the path written as in file errors (`section.islands[0].name`). */
 function firstIssue(error: z.ZodError, prefix: string): string {
   const issue = error.issues[0];
-  const path = [prefix, ...issue.path.map(String)].filter((p) => p !== '').join('.');
-  return `${path}: ${issue.message}`;
+  return `${formatPath(prefix === '' ? issue.path : [prefix, ...issue.path])}: ${issue.message}`;
 }
 
 /** The document with variant `index` given `parts` and their regenerated geometry; `doc` itself if nothing changed. */
