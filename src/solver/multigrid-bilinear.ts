@@ -18,7 +18,7 @@
 import { diagonalOf, type Stencil } from './assemble.ts';
 
 /** Coarse cells whose diagonal (face sum + coupling) reaches this take full weight; 2 keeps wall and corner cells full. */
-export const FULL_STRENGTH_DIAGONAL = 2;
+const FULL_STRENGTH_DIAGONAL = 2;
 
 /**
  * Per coarse cell: min(1, diagonal / FULL_STRENGTH_DIAGONAL), 0 in excluded cells; I + J * ncx. Interpolation

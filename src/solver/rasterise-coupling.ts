@@ -11,7 +11,7 @@ import { MARK_INLET, MARK_OUTLET } from './types.ts';
  * of a piece at 4 Lb / h and only touches cells whose centre is within h / 4 of the boundary,
  * where the potential differs from the boundary value by less than a quarter cell's drop anyway.
  */
-export const MIN_NORMAL_DISTANCE = 0.25;
+const MIN_NORMAL_DISTANCE = 0.25;
 
 /** How far a piece's midpoint is moved into the fluid to pick its cell when it lies on a grid line, grid units. */
 const NUDGE = 1e-9;

@@ -21,7 +21,7 @@ export const H1_BLEND_HIGH = 1.65;
 /** Lowest shape factor the inverse returns (H1 -> infinity as H -> 1.1). */
 const H_MIN = 1.1 + 1e-9;
 /** H1 never goes below 3.3 (H -> infinity); H(H1) is capped here instead. */
-export const H_MAX = 8;
+const H_MAX = 8;
 
 /** Head's shape factor H1 = (delta - delta*) / theta as a function of H = delta* / theta (blended at 1.6). */
 export function headH1(shapeFactor: number): number {

@@ -10,7 +10,7 @@ import { stallCrossing, type WallFlow } from './wall-flow.ts';
 import { firstSampleAtOrAfter } from './wall-samples.ts';
 
 /** Re_theta below which Ludwieg–Tillmann is not trusted: a floor for cf and the starting theta (numerical guard). */
-export const MIN_TURBULENT_RE_THETA = 100;
+const MIN_TURBULENT_RE_THETA = 100;
 /** Largest step in momentum thicknesses: keeps RK4 stable where H1 relaxes fastest (near separation, ~0.04/theta). */
 const STEP_PER_THETA = 10;
 /** Largest step as a share of U / |dU/ds|. */

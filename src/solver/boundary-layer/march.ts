@@ -15,7 +15,7 @@ export const DEFAULT_SHAPE_FACTOR_LIMIT = 2.4;
  * Equivalent flat-plate run ahead of the wall's first sample, m: a short stretch of manifold runner ahead of the
  * port face. It sets the starting momentum thickness (and Michel's Re_x) unless initialThetaM is given.
  */
-export const DEFAULT_INITIAL_RUN_M = 0.05;
+const DEFAULT_INITIAL_RUN_M = 0.05;
 
 export interface WallMarchInput {
   /** arc length, m, strictly increasing from the wall's upstream end */

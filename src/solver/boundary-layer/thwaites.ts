@@ -3,7 +3,7 @@
 /** Thwaites' momentum-integral constant: theta^2 U^6 = 0.45 nu integral U^5 ds (Thwaites 1949). */
 export const THWAITES_A = 0.45;
 /** Exponent of U in the same integral. */
-export const THWAITES_B = 6;
+const THWAITES_B = 6;
 /** lambda in stagnation flow U = K s: 0.45 / 6 (derived from the integral). */
 export const STAGNATION_LAMBDA = THWAITES_A / THWAITES_B;
 

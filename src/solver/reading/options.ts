@@ -4,7 +4,7 @@ import { ReadingSettingError } from './errors.ts';
 import type { LengthUnits, ReadingOptions } from './types.ts';
 
 /** Metres per document unit for each units label (1 in = 25.4 mm exactly, NIST SP 811). */
-export const METRES_PER_UNIT: Readonly<Record<LengthUnits, number>> = { mm: 0.001, inch: 0.0254 };
+const METRES_PER_UNIT: Readonly<Record<LengthUnits, number>> = { mm: 0.001, inch: 0.0254 };
 
 /** Every setting filled in. */
 export interface ReadingSettings {

@@ -59,7 +59,7 @@ export function tightestStation(stations: readonly Station[], valvePhi: number |
 }
 
 /** Length-weighted centre of the inlet segments, document units. */
-export function inletCentre(domain: FlowDomain): [number, number] {
+function inletCentre(domain: FlowDomain): [number, number] {
   const { xy, marks } = domain.outer;
   const n = marks.length;
   let sx = 0, sy = 0, sum = 0;
