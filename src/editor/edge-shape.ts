@@ -3,18 +3,14 @@
 import type { Edge, Outline, Point, Section } from '../document/types.ts';
 import { arcThroughPoints, type CircleArc } from '../geometry/circle-arc.ts';
 import { EditError } from './errors.ts';
-import { outlineName, wrap } from './section-access.ts';
-import { distance, samePlace } from './vec.ts';
+import { edgeName } from './outline-parts.ts';
+import { wrap } from './section-access.ts';
+import { distance, dot, samePlace, sub } from './vec.ts';
 
 /** Start and end vertex positions of edge `index` of an outline. */
 export function edgeEnds(outline: Outline, index: number): [Point, Point] {
   const n = outline.vertices.length;
   return [outline.vertices[index].at, outline.vertices[wrap(index + 1, n)].at];
-}
-
-/** The circle arc of an arc edge; null when its three points are in line (the edge is then straight). */
-export function arcOfPoints(start: Point, through: Point, end: Point): CircleArc | null {
-  return arcThroughPoints(start, through, end);
 }
 
 /** Point at fraction `t` (0 start, 1 end) of the arc's sweep. */
@@ -49,7 +45,7 @@ export function innerPoints(edge: Edge): readonly Point[] {
 export function checkEdgeShape(section: Section, outline: Outline, island: number | undefined, index: number, edit: string): void {
   const [start, end] = edgeEnds(outline, index);
   const edge = outline.edges[index];
-  const where = `edge ${index + 1} of ${outlineName(section, island)}`;
+  const where = edgeName(section, island, index);
   if (samePlace(start, end)) throw new EditError(edit, `That would put both ends of ${where} at the same place.`);
   if (edge.kind === 'arc') checkArc(start, edge.through, end, where, edit);
   if (edge.kind === 'curve') {
@@ -66,9 +62,9 @@ function checkArc(start: Point, through: Point, end: Point, where: string, edit:
   if (samePlace(through, start) || samePlace(through, end)) {
     throw new EditError(edit, `The middle point of the arc ${where} would sit on one of its ends.`);
   }
-  if (arcOfPoints(start, through, end) !== null) return;
+  if (arcThroughPoints(start, through, end) !== null) return;
   const chord = distance(start, end);
-  const along = ((through[0] - start[0]) * (end[0] - start[0]) + (through[1] - start[1]) * (end[1] - start[1])) / chord;
+  const along = dot(sub(through, start), sub(end, start)) / chord;
   if (along < 0 || along > chord) {
     throw new EditError(edit, `The middle point of the arc ${where} would be in line with its ends but outside them.`);
   }

@@ -2,7 +2,8 @@
 
 import type { Outline, Point } from '../document/types.ts';
 import { directionTolerance, flatEdge, nearestOnPolyline } from './edge-flat.ts';
-import { arcFractionNearest, arcOfPoints, arcPointAt, edgeEnds } from './edge-shape.ts';
+import { arcThroughPoints } from '../geometry/circle-arc.ts';
+import { arcFractionNearest, arcPointAt, edgeEnds } from './edge-shape.ts';
 import { distance, nearestOnSegment } from './vec.ts';
 
 /**
@@ -13,7 +14,7 @@ export function nearestOnEdge(outline: Outline, index: number, p: Point, tol: nu
   const edge = outline.edges[index];
   const [start, end] = edgeEnds(outline, index);
   if (edge.kind === 'curve' && edge.via.length > 0) return nearestOnPolyline(flatEdge(outline, index, tol).xy, p);
-  const arc = edge.kind === 'arc' ? arcOfPoints(start, edge.through, end) : null;
+  const arc = edge.kind === 'arc' ? arcThroughPoints(start, edge.through, end) : null;
   const at = arc === null ? nearestOnSegment(p, start, end).at : arcPointAt(arc, arcFractionNearest(arc, p));
   return { at, distance: distance(at, p) };
 }

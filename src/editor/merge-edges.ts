@@ -1,7 +1,8 @@
 /** Joining the two edges at a corner into one when the corner is deleted: the geometry behind deleteVertex. */
 
 import type { Edge, Point } from '../document/types.ts';
-import { arcOfPoints, arcPointAt, innerPoints } from './edge-shape.ts';
+import { arcThroughPoints } from '../geometry/circle-arc.ts';
+import { arcPointAt, innerPoints } from './edge-shape.ts';
 import { arcLike, curveLike, lineLike } from './edge-kinds.ts';
 
 /** Relative tolerance for two arcs to count as one circle (a split leaves them equal to rounding). */
@@ -24,11 +25,11 @@ export function mergeEdges(start: Point, first: Edge, corner: Point, second: Edg
 
 /** Middle of the joined arc when both arcs lie on one circle; otherwise null. */
 function joinArcs(start: Point, through1: Point, corner: Point, through2: Point, end: Point): Point | null {
-  const a = arcOfPoints(start, through1, corner), b = arcOfPoints(corner, through2, end);
+  const a = arcThroughPoints(start, through1, corner), b = arcThroughPoints(corner, through2, end);
   if (a === null || b === null) return null;
   const r = Math.max(a.r, b.r);
   if (Math.hypot(a.cx - b.cx, a.cy - b.cy) > SAME_CIRCLE * r || Math.abs(a.r - b.r) > SAME_CIRCLE * r) return null;
   if (Math.sign(a.sweep) !== Math.sign(b.sweep)) return null;
-  const joined = arcOfPoints(start, corner, end);
+  const joined = arcThroughPoints(start, corner, end);
   return joined === null ? null : arcPointAt(joined, 0.5);
 }

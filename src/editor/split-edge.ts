@@ -1,7 +1,8 @@
 /** Splitting an edge in two at a point on it, keeping its shape: the geometry behind insertVertex. */
 
 import type { ArcEdge, CurveEdge, Edge, Point } from '../document/types.ts';
-import { arcFractionNearest, arcOfPoints, arcPointAt } from './edge-shape.ts';
+import { arcThroughPoints } from '../geometry/circle-arc.ts';
+import { arcFractionNearest, arcPointAt } from './edge-shape.ts';
 import { arcLike, curveLike, lineLike } from './edge-kinds.ts';
 import { distance, lerp, nearestOnSegment } from './vec.ts';
 
@@ -28,7 +29,7 @@ export function splitEdge(start: Point, edge: Edge, end: Point, near: Point): Ed
 }
 
 function splitArc(start: Point, edge: ArcEdge, end: Point, near: Point): EdgeSplit {
-  const arc = arcOfPoints(start, edge.through, end);
+  const arc = arcThroughPoints(start, edge.through, end);
   if (arc === null) {
     // Through point in line with the ends: a straight arc; keep each piece straight through its middle.
     const { at, t } = nearestOnSegment(near, start, end);
