@@ -9,7 +9,7 @@ export interface SpeedPeak {
 }
 
 /** Turn (radians) above which a convex corner counts as sharp: 20 degrees, a free choice. */
-export const SHARP_TURN = (20 * Math.PI) / 180;
+const SHARP_TURN = (20 * Math.PI) / 180;
 
 /**
  * Cells closer to a sharp convex corner than CORNER_CLEARANCE_CELLS cell sizes or CORNER_CLEARANCE_SHARE of the
