@@ -1,8 +1,9 @@
 /** Edges as handles: the nearest point of an edge to the pointer, and an edge's middle. */
 
 import type { Outline, Point } from '../document/types.ts';
-import { directionTolerance, flatEdge, nearestOnPolyline } from './edge-flat.ts';
+import { polylineLength, pointAtLength } from '../geometry/arc-length.ts';
 import { arcThroughPoints } from '../geometry/circle-arc.ts';
+import { directionTolerance, flatEdge, nearestOnPolyline } from './edge-flat.ts';
 import { arcFractionNearest, arcPointAt, edgeEnds } from './edge-shape.ts';
 import { distance, nearestOnSegment } from './vec.ts';
 
@@ -22,13 +23,6 @@ export function nearestOnEdge(outline: Outline, index: number, p: Point, tol: nu
 /** The point halfway along edge `index`, by length. */
 export function edgeMiddle(outline: Outline, index: number): Point {
   const xy = flatEdge(outline, index, 100 * directionTolerance(outline, index)).xy;
-  let total = 0;
-  for (let k = 0; k + 3 < xy.length; k += 2) total += Math.hypot(xy[k + 2] - xy[k], xy[k + 3] - xy[k + 1]);
-  let left = total / 2;
-  for (let k = 0; k + 3 < xy.length; k += 2) {
-    const len = Math.hypot(xy[k + 2] - xy[k], xy[k + 3] - xy[k + 1]);
-    if (left <= len && len > 0) return [xy[k] + ((xy[k + 2] - xy[k]) * left) / len, xy[k + 1] + ((xy[k + 3] - xy[k + 1]) * left) / len];
-    left -= len;
-  }
-  return [xy[xy.length - 2], xy[xy.length - 1]];
+  const middle = pointAtLength(xy, polylineLength(xy) / 2);
+  return [middle.x, middle.y];
 }
