@@ -90,6 +90,7 @@ export class FieldLayer {
     if (field && field.values.length !== field.nx * field.ny) {
       throw new RangeError(`Field has ${field.values.length} values for ${field.nx} x ${field.ny} cells.`);
     }
+    const hadField = this.field !== null;
     this.field = field;
     if (field) this.upload(field);
     else {
@@ -97,7 +98,9 @@ export class FieldLayer {
       this.mask?.dispose();
       this.values = this.mask = null;
     }
-    this.rebuildGeometry();
+    // With an outline the mesh is the outline's triangles, whatever the field's grid: a new field over an old one
+    // (each drag step, right after setClip built the mesh) keeps it.
+    if (!this.clip || hadField !== (field !== null)) this.rebuildGeometry();
   }
 
   /** Fill the value and mask textures, reusing them when the grid keeps its size (each drag step) so the GPU
