@@ -43,8 +43,9 @@ export class FlowPicture {
     // A marker left by a preview that failed goes when a later one solves (the full solve redraws all flags).
     if (kind === 'drag' && this.failureMarked) this.view.setFlags(NO_FLAGS);
     this.failureMarked = false;
-    if (kind === 'full') this.view.setContourLevels(parseLevels(this.settings.contourLevels));
     this.field(reply);
+    // After the field: contours are then traced once, on the new field (the view skips levels it already has).
+    if (kind === 'full') this.view.setContourLevels(parseLevels(this.settings.contourLevels));
     this.view.renderNow();
   }
 

@@ -102,7 +102,10 @@ export class FlowView {
     this.contentChanged();
   }
 
+  /** The same levels again (each settings change, each full solve) trace nothing: the contours already follow them. */
   setContourLevels(levels: T.ContourLevels): void {
+    const now = this.content.levels;
+    if (levels.length === now.length && levels.every((v, k) => v === now[k])) return;
     this.content.levels = [...levels];
     this.refreshContours();
     this.requestRender();
