@@ -4,7 +4,7 @@ import { MARK_INLET, MARK_OUTLET } from './types.ts';
 import type { FlowDomain, Ring } from './types.ts';
 
 /** Twice the signed area of a ring (positive when counter-clockwise), length units squared. */
-export function ringDoubleArea(ring: Ring): number {
+function ringDoubleArea(ring: Ring): number {
   const xy = ring.xy;
   const n = xy.length >> 1;
   let sum = 0;
@@ -13,6 +13,15 @@ export function ringDoubleArea(ring: Ring): number {
     sum += xy[2 * k] * xy[2 * m + 1] - xy[2 * m] * xy[2 * k + 1];
   }
   return sum;
+}
+
+/**
+ * +1 when the fluid lies left of the ring's direction of travel, -1 when it lies right. The fluid is inside the
+ * outline and outside each island, so it is left of a counter-clockwise outline or a clockwise island, whichever
+ * way round a ring arrives.
+ */
+export function fluidSense(ring: Ring, outer: boolean): 1 | -1 {
+  return outer === ringDoubleArea(ring) > 0 ? 1 : -1;
 }
 
 /** Total length of the segments of every ring that carry `mark`, length units. */

@@ -1,6 +1,6 @@
 /** The grid's frame (cell size, origin, counts) and the section's rings moved into grid units. */
 import type { FlowDomain, Ring } from './types.ts';
-import { ringDoubleArea } from './rasterise-checks.ts';
+import { fluidSense } from './rasterise-checks.ts';
 
 export interface GridFrame {
   readonly nx: number;
@@ -54,8 +54,6 @@ export function toGridRings(domain: FlowDomain, frame: GridFrame): GridRing[] {
       uv[k] = snap((ring.xy[k] - frame.x0) / frame.h);
       uv[k + 1] = snap((ring.xy[k + 1] - frame.y0) / frame.h);
     }
-    const ccw = ringDoubleArea(ring) > 0;
-    const sense: 1 | -1 = (index === 0) === ccw ? 1 : -1;
-    return { uv, ring, sense };
+    return { uv, ring, sense: fluidSense(ring, index === 0) };
   });
 }

@@ -1,4 +1,5 @@
 /** Peak speed ratio of a solved field, kept clear of partial cells and of sharp convex corners. */
+import { fluidSense } from './rasterise-checks.ts';
 import type { FlowDomain, Ring } from './types.ts';
 
 export interface SpeedPeak {
@@ -25,7 +26,7 @@ export const CORNER_CLEARANCE_SHARE = 0.01;
 
 /**
  * Vertices where the wall turns away from the fluid by more than SHARP_TURN: x, y pairs, length units.
- * The fluid side of each ring comes from its signed area (outer ring: fluid inside; islands: outside).
+ * The fluid side of each ring comes from its signed area (fluidSense: outer ring fluid inside, islands outside).
  */
 export function sharpConvexCorners(domain: FlowDomain): Float64Array {
   const out: number[] = [];
@@ -37,12 +38,7 @@ export function sharpConvexCorners(domain: FlowDomain): Float64Array {
 function collect(ring: Ring, outer: boolean, out: number[]): void {
   const { xy } = ring;
   const n = xy.length / 2;
-  let area = 0;
-  for (let k = 0; k < n; k++) {
-    const m = (k + 1) % n;
-    area += xy[2 * k] * xy[2 * m + 1] - xy[2 * m] * xy[2 * k + 1];
-  }
-  const fluidLeft = outer === area > 0;
+  const fluidLeft = fluidSense(ring, outer) === 1;
   for (let k = 0; k < n; k++) {
     const a = (k + n - 1) % n;
     const c = (k + 1) % n;

@@ -1,5 +1,5 @@
 /** Speed ratio along each named wall, reconstructed at the wall from the cell potentials, for the boundary-layer march. */
-import { ringDoubleArea } from './rasterise-checks.ts';
+import { fluidSense } from './rasterise-checks.ts';
 import { MARK_WALL } from './types.ts';
 import type { CutGrid, FlowDomain, Ring, WallSpeeds } from './types.ts';
 
@@ -52,8 +52,7 @@ function wallRuns(domain: FlowDomain): WallRun[] {
   [domain.outer, ...domain.islands].forEach((ring, index) => {
     const n = ring.marks.length;
     const key = (k: number): number => (ring.marks[k % n] === MARK_WALL ? ring.wallIds[k % n] : -2);
-    const area = ringDoubleArea(ring);
-    const sense = (index === 0) === area > 0 ? 1 : -1;
+    const sense = fluidSense(ring, index === 0);
     let start = 0;
     while (start < n && key(start) === key(start + n - 1)) start++;
     const closed = start === n;
