@@ -3,7 +3,7 @@
 import type { Outline, Point } from '../document/types.ts';
 import { flattenEdge } from '../geometry/flatten-edge.ts';
 import { edgeEnds } from './edge-shape.ts';
-import { distance } from './vec.ts';
+import { distance, nearestOnSegment } from './vec.ts';
 
 /** The parts of the kernel's flattened edge the editor uses. */
 export interface FlatEdge {
@@ -42,10 +42,7 @@ export function nearestOnPolyline(xy: Float64Array, p: Point): { at: Point; dist
   let best: Point = [xy[0], xy[1]];
   let bestDistance = distance(best, p);
   for (let k = 0; k + 3 < xy.length; k += 2) {
-    const ax = xy[k], ay = xy[k + 1], dx = xy[k + 2] - ax, dy = xy[k + 3] - ay;
-    const len2 = dx * dx + dy * dy;
-    const t = len2 > 0 ? Math.min(1, Math.max(0, ((p[0] - ax) * dx + (p[1] - ay) * dy) / len2)) : 0;
-    const at: Point = [ax + t * dx, ay + t * dy];
+    const { at } = nearestOnSegment(p, [xy[k], xy[k + 1]], [xy[k + 2], xy[k + 3]]);
     const d = distance(at, p);
     if (d < bestDistance) { best = at; bestDistance = d; }
   }
