@@ -1,23 +1,25 @@
-/** A pool of solver workers (one per spare core): one serves live edits, all share sweeps. */
+/** A pool of solver workers (one per spare core): one serves live edits, the others are started for sweeps. */
 import type * as Comlink from 'comlink';
 import type { SolveReply } from './protocol.ts';
 import { SolverClient, type SolveJob } from './solver-client.ts';
 
 export class SolverPool {
-  readonly clients: readonly SolverClient[];
+  /** The worker that serves live editing, started with the pool. */
+  readonly live: SolverClient;
+  /** Workers for sweeps, started by the first sweep: live editing alone never pays for them. */
+  private sweepers: readonly SolverClient[] | null = null;
 
   /** `createEndpoint` makes one worker (or a port in tests); `size` defaults to one per spare core. */
-  constructor(createEndpoint: () => Comlink.Endpoint, size = defaultPoolSize()) {
-    this.clients = Array.from({ length: Math.max(1, size) }, () => new SolverClient(createEndpoint()));
+  constructor(private readonly createEndpoint: () => Comlink.Endpoint, private readonly size = defaultPoolSize()) {
+    this.live = new SolverClient(createEndpoint());
   }
 
-  /** The worker that serves live editing. */
-  get live(): SolverClient {
-    return this.clients[0];
-  }
-
-  /** Solve independent jobs (lifts, variants) across the pool; results in job order. */
+  /** Solve independent jobs (lifts, variants) across the pool, on the live worker when it is the only one;
+   * results in job order. */
   async sweep(jobs: readonly SolveJob[], onProgress?: (done: number, total: number) => void): Promise<SolveReply[]> {
+    this.sweepers ??= this.size > 1
+      ? Array.from({ length: this.size - 1 }, () => new SolverClient(this.createEndpoint()))
+      : [this.live];
     const replies: SolveReply[] = new Array(jobs.length);
     let next = 0;
     let done = 0;
@@ -29,17 +31,17 @@ export class SolverPool {
         onProgress?.(++done, jobs.length);
       }
     };
-    const sweepers = this.clients.length > 1 ? this.clients.slice(1) : this.clients;
-    await Promise.all(sweepers.map(runOn));
+    await Promise.all(this.sweepers.map(runOn));
     return replies;
   }
 
   dispose(): void {
-    for (const client of this.clients) client.dispose();
+    this.live.dispose();
+    for (const client of this.sweepers ?? []) if (client !== this.live) client.dispose();
   }
 }
 
-export function defaultPoolSize(): number {
+function defaultPoolSize(): number {
   const cores = typeof navigator !== 'undefined' ? navigator.hardwareConcurrency || 2 : 2;
   return Math.max(1, cores - 1);
 }

@@ -142,8 +142,11 @@ describe('solver worker API over a MessageChannel', () => {
     const domain = sampleDomain();
     const sizes = [4_000, 8_000, 12_000, 16_000];
     const progress: number[] = [];
+    // Only the live worker starts with the pool; the first sweep starts the other two.
+    expect(channels.length).toBe(1);
     const replies = await pool.sweep(sizes.map((targetCells) => ({ domain, targetCells })), (done) => progress.push(done));
     expect(progress).toEqual([1, 2, 3, 4]);
+    expect(channels.length).toBe(3);
     const cells = replies.map((r) => (r.ok ? r.nx * r.ny : 0));
     for (let k = 1; k < cells.length; k++) expect(cells[k]).toBeGreaterThan(cells[k - 1]);
   });
