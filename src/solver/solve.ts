@@ -6,7 +6,7 @@ import { pcg } from './pcg.ts';
 import { paddedVector, residual } from './pcg-operator.ts';
 import { rasterise } from './rasterise.ts';
 import { STATION_COUNT, stationFluxes, worstImbalance } from './stations-flux.ts';
-import { MARK_INLET, type CutGrid, type FlowDomain, type PotentialField, type SolveOptions, type SolveResult } from './types.ts';
+import { MARK_INLET, type CutGrid, type FlowDomain, type SolveOptions, type SolveResult } from './types.ts';
 import { boundaryFlux, speedRatio } from './velocity.ts';
 import { markedLength } from './rasterise-checks.ts';
 import { peakSpeed, sharpConvexCorners } from './velocity-peak.ts';
@@ -25,15 +25,10 @@ export class SolveSupersededError extends Error {
   }
 }
 
-export interface GridSolveOptions {
+/** The solve settings of SolveOptions (tolerance, iteration cap, warm start, stop check), on a ready grid. */
+export interface GridSolveOptions extends Pick<SolveOptions, 'tolerance' | 'maxIterations' | 'warmStart' | 'shouldStop'> {
   /** Total inlet length, length units: mean inlet speed = inlet flux / inletLength. */
   readonly inletLength: number;
-  /** Relative residual to stop at; default 1e-8. */
-  readonly tolerance?: number;
-  /** Iteration cap; default 200. */
-  readonly maxIterations?: number;
-  readonly warmStart?: PotentialField;
-  readonly shouldStop?: () => boolean;
   /** Told the relative residual after every iteration. */
   readonly onIteration?: (iteration: number, relativeResidual: number) => void;
   /** Cells to solve, i + j * nx; default connectedCells(grid). */
