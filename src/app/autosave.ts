@@ -29,7 +29,3 @@ export function autosaver(): (doc: PortDocument) => void {
     }, DELAY_MS);
   };
 }
-
-export function clearAutosave(): void {
-  localStorage.removeItem(KEY);
-}

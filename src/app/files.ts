@@ -12,7 +12,7 @@ export interface FileHandlers {
 /** Largest file we read, bytes (the loader has its own limit on text too). */
 const MAX_FILE_BYTES = 5 * 1024 * 1024;
 
-export async function openFile(file: File, handlers: FileHandlers): Promise<void> {
+async function openFile(file: File, handlers: FileHandlers): Promise<void> {
   if (file.size > MAX_FILE_BYTES) {
     handlers.onRejected(`"${file.name}" is ${(file.size / 1e6).toFixed(1)} MB; a section file is at most 5 MB.`, file.name);
     return;
@@ -54,7 +54,7 @@ export function downloadDocument(doc: PortDocument): string {
   return name;
 }
 
-export function fileNameFor(title: string): string {
+function fileNameFor(title: string): string {
   const stem = title.trim().toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-+|-+$/g, '') || 'section';
   return `${stem}.portwright.json`;
 }
