@@ -2,6 +2,7 @@
 
 import { z } from 'zod';
 import type { Edge, Outline, PortDocument, Point, Section } from '../document/types.ts';
+import { signedArea } from '../geometry/area.ts';
 import { edgeArgs, pointSchema } from './args.ts';
 import { checkEdgeShape, edgeEnds } from './edge-shape.ts';
 import { arcLike, curveLike, lineLike } from './edge-kinds.ts';
@@ -103,7 +104,8 @@ function bowOut(outline: Outline, start: Point, end: Point): Point {
   const along = sub(end, start);
   const right: Point = unit([along[1], -along[0]]);
   // Counter-clockwise outline: the inside is on the left of each edge, so outward is right.
-  const outward = signedArea(outline) >= 0 ? right : scale(right, -1);
+  const corners = Float64Array.from(outline.vertices.flatMap((v) => v.at));
+  const outward = signedArea(corners) >= 0 ? right : scale(right, -1);
   return add(lerp(start, end, 0.5), scale(outward, NEW_ARC_BULGE * Math.hypot(along[0], along[1])));
 }
 
@@ -112,15 +114,4 @@ function middlemost(via: readonly Point[], start: Point, end: Point): Point {
   const mid = lerp(start, end, 0.5), along = sub(end, start);
   const off = (p: Point) => Math.abs(dot(sub(p, mid), along));
   return via.reduce((best, p) => (off(p) < off(best) ? p : best));
-}
-
-/** Shoelace area of the corners (document units squared): positive for counter-clockwise. */
-function signedArea(outline: Outline): number {
-  const v = outline.vertices;
-  let twice = 0;
-  for (let k = 0; k < v.length; k++) {
-    const a = v[k].at, b = v[(k + 1) % v.length].at;
-    twice += a[0] * b[1] - b[0] * a[1];
-  }
-  return twice / 2;
 }
