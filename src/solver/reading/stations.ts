@@ -26,12 +26,14 @@ export interface StationInputs {
 export function buildStations(input: StationInputs, levels: readonly number[]): Station[] {
   const raw = levelLines(input.grid, input.phi, levels);
   const pieces = levels
-    .map((phi, k) => ({ phi, lines: clipToFluid(raw[k], input.index) }))
-    .filter((s) => totalLength(s.lines) > 0);
+    .map((phi, k) => {
+      const lines = clipToFluid(raw[k], input.index);
+      return { phi, lines, width: totalLength(lines) };
+    })
+    .filter((s) => s.width > 0);
   let [px, py] = inletCentre(input.domain);
   let distance = 0;
-  return pieces.map(({ phi, lines }) => {
-    const width = totalLength(lines);
+  return pieces.map(({ phi, lines, width }) => {
     const [midX, midY] = centroid(lines, width);
     distance += Math.hypot(midX - px, midY - py);
     px = midX;
