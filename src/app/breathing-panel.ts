@@ -1,5 +1,6 @@
 /** Valve and seat numbers at the current lift, the greatest restriction, and notes against usual practice. */
 import type { PortDocument } from '../document/types.ts';
+import { activeVariant } from '../editor/index.ts';
 import { metresPerUnit, partsBreathing, partsNotes, type PartsBreathing } from '../parts/index.ts';
 import type { mountBenchPanel } from './bench-panel.ts';
 import { heading, readingTable, type ReadingRow } from './panel-table.ts';
@@ -12,7 +13,7 @@ type BenchPanel = ReturnType<typeof mountBenchPanel>;
  * (the headless command does the same).
  */
 export function showPartsNumbers(host: HTMLElement, bench: BenchPanel, doc: PortDocument): void {
-  const parts = doc.variants.find((v) => v.name === doc.activeVariant)?.parts;
+  const parts = activeVariant(doc).parts;
   const b = parts?.valve && parts.seat ? partsBreathing(parts, doc.units) : null;
   feedBench(bench, doc, b);
   if (!parts || !b) return host.replaceChildren();

@@ -1,7 +1,9 @@
 /** Typed values of the active variant's valve, seat and test bore (lil-gui), each change sent as one edit. */
 import type GUI from 'lil-gui';
 import type { Controller } from 'lil-gui';
-import type { Parts, PortDocument } from '../document/types.ts';
+import type { PortDocument } from '../document/types.ts';
+import { activeVariant } from '../editor/index.ts';
+import { metresPerUnit } from '../parts/index.ts';
 
 type PartName = 'valve' | 'seat' | 'bore';
 type Send = (part: PartName, values: Record<string, unknown>) => void;
@@ -55,9 +57,10 @@ export class PartsPanel {
 
   /** Show the active variant's parts; hide the folder when it has none, and fields of parts it lacks. */
   update(doc: PortDocument): void {
-    const parts: Parts | undefined = doc.variants.find((v) => v.name === doc.activeVariant)?.parts;
+    const parts = activeVariant(doc).parts;
     this.folder.show(parts?.valve !== undefined);
-    const scale = doc.units === 'mm' ? 1 : 1 / 25.4;
+    // FIELDS' limits are in mm.
+    const scale = metresPerUnit('mm') / metresPerUnit(doc.units);
     for (const { field, controller } of this.controllers) {
       const part = parts?.[field.part] as Record<string, unknown> | undefined;
       const value = part?.[field.key];
