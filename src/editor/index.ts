@@ -16,7 +16,7 @@ export type { AxisSnap, SnapResult, SnapSettings } from './snap.ts';
 export { DRAG_THRESHOLD_PX, IDLE, stepTool } from './drag-tool.ts';
 export type { DragGrip, OutlineGrip, PartGrip } from './drag-edit.ts';
 export type { DragAction, ToolAction, ToolContext, ToolEvent, ToolState, ToolStep } from './drag-tool.ts';
-export { chordOf, findShortcut, INSERT_MODIFIER, POINTER_HINTS, SHORTCUTS } from './shortcuts.ts';
+export { chordOf, findShortcut, POINTER_HINTS, SHORTCUTS } from './shortcuts.ts';
 export type { CommandName, KeyPress, Shortcut, ShortcutRun } from './shortcuts.ts';
 export { editForSelection } from './selection-edits.ts';
 export type { SelectionEdit } from './selection-edits.ts';

@@ -46,12 +46,10 @@ export const POINTER_HINTS: readonly { readonly key: string; readonly descriptio
   { key: 'Drag a fillet dot', description: 'Change that corner\'s radius (the short-side radius on the short-side corner)' },
   { key: 'Drag the valve face dot', description: 'Change the lift: only the travel along the valve axis counts' },
   { key: 'Drag the gauge-line dot', description: 'Move the valve with its seat and test bore' },
+  // Shift, not Alt: Alt-click belongs to the desktop on many systems.
   { key: 'Shift+click an edge', description: 'Add a corner there (or a plain click in insert mode)' },
   { key: 'Click an edge', description: 'Select it for a, c, l, w, n, o' },
 ];
-
-/** Which modifier of a pointer event asks a click on an edge to add a corner there (Shift: Alt-click is the desktop's on many systems). */
-export const INSERT_MODIFIER = 'shiftKey' as const;
 
 /** The parts of a key press that matter; a DOM KeyboardEvent fits. */
 export interface KeyPress {
