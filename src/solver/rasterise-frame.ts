@@ -1,16 +1,9 @@
 /** The grid's frame (cell size, origin, counts) and the section's rings moved into grid units. */
-import type { FlowDomain, Ring } from './types.ts';
+import type { CutGrid, FlowDomain, Ring } from './types.ts';
 import { fluidSense } from './rasterise-checks.ts';
 
-export interface GridFrame {
-  readonly nx: number;
-  readonly ny: number;
-  /** Cell size, length units. */
-  readonly h: number;
-  /** Lower-left corner of cell (0, 0), length units. */
-  readonly x0: number;
-  readonly y0: number;
-}
+/** A grid's lattice without its cut-cell measures: counts, cell size and the lower-left corner of cell (0, 0). */
+export type GridFrame = Pick<CutGrid, 'nx' | 'ny' | 'h' | 'x0' | 'y0'>;
 
 /**
  * A ring in grid units: u = (x - x0) / h, v = (y - y0) / h, so grid lines sit on integers.

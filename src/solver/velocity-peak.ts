@@ -1,6 +1,7 @@
 /** Peak speed ratio of a solved field, kept clear of partial cells and of sharp convex corners. */
 import { fluidSense } from './rasterise-checks.ts';
-import type { FlowDomain, Ring } from './types.ts';
+import type { GridFrame } from './rasterise-frame.ts';
+import type { CutGrid, FlowDomain, Ring } from './types.ts';
 
 export interface SpeedPeak {
   readonly speedRatio: number;
@@ -60,7 +61,7 @@ function collect(ring: Ring, outer: boolean, out: number[]): void {
  * @param corners x, y pairs (sharpConvexCorners).
  */
 export function peakSpeed(
-  grid: { nx: number; ny: number; h: number; x0: number; y0: number; cellFraction: Float64Array },
+  grid: GridFrame & Pick<CutGrid, 'cellFraction'>,
   speed: Float64Array, corners: Float64Array,
 ): SpeedPeak {
   const { nx, ny, h, x0, y0, cellFraction } = grid;
@@ -81,7 +82,7 @@ export function peakSpeed(
 }
 
 /** 1 = cell centre within the clearance of a corner. */
-function cornerMask(grid: { nx: number; ny: number; h: number; x0: number; y0: number }, corners: Float64Array): Uint8Array {
+function cornerMask(grid: GridFrame, corners: Float64Array): Uint8Array {
   const { nx, ny, h, x0, y0 } = grid;
   const out = new Uint8Array(nx * ny);
   const radiusCells = Math.max(CORNER_CLEARANCE_CELLS, CORNER_CLEARANCE_SHARE * Math.hypot(nx, ny));

@@ -1,8 +1,6 @@
 /** The cell potential carried a little way into the solid, and sampled anywhere by bilinear interpolation. */
+import type { GridFrame } from '../rasterise-frame.ts';
 import type { CutGrid } from '../types.ts';
-
-/** Only the lattice is read (not the cut-cell fractions), so any cell-centred field on a grid can be sampled. */
-export type CellLattice = Pick<CutGrid, 'nx' | 'ny' | 'h' | 'x0' | 'y0'>;
 
 /**
  * A copy of `phi` (row-major i + j * nx, NaN where not solved) with `layers` rings of cells outside the solved
@@ -36,10 +34,11 @@ export function extendedPhi(grid: Pick<CutGrid, 'nx' | 'ny'>, phi: Float64Array,
 
 /**
  * Bilinear interpolation of a cell-centred field at (x, y), document units. Corners that are NaN drop out and the
- * remaining weights are rescaled; NaN when all four are NaN or the point is off the grid.
+ * remaining weights are rescaled; NaN when all four are NaN or the point is off the grid. Only the lattice is read
+ * (not the cut-cell fractions), so any cell-centred field on a grid can be sampled (a warm start's old potential too).
  * @param values row-major i + j * nx, cell centres at (x0 + (i + 0.5) h, y0 + (j + 0.5) h)
  */
-export function sampleCells(grid: CellLattice, values: Float64Array, x: number, y: number): number {
+export function sampleCells(grid: GridFrame, values: Float64Array, x: number, y: number): number {
   const { nx, ny, h } = grid;
   const u = (x - grid.x0) / h - 0.5;
   const v = (y - grid.y0) / h - 0.5;
