@@ -6,6 +6,8 @@ describe('colour range', () => {
     expect(quantile([3, 1, 2, NaN], 0.5)).toBe(2);
     expect(quantile([5, NaN, Infinity], 1)).toBe(5);
     expect(quantile([NaN], 0.5)).toBeNaN();
+    // Ordered by value, not as text (which would put 100 before 2) [derived: -1, 2, 9, 10, 100, rank 3].
+    expect(quantile(Float32Array.from([10, 9, -1, 100, 2]), 0.6)).toBe(9);
     expect(() => quantile([1], 1.5)).toThrow(RangeError);
   });
 
