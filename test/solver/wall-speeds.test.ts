@@ -180,7 +180,11 @@ describe('wallSpeeds: walls, names and samples', () => {
 
   it('gives NaN where no solved cell lies next to the wall', () => {
     const blank = new Float64Array(phi.length).fill(NaN);
-    for (const w of wallSpeeds(domain, grid, blank, 0.1)) {
+    const blankWalls = wallSpeeds(domain, grid, blank, 0.1);
+    // every wall still sampled (an empty list would pass the loop below without reading anything)
+    expect(blankWalls.map((w) => w.name)).toEqual(walls.map((w) => w.name));
+    for (const w of blankWalls) {
+      expect(w.samples.length).toBeGreaterThan(0);
       for (let q = 0; q < w.samples.length / 4; q++) expect(w.samples[4 * q + 3]).toBeNaN();
     }
   });
