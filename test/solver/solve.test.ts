@@ -1,5 +1,6 @@
 /** The solve orchestrator: supersession, the iteration cap, the result's shape. */
 import { describe, expect, it } from 'vitest';
+import { connectedCells } from '../../src/solver/connectivity.ts';
 import { SolveSupersededError, solveFlow, solveOnGrid } from '../../src/solver/solve.ts';
 import { channelGrid } from './hand-grids.ts';
 import { bend } from './rasterise-shapes.ts';
@@ -34,10 +35,14 @@ describe('solveFlow', () => {
   it('gives one value per cell, NaN exactly outside the solved cells, and wall samples', () => {
     const result = solveFlow(bend(1, 2, 256), { targetCells: 4096 });
     const { nx, ny, cellFraction } = result.grid;
+    const solved = connectedCells(result.grid);
     expect(result.phi.length).toBe(nx * ny);
     expect(result.speedRatio.length).toBe(nx * ny);
     for (let k = 0; k < nx * ny; k++) {
       if (cellFraction[k] === 0) expect(result.phi[k]).toBeNaN();
+      // finite in exactly the solved cells, potential and speed alike
+      expect(Number.isFinite(result.phi[k])).toBe(solved[k] === 1);
+      expect(Number.isFinite(result.speedRatio[k])).toBe(solved[k] === 1);
       if (Number.isFinite(result.phi[k])) {
         expect(result.phi[k]).toBeGreaterThanOrEqual(0);
         expect(result.phi[k]).toBeLessThanOrEqual(1);
