@@ -16,6 +16,8 @@ export const MAX_ISLANDS = 100;
 export const MAX_VARIANTS = 100;
 /** Length of a variant, island or wall name, characters. */
 export const MAX_NAME_LENGTH = 80;
+/** A character a name or title may not hold: they are one-line labels in the view and the command output. */
+export const CONTROL_CHARACTER = /[\u0000-\u001f\u007f]/;
 /** Length of the title, characters. */
 export const MAX_TITLE_LENGTH = 120;
 /** Length of a variant note, characters. */

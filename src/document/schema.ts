@@ -9,7 +9,7 @@ import { z } from 'zod';
 import { FORMAT_NAME, FORMAT_VERSION, type PortDocument } from './types.ts';
 import { checkParts, partsSchema } from './parts-schema.ts';
 import {
-  MAX_COORDINATE, MAX_FILLET_RADIUS, MAX_ISLANDS, MAX_NAME_LENGTH, MAX_NOTE_LENGTH, MAX_SECTION_VERTICES,
+  CONTROL_CHARACTER, MAX_COORDINATE, MAX_FILLET_RADIUS, MAX_ISLANDS, MAX_NAME_LENGTH, MAX_NOTE_LENGTH, MAX_SECTION_VERTICES,
   MAX_TITLE_LENGTH, MAX_VARIANTS, MAX_VIA_POINTS,
 } from './limits.ts';
 
@@ -18,8 +18,6 @@ function boundedNumber(min: number, max: number, requirement: string) {
   const error = `must be ${requirement}`;
   return z.number({ error }).min(min, { error }).max(max, { error });
 }
-
-const CONTROL_CHARACTER = /[\u0000-\u001f\u007f]/;
 
 /** One-line text that is not blank (names and the title are labels in the view and the command output). */
 function label(maxLength: number, what: string) {

@@ -7,15 +7,13 @@ import { edgeArgs, pointSchema } from './args.ts';
 import { checkEdgeShape, edgeEnds } from './edge-shape.ts';
 import { arcLike, curveLike, lineLike } from './edge-kinds.ts';
 import { EditError } from './errors.ts';
+import { typedName } from './names.ts';
 import { edgeName, requireEdge } from './outline-parts.ts';
 import { activeSection, outlineOf, replaceAt, withActiveSection, withOutline } from './section-access.ts';
 import { add, dot, lerp, scale, sub, unit } from './vec.ts';
 
 /** How far a new arc bulges from its chord, as a fraction of the chord: a visible bow the porter then drags. */
 export const NEW_ARC_BULGE = 0.1;
-
-/** Longest wall name kept, characters. */
-export const WALL_NAME_MAX = 60;
 
 type EdgeChange = (edge: Edge, ctx: { section: Section; outline: Outline; where: string }) => Edge;
 
@@ -50,8 +48,7 @@ export type SetWallNameArgs = z.infer<typeof setWallNameArgs>;
 /** Names a wall, e.g. "short side" (see WALL_NAMES); an empty name removes it. Surrounding spaces are dropped. */
 export function setWallName(doc: PortDocument, { edge, island, name }: SetWallNameArgs): PortDocument {
   const edit = 'setWallName';
-  const trimmed = name.trim();
-  if (trimmed.length > WALL_NAME_MAX) throw new EditError(edit, `A wall name can be at most ${WALL_NAME_MAX} characters long.`);
+  const trimmed = typedName(name, 'wall', edit);
   return changeEdge(doc, edit, edge, island, (old, { where }) => {
     if (old.role !== 'wall') throw new EditError(edit, `The ${where} is an ${old.role}; only walls carry a name.`);
     if ((old.wallName ?? '') === trimmed) return old;

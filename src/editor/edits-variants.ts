@@ -3,10 +3,8 @@
 import { z } from 'zod';
 import type { PortDocument, Variant } from '../document/types.ts';
 import { EditError } from './errors.ts';
+import { nameWithSuffix, typedName } from './names.ts';
 import { activeVariantIndex } from './section-access.ts';
-
-/** Longest variant name kept, characters. */
-export const VARIANT_NAME_MAX = 60;
 
 function requireVariant(doc: PortDocument, name: string, edit: string): number {
   const index = doc.variants.findIndex((v) => v.name === name);
@@ -16,18 +14,17 @@ function requireVariant(doc: PortDocument, name: string, edit: string): number {
 
 /** A trimmed name no other variant uses, or an EditError saying why not. */
 function freshName(doc: PortDocument, name: string, edit: string): string {
-  const trimmed = name.trim();
+  const trimmed = typedName(name, 'variant', edit);
   if (trimmed === '') throw new EditError(edit, 'A variant needs a name.');
-  if (trimmed.length > VARIANT_NAME_MAX) throw new EditError(edit, `A variant name can be at most ${VARIANT_NAME_MAX} characters long.`);
   if (doc.variants.some((v) => v.name === trimmed)) throw new EditError(edit, `There is already a variant called "${trimmed}".`);
   return trimmed;
 }
 
-/** "<base> copy", then "<base> copy 2", "<base> copy 3"... whichever is free first. */
+/** "<base> copy", then "<base> copy 2", "<base> copy 3"... whichever is free first (a long base is cut to fit the file). */
 export function copyName(doc: PortDocument, base: string): string {
   const taken = new Set(doc.variants.map((v) => v.name));
   for (let k = 1; ; k++) {
-    const name = k === 1 ? `${base} copy` : `${base} copy ${k}`;
+    const name = nameWithSuffix(base, k === 1 ? ' copy' : ` copy ${k}`);
     if (!taken.has(name)) return name;
   }
 }

@@ -26,5 +26,6 @@ export type { GeneratedGeometry } from './generated.ts';
 export {
   axisFromDrag, axisHandlePosition, liftFromDrag, liftHandlePosition, MAX_LIFT_SHARE, partHandlePosition, partHandles,
 } from './part-handles.ts';
-export { NEW_ARC_BULGE, WALL_NAME_MAX } from './edits-edges.ts';
-export { VARIANT_NAME_MAX, copyName } from './edits-variants.ts';
+export { NEW_ARC_BULGE } from './edits-edges.ts';
+export { copyName } from './edits-variants.ts';
+export { TYPED_NAME_MAX } from './names.ts';

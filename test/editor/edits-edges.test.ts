@@ -27,6 +27,8 @@ describe('setEdgeRole and setWallName', () => {
     expect(applyEdit(doc, 'setWallName', { edge: 0, name: 'floor' })).toBe(doc);
     expect(() => applyEdit(doc, 'setWallName', { edge: 3, name: 'bowl' })).toThrow(/is an inlet; only walls carry a name/);
     expect(() => applyEdit(doc, 'setWallName', { edge: 0, name: 'x'.repeat(61) })).toThrow(/at most 60 characters/);
+    // A name with a line break was taken before, and the document could then not be saved.
+    expect(() => applyEdit(doc, 'setWallName', { edge: 0, name: 'short\nside' })).toThrow(/must fit on one line/);
   });
 });
 

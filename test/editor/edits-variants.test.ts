@@ -1,4 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import { saveDocument } from '../../src/document/load.ts';
+import { MAX_NAME_LENGTH } from '../../src/document/limits.ts';
 import { applyEdit } from '../../src/editor/edits.ts';
 import { boxDocument } from './fixtures.ts';
 
@@ -22,6 +24,19 @@ describe('variant edits', () => {
     expect(() => applyEdit(doc, 'addVariant', { name: '  ' })).toThrow(/needs a name/);
     expect(() => applyEdit(doc, 'addVariant', { name: 'opened roof' })).toThrow(/already a variant called "opened roof"/);
     expect(() => applyEdit(doc, 'renameVariant', { from: 'stock', to: 'opened roof' })).toThrow(/already a variant/);
+  });
+
+  it('only makes names the file can hold: one line, and a copy of the longest name cut to fit', () => {
+    const doc = boxDocument();
+    // Before, both were taken and the document could then not be saved.
+    expect(() => applyEdit(doc, 'renameVariant', { from: 'stock', to: 'as\tcast' })).toThrow(/must fit on one line/);
+    expect(() => applyEdit(doc, 'addVariant', { name: 'two\nlines' })).toThrow(/must fit on one line/);
+    const longest = 'x'.repeat(MAX_NAME_LENGTH);
+    const long = { ...doc, variants: [{ ...doc.variants[0], name: longest }, doc.variants[1]], activeVariant: longest };
+    const copied = applyEdit(applyEdit(long, 'addVariant', {}), 'setActiveVariant', { name: longest });
+    const twice = applyEdit(copied, 'addVariant', {});
+    expect(names(twice).slice(2)).toEqual([`${'x'.repeat(MAX_NAME_LENGTH - 5)} copy`, `${'x'.repeat(MAX_NAME_LENGTH - 7)} copy 2`]);
+    expect(() => saveDocument(twice)).not.toThrow();
   });
 
   it('renames a variant and follows it when it is active', () => {
