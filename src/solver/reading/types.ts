@@ -56,16 +56,10 @@ export interface Station {
   readonly y2: number;
 }
 
-/** The narrowest station upstream of the valve. */
-export interface TightestStation {
+/** The narrowest station upstream of the valve: its width, span ends and distance from the inlet (see Station). */
+export interface TightestStation extends Pick<Station, 'width' | 'x1' | 'y1' | 'x2' | 'y2' | 'distanceFromInlet'> {
   /** index into FlowReading.stations */
   readonly index: number;
-  readonly width: number;
-  readonly x1: number;
-  readonly y1: number;
-  readonly x2: number;
-  readonly y2: number;
-  readonly distanceFromInlet: number;
 }
 
 export interface SlowZones {
@@ -79,18 +73,14 @@ export interface SlowZones {
   readonly largest: { readonly x: number; readonly y: number; readonly radius: number; readonly area: number } | null;
 }
 
-export interface OverWideStation {
+/** A station wider than its neighbours: its width and span ends (see Station), and by how much. */
+export interface OverWideStation extends Pick<Station, 'width' | 'x1' | 'y1' | 'x2' | 'y2'> {
   /** index into FlowReading.stations */
   readonly index: number;
-  readonly width: number;
   /** Width of the smoothed envelope there, document units. */
   readonly envelope: number;
   /** width - envelope, document units. */
   readonly excess: number;
-  readonly x1: number;
-  readonly y1: number;
-  readonly x2: number;
-  readonly y2: number;
 }
 
 /** A point along a wall; s is the arc length from the wall's upstream end, document units. */
