@@ -2,13 +2,19 @@
 
 import { z } from 'zod';
 import { formatPath } from '../document/errors.ts';
+import { MAX_COORDINATE } from '../document/limits.ts';
 import { EditError } from './errors.ts';
 
 /** A finite number (zod 4 rejects NaN and infinities). */
 export const finite = z.number();
 
+/** A coordinate the file can hold, document units: a point beyond it would make a document that cannot be saved. */
+const coordinate = finite
+  .min(-MAX_COORDINATE, `A point must lie within ${MAX_COORDINATE} of the origin.`)
+  .max(MAX_COORDINATE, `A point must lie within ${MAX_COORDINATE} of the origin.`);
+
 /** [x, y] in document units. */
-export const pointSchema = z.tuple([finite, finite]).readonly();
+export const pointSchema = z.tuple([coordinate, coordinate]).readonly();
 
 /** A 0-based position in a list. */
 export const indexSchema = z.number().int().min(0);

@@ -1,6 +1,7 @@
 /** Edits of the points of the active section: move a point, insert or delete a corner, set a corner's fillet radius. */
 
 import { z } from 'zod';
+import { MAX_FILLET_RADIUS } from '../document/limits.ts';
 import type { Outline, PortDocument, Vertex } from '../document/types.ts';
 import { edgeArgs, finite, pointRefSchema, pointSchema, vertexArgs } from './args.ts';
 import { checkEdgeShape, edgeEnds } from './edge-shape.ts';
@@ -96,17 +97,18 @@ export function deleteVertex(doc: PortDocument, { vertex, island }: DeleteVertex
 
 export const setFilletRadiusArgs = z.strictObject({
   ...vertexArgs,
-  radius: finite.min(0, 'A fillet radius cannot be negative; use 0 for a sharp corner.'),
+  radius: finite
+    .min(0, 'A fillet radius cannot be negative; use 0 for a sharp corner.')
+    .max(MAX_FILLET_RADIUS, `A fillet radius can be at most ${MAX_FILLET_RADIUS}.`),
 });
 export type SetFilletRadiusArgs = z.infer<typeof setFilletRadiusArgs>;
 
 /**
- * Sets the fillet radius (document units) of a corner; 0 makes it sharp (the field is then left out).
+ * Sets the fillet radius (document units; its bounds are checked by setFilletRadiusArgs) of a corner; 0 makes it sharp (the field is then left out).
  * On the corner where the short side turns into the seat this is the short-side radius.
  */
 export function setFilletRadius(doc: PortDocument, { vertex, island, radius }: SetFilletRadiusArgs): PortDocument {
   const edit = 'setFilletRadius';
-  if (!(radius >= 0) || !Number.isFinite(radius)) throw new EditError(edit, 'A fillet radius must be a length of 0 or more.');
   const section = activeSection(doc, edit);
   const outline = outlineOf(section, island, edit);
   const old = requireVertex(section, outline, island, vertex, edit);

@@ -21,6 +21,10 @@ describe('applyEdit', () => {
       ['makeLine', { edge: 0, extra: true }, /^makeLine: .*"extra"/],
       ['movePoint', null, /^movePoint: /],
       ['movePoint', { point: { kind: 'vertex', vertex: 1 }, to: [Number.POSITIVE_INFINITY, 0] }, /^movePoint: to\[0\]: /],
+      // Past the file's bounds the document could not be saved.
+      ['movePoint', { point: { kind: 'vertex', vertex: 1 }, to: [0, -2e5] }, /^movePoint: to\[1\]: A point must lie within 100000/],
+      ['setFilletRadius', { vertex: 1, radius: 2e5 }, /^setFilletRadius: radius: A fillet radius can be at most 100000/],
+      ['setFilletRadius', { vertex: 1, radius: -1 }, /^setFilletRadius: radius: A fillet radius cannot be negative/],
     ];
     for (const [name, args, message] of bad) {
       let caught: unknown;
