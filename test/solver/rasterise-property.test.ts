@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { rasterise } from '../../src/solver/rasterise.ts';
 import { MARK_INLET, MARK_OUTLET, MARK_WALL } from '../../src/solver/types.ts';
 import type { CutGrid } from '../../src/solver/types.ts';
-import { domainOf, polygonArea, ringOf } from './rasterise-shapes.ts';
+import { domainOf, fluidArea, polygonArea, ringOf } from './rasterise-shapes.ts';
 import type { Pt } from './rasterise-shapes.ts';
 
 /** Counter-clockwise triangle with its longest edge as inlet and the next as outlet. */
@@ -34,12 +34,6 @@ const triangle = fc.tuple(point, point, point).filter((t) => Math.abs(polygonAre
 /** Vertices on a lattice of step 1/4, so that with h = 1/4 they fall on grid nodes and edges often run along grid lines. */
 const latticePoint = fc.tuple(fc.integer({ min: 0, max: 16 }), fc.integer({ min: 0, max: 16 })).map(([a, b]): Pt => [a / 4, b / 4]);
 const latticeTriangle = fc.tuple(latticePoint, latticePoint, latticePoint).filter((t) => Math.abs(polygonArea(t)) > 0.5);
-
-function fluidArea(grid: CutGrid): number {
-  let sum = 0;
-  for (const f of grid.cellFraction) sum += f;
-  return sum * grid.h * grid.h;
-}
 
 describe('rasterise: property checks on random triangles', () => {
   it('total fluid area equals the triangle area', () => {

@@ -1,6 +1,6 @@
 /** Small hand-made flow domains for the rasteriser, connectivity and wall-speed tests. */
 import { MARK_INLET, MARK_OUTLET, MARK_WALL } from '../../src/solver/types.ts';
-import type { FlowDomain, Ring } from '../../src/solver/types.ts';
+import type { CutGrid, FlowDomain, Ring } from '../../src/solver/types.ts';
 
 export type Pt = readonly [number, number];
 
@@ -27,6 +27,13 @@ export function polygonArea(points: readonly Pt[]): number {
     sum += x0 * y1 - x1 * y0;
   }
   return sum / 2;
+}
+
+/** Fluid area the rasteriser measured: sum of cell fractions times h^2, length units squared. */
+export function fluidArea(grid: CutGrid): number {
+  let sum = 0;
+  for (const f of grid.cellFraction) sum += f;
+  return sum * grid.h * grid.h;
 }
 
 /**

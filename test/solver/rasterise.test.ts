@@ -2,19 +2,13 @@ import { describe, expect, it } from 'vitest';
 import { FlowSetupError, MAX_CELLS } from '../../src/solver/errors.ts';
 import { rasterise } from '../../src/solver/rasterise.ts';
 import { MARK_INLET, MARK_OUTLET, MARK_WALL } from '../../src/solver/types.ts';
-import type { CutGrid, FlowDomain } from '../../src/solver/types.ts';
-import { channel, domainOf, polygonArea, portSection, ringOf } from './rasterise-shapes.ts';
+import type { FlowDomain } from '../../src/solver/types.ts';
+import { channel, domainOf, fluidArea, polygonArea, portSection, ringOf } from './rasterise-shapes.ts';
 import type { Pt } from './rasterise-shapes.ts';
 
 const W = MARK_WALL;
 const IN = MARK_INLET;
 const OUT = MARK_OUTLET;
-
-function fluidArea(grid: CutGrid): number {
-  let sum = 0;
-  for (const f of grid.cellFraction) sum += f;
-  return sum * grid.h * grid.h;
-}
 
 /** A polygon with one inlet and one outlet edge (edges 0 and 1), the rest walls. */
 function withPorts(points: readonly Pt[], islands: readonly (readonly Pt[])[] = []): FlowDomain {
