@@ -1,13 +1,17 @@
 /** The settings panel (lil-gui) over the one settings object; tells the app which group changed. */
 import GUI from 'lil-gui';
+import { CELLS_BY_DETAIL } from './grid-detail.ts';
 import type { AppSettings } from './settings.ts';
+import { cellsText } from './solve-indicator.ts';
 
 export type SettingsGroup = 'solve' | 'reading' | 'draw' | 'units' | 'edit';
 
 export function buildSettingsPanel(host: HTMLElement, settings: AppSettings, onChange: (group: SettingsGroup) => void): GUI {
   const gui = new GUI({ container: host, title: 'Settings' });
   const solve = gui.addFolder('Solve');
-  solve.add(settings, 'gridDetail', { 'preview (60k cells)': 'preview', 'standard (250k cells)': 'standard', 'fine (1M cells)': 'fine' })
+  // Labels from the cell counts themselves, e.g. "standard (250k cells)".
+  const details = Object.fromEntries(Object.entries(CELLS_BY_DETAIL).map(([detail, cells]) => [`${detail} (${cellsText(cells)})`, detail]));
+  solve.add(settings, 'gridDetail', details)
     .name('grid detail').onFinishChange(() => onChange('solve'));
   solve.add(settings, 'units', { millimetres: 'mm', inches: 'inch' }).name('units').onFinishChange(() => onChange('units'));
 

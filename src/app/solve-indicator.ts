@@ -22,7 +22,7 @@ export class SolveIndicator {
   }
 }
 
-/** "31k cells", "1.2M cells". */
+/** "31k cells", "1.0M cells" (a million and more in millions). */
 export function cellsText(cells: number): string {
-  return `${cells > 1e6 ? (cells / 1e6).toFixed(1) + 'M' : Math.round(cells / 1000) + 'k'} cells`;
+  return `${cells >= 1e6 ? (cells / 1e6).toFixed(1) + 'M' : Math.round(cells / 1000) + 'k'} cells`;
 }
