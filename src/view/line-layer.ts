@@ -84,11 +84,6 @@ export class LineLayer {
     this.material.gapSize = this.style.dashPx[1] / pxPerUnit;
   }
 
-  /** True when it has something to draw. */
-  get hasLines(): boolean {
-    return this.object.visible;
-  }
-
   dispose(): void {
     this.object.geometry.dispose();
     this.material.dispose();

@@ -93,11 +93,6 @@ export class PointerControls {
     if (this.target.hasPointerCapture?.(ev.pointerId)) this.target.releasePointerCapture(ev.pointerId);
   }
 
-  /** True while a drag or pinch is under way. */
-  get dragging(): boolean {
-    return this.active.size > 0;
-  }
-
   dispose(): void {
     for (const [type, fn, opts] of this.listeners) this.target.removeEventListener(type, fn, opts);
     this.active.clear();
