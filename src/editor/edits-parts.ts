@@ -12,20 +12,14 @@ import { variantSchema } from '../document/schema.ts';
 import { applyParts } from '../parts/apply.ts';
 import { PartsError } from '../parts/errors.ts';
 import { EditError } from './errors.ts';
-import { replaceAt } from './section-access.ts';
+import { replaceAt, variantIndex } from './section-access.ts';
 
 const PART_SCHEMAS = { valve: valvePartSchema, seat: seatPartSchema, bore: borePartSchema, port: portPartSchema } as const;
 type PartName = keyof typeof PART_SCHEMAS;
 
+/** The variant to change; absent: the active one. */
 const variantName = z.string().optional();
 
-/** Index of the variant named `name`, or of the active one. */
-function variantIndex(doc: PortDocument, name: string | undefined, edit: string): number {
-  const wanted = name ?? doc.activeVariant;
-  const index = doc.variants.findIndex((v) => v.name === wanted);
-  if (index < 0) throw new EditError(edit, `There is no variant called "${wanted}".`);
-  return index;
-}
 
 /** First zod issue as "path: requirement", the path written as in file errors (`section.islands[0].name`). */
 function firstIssue(error: z.ZodError, prefix: string): string {
@@ -63,7 +57,7 @@ export type SetPartArgs = z.infer<typeof setPartArgs>;
 /** Changes some numbers of one part (a new part needs all of them); `values.axis` may give part of the axis. */
 export function setPart(doc: PortDocument, { variant, part, values }: SetPartArgs): PortDocument {
   const edit = 'setPart';
-  const index = variantIndex(doc, variant, edit);
+  const index = variantIndex(doc, variant ?? doc.activeVariant, edit);
   const parts = doc.variants[index].parts ?? {};
   const old = parts[part as PartName] as Record<string, unknown> | undefined;
   const merged: Record<string, unknown> = { ...old, ...values };
@@ -79,7 +73,7 @@ export type SetPartsArgs = z.infer<typeof setPartsArgs>;
 /** Gives a variant a whole new set of parts at once (adding a seat and bore together needs this). */
 export function setParts(doc: PortDocument, { variant, parts }: SetPartsArgs): PortDocument {
   const edit = 'setParts';
-  const index = variantIndex(doc, variant, edit);
+  const index = variantIndex(doc, variant ?? doc.activeVariant, edit);
   const parsed = partsSchema.safeParse(parts);
   if (!parsed.success) throw new EditError(edit, firstIssue(parsed.error, 'parts'));
   return withParts(doc, index, parsed.data, edit);
@@ -91,7 +85,7 @@ export type SetLiftArgs = z.infer<typeof setLiftArgs>;
 /** Moves the valve to `lift` (document units) along its axis. */
 export function setLift(doc: PortDocument, { variant, lift }: SetLiftArgs): PortDocument {
   const edit = 'setLift';
-  const index = variantIndex(doc, variant, edit);
+  const index = variantIndex(doc, variant ?? doc.activeVariant, edit);
   const valve = doc.variants[index].parts?.valve;
   if (!valve) throw new EditError(edit, `"${doc.variants[index].name}" has no valve part to lift; add a valve first.`);
   return setPart(doc, { variant: doc.variants[index].name, part: 'valve', values: { lift } });
@@ -102,7 +96,7 @@ export type RemovePartsArgs = z.infer<typeof removePartsArgs>;
 
 /** Drops a variant's parts; their last geometry stays in the section as if drawn by hand. */
 export function removeParts(doc: PortDocument, { variant }: RemovePartsArgs): PortDocument {
-  const index = variantIndex(doc, variant, 'removeParts');
+  const index = variantIndex(doc, variant ?? doc.activeVariant, 'removeParts');
   const { parts, ...rest } = doc.variants[index];
   if (!parts) return doc;
   return { ...doc, variants: replaceAt(doc.variants, index, rest) };

@@ -4,13 +4,7 @@ import { z } from 'zod';
 import type { PortDocument, Variant } from '../document/types.ts';
 import { EditError } from './errors.ts';
 import { nameWithSuffix, typedName } from './names.ts';
-import { activeVariantIndex } from './section-access.ts';
-
-function requireVariant(doc: PortDocument, name: string, edit: string): number {
-  const index = doc.variants.findIndex((v) => v.name === name);
-  if (index < 0) throw new EditError(edit, `There is no variant called "${name}".`);
-  return index;
-}
+import { activeVariantIndex, variantIndex } from './section-access.ts';
 
 /** A trimmed name no other variant uses, or an EditError saying why not. */
 function freshName(doc: PortDocument, name: string, edit: string): string {
@@ -50,7 +44,7 @@ export type RenameVariantArgs = z.infer<typeof renameVariantArgs>;
 /** Renames a variant; the active variant stays active under its new name. */
 export function renameVariant(doc: PortDocument, { from, to }: RenameVariantArgs): PortDocument {
   const edit = 'renameVariant';
-  const index = requireVariant(doc, from, edit);
+  const index = variantIndex(doc, from, edit);
   if (to.trim() === from) return doc;
   const newName = freshName(doc, to, edit);
   const variants = doc.variants.map((v, k) => (k === index ? { ...v, name: newName } : v));
@@ -62,7 +56,7 @@ export type SetActiveVariantArgs = z.infer<typeof setActiveVariantArgs>;
 
 /** Makes another variant the one shown, edited and solved. */
 export function setActiveVariant(doc: PortDocument, { name }: SetActiveVariantArgs): PortDocument {
-  requireVariant(doc, name, 'setActiveVariant');
+  variantIndex(doc, name, 'setActiveVariant');
   return doc.activeVariant === name ? doc : { ...doc, activeVariant: name };
 }
 
@@ -72,7 +66,7 @@ export type DeleteVariantArgs = z.infer<typeof deleteVariantArgs>;
 /** Deletes a variant (never the last one). Deleting the active one activates the one before it (or after, if first). */
 export function deleteVariant(doc: PortDocument, { name }: DeleteVariantArgs): PortDocument {
   const edit = 'deleteVariant';
-  const index = requireVariant(doc, name, edit);
+  const index = variantIndex(doc, name, edit);
   if (doc.variants.length === 1) throw new EditError(edit, `"${name}" is the only variant; a document keeps at least one.`);
   const variants = doc.variants.filter((_, k) => k !== index);
   const activeVariant = doc.activeVariant === name ? variants[Math.max(0, index - 1)].name : doc.activeVariant;

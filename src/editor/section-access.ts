@@ -10,6 +10,13 @@ export function activeVariantIndex(doc: PortDocument, edit: string): number {
   return index;
 }
 
+/** Index of the variant named `name`; throws EditError when there is none. */
+export function variantIndex(doc: PortDocument, name: string, edit: string): number {
+  const index = doc.variants.findIndex((v) => v.name === name);
+  if (index < 0) throw new EditError(edit, `There is no variant called "${name}".`);
+  return index;
+}
+
 /** The active variant (its section and its parts); throws EditError when the active name matches none. */
 export function activeVariant(doc: PortDocument, edit = ''): Variant {
   return doc.variants[activeVariantIndex(doc, edit)];
