@@ -20,7 +20,6 @@ type PartName = keyof typeof PART_SCHEMAS;
 /** The variant to change; absent: the active one. */
 const variantName = z.string().optional();
 
-
 /** First zod issue as "path: requirement", the path written as in file errors (`section.islands[0].name`). */
 function firstIssue(error: z.ZodError, prefix: string): string {
   const issue = error.issues[0];
