@@ -1,6 +1,6 @@
 /** Flow-bench arithmetic: ideal speed and flow at a test pressure, test-pressure and standard-air corrections, C_D. */
 
-import { R_DRY_AIR, STANDARD_DENSITY_KGM3, STANDARD_PRESSURE_PA } from './air.ts';
+import { R_DRY_AIR, STANDARD_DENSITY_KGM3, STANDARD_PRESSURE_PA, STANDARD_TEMPERATURE_K } from './air.ts';
 import { BreathingInputError, requireNonNegative, requirePositive } from './errors.ts';
 import { curtainArea, throatArea, valveHeadArea, type SeatCut, type ValveHead } from './valve-areas.ts';
 
@@ -90,7 +90,8 @@ export function compressibleTestPressureFactor(
   gamma = GAMMA_AIR,
 ): number {
   requirePositive(fromPa, 'fromPa', 'Test pressure read at');
-  const room: NozzleGas = { upstreamPressurePa: roomPressurePa, upstreamTemperatureK: 288.15, gamma };
+  // Temperature cancels in the ratio; standard temperature stands in for the room's.
+  const room: NozzleGas = { upstreamPressurePa: roomPressurePa, upstreamTemperatureK: STANDARD_TEMPERATURE_K, gamma };
   return nozzleMassFlow(1, room, roomPressurePa - toPa) / nozzleMassFlow(1, room, roomPressurePa - fromPa);
 }
 
