@@ -49,7 +49,6 @@ export function connectedCells(grid: CutGrid): Uint8Array {
 /** Marks `bit` on every cell reachable through open faces from a cell whose `seed` is positive; returns the count. */
 function flood(grid: CutGrid, seed: Float64Array, bit: number, reached: Uint8Array, stack: Int32Array): number {
   const { nx, openX, openY } = grid;
-  const strideX = nx + 1;
   let top = 0;
   for (let c = 0; c < seed.length; c++) {
     if (seed[c] > 0 && (reached[c] & bit) === 0) {
