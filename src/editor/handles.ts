@@ -2,7 +2,7 @@
 
 import type { Outline, Parts, Point, Section } from '../document/types.ts';
 import { filletHandlePosition } from './fillet-handle.ts';
-import { generatedGeometry, isGenerated } from './generated.ts';
+import { generatedGeometry, isGenerated, type GeneratedGeometry } from './generated.ts';
 import { partHandlePosition, partHandles } from './part-handles.ts';
 import { islandPart, isPartHandle, type HandleKind, type HandleRef } from './refs.ts';
 import { edgeMiddle } from './handle-edge.ts';
@@ -28,18 +28,23 @@ export const HANDLE_ORDER: readonly HandleKind[] = ['vertex', 'through', 'via', 
  * With `parts` (the variant's, e.g. `activeVariant(doc).parts`), what they generate gets no handles: the valve head
  * island with a valve, and the valve pocket between the anchor corners with a seat and bore (the anchors themselves
  * keep theirs); and a valve adds the lift and valve-axis handles. Without `parts` every corner is listed, as before.
+ * `generated` is what `parts` generate, for a caller that has it already (hitTest).
  */
-export function listHandles(section: Section, parts?: Parts): Handle[] {
-  const generated = generatedGeometry(section, parts);
-  const outlines = [{ outline: section.outline, island: undefined as number | undefined },
-    ...section.islands.map((isl, k) => ({ outline: isl.outline, island: k as number | undefined }))]
-    .filter(({ island }) => island === undefined || !generated.islands.has(island));
+export function listHandles(section: Section, parts?: Parts, generated = generatedGeometry(section, parts)): Handle[] {
+  const outlines = editableOutlines(section, generated);
   const handles: Handle[] = [];
   for (const kind of HANDLE_ORDER) {
     for (const { outline, island } of outlines) handles.push(...handlesOfKind(section, outline, island, kind));
   }
   handles.push(...partHandles(parts));
   return handles.filter((h) => !isGenerated(generated, h.ref));
+}
+
+/** The section outline (island undefined) and each island with its index, less the islands `generated` holds. */
+export function editableOutlines(section: Section, generated: GeneratedGeometry): { outline: Outline; island: number | undefined }[] {
+  const all = [{ outline: section.outline, island: undefined as number | undefined },
+    ...section.islands.map((isl, k) => ({ outline: isl.outline, island: k as number | undefined }))];
+  return all.filter(({ island }) => island === undefined || !generated.islands.has(island));
 }
 
 function handlesOfKind(section: Section, outline: Outline, island: number | undefined, kind: HandleKind): Handle[] {

@@ -2,7 +2,7 @@
 
 import type { Parts, Point, Section } from '../document/types.ts';
 import { generatedGeometry, type GeneratedGeometry } from './generated.ts';
-import { listHandles } from './handles.ts';
+import { editableOutlines, listHandles } from './handles.ts';
 import { nearestOnEdge } from './handle-edge.ts';
 import { islandPart, type HandleKind, type HandleRef } from './refs.ts';
 import { distance } from './vec.ts';
@@ -38,24 +38,22 @@ export interface HitOptions {
 export function hitTest(section: Section, pointer: Point, tolerance: number, options: HitOptions = {}): Hit | null {
   if (!(tolerance > 0 && Number.isFinite(tolerance))) throw new RangeError(`hitTest: tolerance must be a positive length, got ${tolerance}`);
   const allowed = (kind: HandleKind) => options.kinds === undefined || options.kinds.includes(kind);
+  const generated = generatedGeometry(section, options.parts);
   let best: Hit | null = null;
-  for (const handle of listHandles(section, options.parts)) {
+  for (const handle of listHandles(section, options.parts, generated)) {
     if (!allowed(handle.ref.kind)) continue;
     const d = distance(handle.at, pointer);
     if (d <= tolerance && (best === null || d < best.distance)) best = { ref: handle.ref, at: handle.at, distance: d };
   }
   if (best !== null || !allowed('edge')) return best;
-  return nearestEdge(section, pointer, tolerance, generatedGeometry(section, options.parts));
+  return nearestEdge(section, pointer, tolerance, generated);
 }
 
 function nearestEdge(section: Section, pointer: Point, tolerance: number, generated: GeneratedGeometry): Hit | null {
   // Flatten finer than the slop so the picked point lies on the edge as drawn.
   const tol = tolerance / 8;
-  const outlines = [{ outline: section.outline, island: undefined as number | undefined },
-    ...section.islands.map((isl, k) => ({ outline: isl.outline, island: k as number | undefined }))];
   let best: Hit | null = null;
-  for (const { outline, island } of outlines) {
-    if (island !== undefined && generated.islands.has(island)) continue;
+  for (const { outline, island } of editableOutlines(section, generated)) {
     for (let edge = 0; edge < outline.edges.length; edge++) {
       if (island === undefined && generated.outlineEdges.has(edge)) continue;
       const near = nearestOnEdge(outline, edge, pointer, tol);
