@@ -124,6 +124,9 @@ store.subscribe((doc, cause) => {
   showPartsNumbers(byId('breathing'), bench, doc);
   if (cause === 'open') {
     editor.reset();
+    // An opened file brings its own units: the settings panel shows them (it said the old ones before).
+    settings.units = doc.units;
+    refreshSettingsPanel();
     view.setUnits(doc.units);
     view.fitToView(sectionBounds(activeSection(doc)));
   }
