@@ -5,7 +5,7 @@
 
 import type { Point, Section } from '../document/types.ts';
 import { directionTolerance, flatEdge } from './edge-flat.ts';
-import { wrap } from './section-access.ts';
+import { findOutline, wrap } from './section-access.ts';
 import { add, dot, scale, sub, unit } from './vec.ts';
 
 /** Corners within this of straight (radians) have no fillet to shape, like the geometry kernel's. */
@@ -26,7 +26,7 @@ export interface CornerShape {
  * the corner, as the kernel uses them to place fillets; for two lines this is exact.
  */
 export function cornerShape(section: Section, vertex: number, island?: number): CornerShape | null {
-  const outline = island === undefined ? section.outline : section.islands[island]?.outline;
+  const outline = findOutline(section, island);
   if (outline === undefined || outline.vertices[vertex] === undefined) return null;
   const before = wrap(vertex - 1, outline.vertices.length);
   const dirIn = flatEdge(outline, before, directionTolerance(outline, before)).endDir;
@@ -58,8 +58,7 @@ export function radiusForHandleDistance(angle: number, distance: number): number
 export function filletHandlePosition(section: Section, vertexIndex: number, island?: number): Point | null {
   const corner = cornerShape(section, vertexIndex, island);
   if (corner === null) return null;
-  const outline = island === undefined ? section.outline : section.islands[island].outline;
-  const radius = outline.vertices[vertexIndex].filletRadius ?? 0;
+  const radius = findOutline(section, island)?.vertices[vertexIndex].filletRadius ?? 0;
   return add(corner.at, scale(corner.bisector, handleDistance(corner.angle, radius)));
 }
 

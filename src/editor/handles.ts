@@ -6,6 +6,7 @@ import { generatedGeometry, isGenerated, type GeneratedGeometry } from './genera
 import { partHandlePosition, partHandles } from './part-handles.ts';
 import { islandPart, isPartHandle, type HandleKind, type HandleRef } from './refs.ts';
 import { edgeMiddle } from './handle-edge.ts';
+import { findOutline } from './section-access.ts';
 
 /** A handle and where it is, document units. */
 export interface Handle {
@@ -70,7 +71,7 @@ function handlesOfKind(section: Section, outline: Outline, island: number | unde
  */
 export function handlePosition(section: Section, ref: HandleRef, parts?: Parts): Point | null {
   if (isPartHandle(ref)) return partHandlePosition(parts, ref);
-  const outline = ref.island === undefined ? section.outline : section.islands[ref.island]?.outline;
+  const outline = findOutline(section, ref.island);
   if (outline === undefined) return null;
   switch (ref.kind) {
     case 'vertex': return outline.vertices[ref.vertex]?.at ?? null;

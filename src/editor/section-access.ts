@@ -34,6 +34,11 @@ export function withActiveSection(doc: PortDocument, edit: string, section: Sect
   return { ...doc, variants: replaceAt(doc.variants, index, { ...variant, section }) };
 }
 
+/** The outer outline (island undefined) or island `island`'s outline; undefined when there is no such island. */
+export function findOutline(section: Section, island: number | undefined): Outline | undefined {
+  return island === undefined ? section.outline : section.islands[island]?.outline;
+}
+
 /** The outer outline (island undefined) or island `island`'s outline. */
 export function outlineOf(section: Section, island: number | undefined, edit: string): Outline {
   if (island === undefined) return section.outline;

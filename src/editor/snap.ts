@@ -2,7 +2,7 @@
 
 import type { Point, Section, Units } from '../document/types.ts';
 import type { PointRef } from './refs.ts';
-import { wrap } from './section-access.ts';
+import { findOutline, wrap } from './section-access.ts';
 
 /** Grid steps a porter expects, document units: half a millimetre, or twenty thou. [practice] */
 export const DEFAULT_GRID_STEP: Readonly<Record<Units, number>> = { mm: 0.5, inch: 0.02 };
@@ -63,7 +63,7 @@ export function roundToStep(value: number, step: number): number {
  * two ends; a via point's edge ends and neighbouring vias. Empty for a reference that does not exist.
  */
 export function snapNeighbours(section: Section, ref: PointRef): Point[] {
-  const outline = ref.island === undefined ? section.outline : section.islands[ref.island]?.outline;
+  const outline = findOutline(section, ref.island);
   if (outline === undefined) return [];
   const n = outline.vertices.length;
   const corner = (k: number) => outline.vertices[wrap(k, n)].at;
