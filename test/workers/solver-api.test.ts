@@ -46,6 +46,17 @@ describe('solver worker API over a MessageChannel', () => {
     expect(domain.outer.xy.length).toBeGreaterThan(0);
   });
 
+  it('skips wall speeds only when asked and no reading needs them (the drag preview)', async () => {
+    const { client, close } = channelClient();
+    open.push(close);
+    const domain = sampleDomain();
+    const preview = await client.solveLatest({ domain, targetCells: 5_000, wallSpeeds: false });
+    const read = await client.solveLatest({ domain, targetCells: 5_000, wallSpeeds: false, reading: {} });
+    expect(preview?.ok && preview.walls).toEqual([]);
+    expect(read?.ok && read.walls.map((w) => w.name)).toContain('short side');
+    expect(read?.ok && read.reading?.walls.length).toBeGreaterThan(0);
+  });
+
   it('drops an older request when a newer one arrives before its result', async () => {
     const { client, close } = channelClient();
     open.push(close);
