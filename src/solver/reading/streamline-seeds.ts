@@ -1,4 +1,5 @@
 /** Streamline starting points spread along the inlet at equal shares of the inlet flux. */
+import { forEachCellPiece } from '../clip-pieces.ts';
 import { MARK_INLET } from '../types.ts';
 import type { CutGrid, FlowDomain } from '../types.ts';
 
@@ -50,7 +51,10 @@ export function equalFluxSeeds(domain: FlowDomain, grid: CutGrid, phi: Float64Ar
   return seeds;
 }
 
-/** Inlet segments of the outline cut at the grid lines, in ring order. */
+/**
+ * Inlet segments of the outline cut at the grid lines, in ring order: cut by forEachCellPiece in grid units, as the
+ * rasteriser cuts them for the inlet couplings, so each piece lies in one cell.
+ */
 function inletPieces(domain: FlowDomain, grid: CutGrid): InletPiece[] {
   const { xy, marks } = domain.outer;
   const n = marks.length;
@@ -59,32 +63,21 @@ function inletPieces(domain: FlowDomain, grid: CutGrid): InletPiece[] {
   for (let k = 0; k < n; k++) {
     if (marks[k] !== MARK_INLET) continue;
     const m = (k + 1) % n;
-    const ax = xy[2 * k], ay = xy[2 * k + 1], dx = xy[2 * m] - ax, dy = xy[2 * m + 1] - ay;
+    const dx = xy[2 * m] - xy[2 * k], dy = xy[2 * m + 1] - xy[2 * k + 1];
     const len = Math.hypot(dx, dy);
     if (len === 0) continue;
     const nx = -dy / len, ny = dx / len; // the outline runs counter-clockwise, so the fluid lies to the left
-    const cuts = [0, 1, ...gridLineCuts(ax, dx, x0, h), ...gridLineCuts(ay, dy, y0, h)].sort((a, b) => a - b);
-    for (let c = 0; c + 1 < cuts.length; c++) {
-      const t0 = cuts[c], t1 = cuts[c + 1];
-      if (t1 - t0 <= 1e-12) continue;
-      const tm = 0.5 * (t0 + t1);
-      const i = Math.floor((ax + tm * dx + 1e-6 * h * nx - x0) / h);
-      const j = Math.floor((ay + tm * dy + 1e-6 * h * ny - y0) / h);
-      if (i < 0 || j < 0 || i >= grid.nx || j >= grid.ny) continue;
-      pieces.push({ ax: ax + t0 * dx, ay: ay + t0 * dy, bx: ax + t1 * dx, by: ay + t1 * dy, cell: i + j * grid.nx, length: (t1 - t0) * len, nx, ny });
-    }
+    const u = (x: number): number => (x - x0) / h;
+    const v = (y: number): number => (y - y0) / h;
+    forEachCellPiece(u(xy[2 * k]), v(xy[2 * k + 1]), u(xy[2 * m]), v(xy[2 * m + 1]), (ua, va, ub, vb) => {
+      const length = Math.hypot(ub - ua, vb - va) * h;
+      if (length <= 1e-12 * len) return;
+      // the cell on the fluid side of the piece's midpoint (a piece on a grid line belongs to the fluid's cell)
+      const i = Math.floor(0.5 * (ua + ub) + 1e-6 * nx);
+      const j = Math.floor(0.5 * (va + vb) + 1e-6 * ny);
+      if (i < 0 || j < 0 || i >= grid.nx || j >= grid.ny) return;
+      pieces.push({ ax: x0 + ua * h, ay: y0 + va * h, bx: x0 + ub * h, by: y0 + vb * h, cell: i + j * grid.nx, length, nx, ny });
+    });
   }
   return pieces;
-}
-
-/** Parameters in (0, 1) where a + t d crosses a grid line origin + k h. */
-function gridLineCuts(a: number, d: number, origin: number, h: number): number[] {
-  if (d === 0) return [];
-  const lo = Math.min(a, a + d), hi = Math.max(a, a + d);
-  const out: number[] = [];
-  for (let k = Math.ceil((lo - origin) / h); origin + k * h <= hi; k++) {
-    const t = (origin + k * h - a) / d;
-    if (t > 0 && t < 1) out.push(t);
-  }
-  return out;
 }
