@@ -1,3 +1,4 @@
+/** Connectivity: blocked passages and where they close, dead pockets, baffles and a port with its valve. */
 import { describe, expect, it } from 'vitest';
 import { connectedCells } from '../../src/solver/connectivity.ts';
 import { FlowSetupError } from '../../src/solver/errors.ts';

@@ -1,3 +1,4 @@
+/** The probe: bilinear reading of potential and speed ratio on hand-made fields and a solved bend. */
 import { describe, expect, it } from 'vitest';
 import { probeFlow } from '../../src/solver/probe.ts';
 import { solveFlow } from '../../src/solver/solve.ts';

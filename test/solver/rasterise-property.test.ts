@@ -1,3 +1,4 @@
+/** The rasteriser on random triangles: total area, fractions in 0..1 and open length along grid lines. */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { rasterise } from '../../src/solver/rasterise.ts';

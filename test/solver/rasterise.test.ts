@@ -1,3 +1,4 @@
+/** The rasteriser on hand-made sections: grid frame, exact area and face fractions, couplings, set-up errors. */
 import { describe, expect, it } from 'vitest';
 import { FlowSetupError, MAX_CELLS } from '../../src/solver/errors.ts';
 import { rasterise } from '../../src/solver/rasterise.ts';

@@ -1,3 +1,4 @@
+/** Wall speed reconstruction: exact flows sampled on the cells, wall runs and their names, NaN away from the fluid. */
 import { describe, expect, it } from 'vitest';
 import { rasterise } from '../../src/solver/rasterise.ts';
 import { wallSpeeds } from '../../src/solver/wall-speeds.ts';

@@ -1,3 +1,4 @@
+/** Head's turbulent method: closure relations, Ludwieg–Tillmann friction, flat plate and decelerating walls. */
 import { describe, expect, it } from 'vitest';
 import {
   H1_BLEND_HIGH,

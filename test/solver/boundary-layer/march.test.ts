@@ -1,3 +1,4 @@
+/** The wall march: input checks, awkward walls, off-wall stretches and random physical walls. */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { BoundaryLayerInputError } from '../../../src/solver/boundary-layer/errors.ts';

@@ -1,3 +1,4 @@
+/** Michel's transition criterion, alone and inside the laminar march. */
 import { describe, expect, it } from 'vitest';
 import { marchWall } from '../../../src/solver/boundary-layer/march.ts';
 import { michelTransitionReTheta } from '../../../src/solver/boundary-layer/michel.ts';

@@ -1,3 +1,4 @@
+/** Stratford's turbulent separation criterion against its worked examples. */
 import { describe, expect, it } from 'vitest';
 import { stratfordLimit, stratfordSeparation } from '../../../src/solver/boundary-layer/stratford.ts';
 import { assertInDelta, assertRelative, bisect, linspace } from './helpers.ts';

@@ -1,3 +1,4 @@
+/** Thwaites' laminar method: its fits and classical solutions (flat plate, stagnation, Howarth, cylinder). */
 import { describe, expect, it } from 'vitest';
 import { marchLaminar } from '../../../src/solver/boundary-layer/laminar-march.ts';
 import { marchWall } from '../../../src/solver/boundary-layer/march.ts';

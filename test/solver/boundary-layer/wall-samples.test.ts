@@ -1,3 +1,4 @@
+/** Wall samples: the three-point speed gradient and the first sample at or after an arc length. */
 import { describe, expect, it } from 'vitest';
 import { firstSampleAtOrAfter, speedGradient } from '../../../src/solver/boundary-layer/wall-samples.ts';
 import { assertInDelta } from './helpers.ts';
