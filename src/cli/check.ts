@@ -1,10 +1,9 @@
 /** `portwright check FILE`: reads a section file, checks every variant's geometry and prints a short summary. */
 
-import { readDocument } from '../document/load.ts';
 import type { PortDocument, Variant } from '../document/types.ts';
 import { EXIT_OK, EXIT_USER_ERROR, type CliIO, type Command } from './command.ts';
 import { UserError } from './errors.ts';
-import { readSectionText } from './read-file.ts';
+import { readSectionFile } from './read-file.ts';
 import { summariseVariant, type SectionSummary } from './section-summary.ts';
 
 export const checkCommand: Command = {
@@ -18,8 +17,7 @@ export const checkCommand: Command = {
 };
 
 function checkFile(path: string, io: CliIO): number {
-  // A DocumentError propagates to main, which prints it as a user error.
-  const { document, fileVersion } = readDocument(readSectionText(path));
+  const { document, fileVersion } = readSectionFile(path);
   io.out(document.title);
   io.out(`  file: ${path} (format version ${fileVersion}${fileVersion < document.version ? `, upgraded to ${document.version} on reading` : ''})`);
   io.out(`  units: ${document.units}`);

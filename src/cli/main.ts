@@ -1,6 +1,5 @@
 /** Entry of the headless portwright command: picks the subcommand, runs it, and maps failures to exit codes. */
 
-import { DocumentError } from '../document/errors.ts';
 import { GeometryError } from '../geometry/index.ts';
 import { EXIT_INTERNAL_ERROR, EXIT_OK, EXIT_USER_ERROR, type CliIO, type Command } from './command.ts';
 import { UserError } from './errors.ts';
@@ -51,13 +50,11 @@ async function runCommand(command: Command, args: readonly string[], io: CliIO):
   try {
     return await command.run(args, io);
   } catch (error) {
-    if (error instanceof DocumentError) {
-      io.err(`portwright ${command.name}: ${args[0] ?? ''}: the file cannot be used:`);
-      for (const line of error.message.split('\n')) io.err(`  ${line}`);
-      return EXIT_USER_ERROR;
-    }
     if (error instanceof UserError || error instanceof GeometryError) {
-      io.err(`portwright ${command.name}: ${error.message}`);
+      // One line a call, as CliIO asks: a file's problems come one per line after the first.
+      const [first, ...more] = error.message.split('\n');
+      io.err(`portwright ${command.name}: ${first}`);
+      for (const line of more) io.err(line);
       return EXIT_USER_ERROR;
     }
     io.err(`portwright ${command.name}: internal error (a fault in Portwright, not in your file): ${String(error)}`);

@@ -1,11 +1,24 @@
-/** Reads a section file from disk for a command, turning every file-system failure into a plain UserError. */
+/** Reads a section file from disk for a command, turning every file-system or file-format failure into a plain UserError. */
 
 import { readFileSync, statSync } from 'node:fs';
+import { DocumentError } from '../document/errors.ts';
+import { readDocument, type ReadResult } from '../document/load.ts';
 import { MAX_FILE_BYTES } from '../document/limits.ts';
 import { UserError } from './errors.ts';
 
+/** The document in `path` and its file's format version; a file that cannot be read is a UserError naming `path`. */
+export function readSectionFile(path: string): ReadResult {
+  const text = readSectionText(path);
+  try {
+    return readDocument(text);
+  } catch (error) {
+    if (!(error instanceof DocumentError)) throw error;
+    throw new UserError(`${path}: the file cannot be used:\n${error.message.split('\n').map((line) => `  ${line}`).join('\n')}`);
+  }
+}
+
 /** The text of `path` (UTF-8). Refuses folders and files too big to be a section before reading them. */
-export function readSectionText(path: string): string {
+function readSectionText(path: string): string {
   try {
     const stat = statSync(path);
     if (stat.isDirectory()) throw new UserError(`${path} is a folder, not a section file`);

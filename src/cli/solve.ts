@@ -1,6 +1,6 @@
 /** `portwright solve FILE`: solves one variant's ideal flow headless and prints the flow reading, readable or as JSON. */
 
-import { DocumentError, loadDocument, type PortDocument, type Variant } from '../document/index.ts';
+import type { PortDocument, Variant } from '../document/index.ts';
 import { GeometryError } from '../geometry/index.ts';
 import { DEFAULT_MAX_ITERATIONS, DEFAULT_TOLERANCE, FlowSetupError, solveFlow, type FlowDomain } from '../solver/index.ts';
 import { PartsError, breathingSummary, partsNotes } from '../parts/index.ts';
@@ -8,7 +8,7 @@ import { readFlow, readingSummary } from '../solver/reading/index.ts';
 import { EXIT_OK, type CliIO, type Command } from './command.ts';
 import { UserError } from './errors.ts';
 import { jsonLines } from './json-text.ts';
-import { readSectionText } from './read-file.ts';
+import { readSectionFile } from './read-file.ts';
 import { SOLVE_ARGS, parseSolveArgs, type SolveArgs } from './solve-args.ts';
 import { buildSolveReport, type SolvedVariant } from './solve-report.ts';
 import { solveReportLines } from './solve-text.ts';
@@ -32,7 +32,7 @@ export const solveCommand: Command = {
 
 /** Loads, checks, solves and reads the chosen variant; every problem the user can fix becomes a UserError. */
 function solveVariant(options: SolveArgs, io: CliIO): SolvedVariant {
-  const document = loadFile(options.file);
+  const { document } = readSectionFile(options.file);
   const variant = chooseVariant(document, options);
   const where = `${options.file}, variant "${variant.name}"`;
   const domain = toDomain(variant, document, where);
@@ -47,15 +47,6 @@ function solveVariant(options: SolveArgs, io: CliIO): SolvedVariant {
   const breathing = breathingSummary(variant, document.units);
   const notes = variant.parts ? partsNotes(variant.parts, document.units).map((n) => n.message) : [];
   return { title: document.title, variant: variant.name, units: document.units, domain, result, summary, converged, breathing, notes };
-}
-
-function loadFile(path: string): PortDocument {
-  try {
-    return loadDocument(readSectionText(path));
-  } catch (error) {
-    if (!(error instanceof DocumentError)) throw error;
-    throw new UserError(`${path}: the file cannot be used:\n${error.message.split('\n').map((line) => `  ${line}`).join('\n')}`);
-  }
 }
 
 function chooseVariant(document: PortDocument, options: SolveArgs): Variant {

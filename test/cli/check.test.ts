@@ -63,6 +63,15 @@ describe('check (in process)', () => {
     expect(err).toMatch(/not valid JSON at line \d+, column \d+/);
   });
 
+  it('names the file that cannot be used, then its problems, one line a write', async () => {
+    const io = captureIO();
+    const path = tmp.write('list.json', '[1, 2]');
+    expect(await run(['check', path], io)).toBe(1);
+    expect(io.stderr[0]).toBe(`portwright check: ${path}: the file cannot be used:`);
+    expect(io.stderr[1]).toMatch(/^ {2}this is not a Portwright section file/);
+    expect(io.stderr.filter((line) => line.includes('\n'))).toEqual([]);
+  });
+
   it('says a newer file needs a newer Portwright', async () => {
     const { code, err } = await check(tmp.write('newer.json', JSON.stringify({ ...sample(), version: 7 })));
     expect(code).toBe(1);

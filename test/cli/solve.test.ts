@@ -203,5 +203,7 @@ describe('solve refuses what it cannot use, with exit 1 and a plain message', ()
     const { code, err } = await solve(['--json', tmp.write('list.json', '[1, 2]')]);
     expect(code).toBe(1);
     expect(err).toMatch(/list\.json: the file cannot be used:\n {2}.*not a Portwright section file/);
+    // The file is named even when a flag comes before it.
+    expect(err).toMatch(/^portwright solve: \S*list\.json: the file cannot be used:/);
   });
 });
