@@ -1,14 +1,14 @@
 /** The bench panel's engine results: piston and port speed, inlet Mach index, the rule-of-thumb power estimate. */
 
 import {
-  estimatePower, formatQuantity, inletMachIndex, MACH_INDEX_KNEE, meanPistonSpeed, meanPortSpeed, speedOfSound,
+  areaUnitFor, estimatePower, formatQuantity, inletMachIndex, MACH_INDEX_KNEE, meanPistonSpeed, meanPortSpeed, speedOfSound,
 } from '../breathing/index.ts';
 import { makeRow, type OutputRow, type RowContext } from './bench-panel-rows.ts';
 
 /** Where the port area came from, said under the port speed. */
 function portAreaNote(ctx: RowContext, areaM2: number): string {
   const { state } = ctx;
-  const shown = formatQuantity('area', state.units.length === 'mm' ? 'mm2' : 'in2', areaM2);
+  const shown = formatQuantity('area', areaUnitFor(state.units.length), areaM2);
   if (!state.follows.portArea || !state.appPortArea) return `through ${shown} as typed`;
   return `through ${shown} from the section${state.appPortArea.source ? ` (${state.appPortArea.source})` : ''}`;
 }

@@ -1,7 +1,7 @@
 /** The bench panel's results: room air and bench numbers, each by one call into src/breathing (SI in, units at the edge). */
 
 import {
-  dischargeCoefficient, flowInStandardAir, formatQuantity, idealSpeed, inH2OToPa, scaleFlowToTestPressure, speedOfSound,
+  areaUnitFor, dischargeCoefficient, flowInStandardAir, formatQuantity, idealSpeed, inH2OToPa, scaleFlowToTestPressure, speedOfSound,
   STANDARD_DENSITY_KGM3, sutherlandViscosity, testPressureFactor,
 } from '../breathing/index.ts';
 import { REFERENCE_AREA_KEYS, type BenchPanelState, type FlowScaleSource } from './bench-panel-model.ts';
@@ -80,7 +80,7 @@ function cdRow(ctx: RowContext): OutputRow {
     if (Object.values(areasM2).every((a) => a === undefined)) return 'no valve part';
     if (area === undefined) return `no ${kind} area for this variant`;
     const cd = dischargeCoefficient(v.flow, area, v.testPressure, roomAir(ctx, v).densityKgM3);
-    const areaText = formatQuantity('area', units.length === 'mm' ? 'mm2' : 'in2', area);
+    const areaText = formatQuantity('area', areaUnitFor(units.length), area);
     const gross = kind === 'throat' ? ', gross (stem not taken off)' : '';
     return { valueSI: cd, text: cd.toFixed(3), note: `${kind} area ${areaText}${gross}, from the valve part` };
   });

@@ -1,6 +1,6 @@
 /** Brings the bench panel's form in line with the state: texts after unit switches, unit selects, messages, hints. */
 
-import { formatQuantity } from '../breathing/index.ts';
+import { areaUnitFor, formatQuantity } from '../breathing/index.ts';
 import { FIELD_KEYS, unitLabel } from './bench-panel-fields.ts';
 import type { FormRefs } from './bench-panel-form.ts';
 import { appValue, fieldProblems, REFERENCE_AREA_KEYS, type BenchPanelState, type FollowingField } from './bench-panel-model.ts';
@@ -30,7 +30,7 @@ function referenceHint(state: BenchPanelState): string {
   if (Object.values(state.areasM2).every((a) => a === undefined)) return 'no valve part: the discharge coefficient waits for one';
   const area = state.areasM2[REFERENCE_AREA_KEYS[state.referenceArea]];
   if (area === undefined) return `no ${state.referenceArea} area for this variant`;
-  return `${formatQuantity('area', state.units.length === 'mm' ? 'mm2' : 'in2', area)} at this lift, from the valve part`;
+  return `${formatQuantity('area', areaUnitFor(state.units.length), area)} at this lift, from the valve part`;
 }
 
 /** Under the port area and valve diameter: where the number came from, or a way back to the app's number. */
@@ -51,7 +51,7 @@ function syncHint(refs: FormRefs, state: BenchPanelState, key: FollowingField): 
     return;
   }
   const shown = key === 'portArea'
-    ? formatQuantity('area', state.units.length === 'mm' ? 'mm2' : 'in2', app)
+    ? formatQuantity('area', areaUnitFor(state.units.length), app)
     : formatQuantity('length', state.units.length, app);
   const button = doc.createElement('button');
   button.type = 'button';

@@ -1,6 +1,6 @@
 /** Display units of the bench panel's fields: the unit table of src/breathing plus room temperature, text in and out. */
 
-import { unitSpec, type UnitChoices, type UnitSpec } from '../breathing/index.ts';
+import { areaUnitFor, unitSpec, type UnitChoices, type UnitSpec } from '../breathing/index.ts';
 
 /** Room temperature as typed: degrees Celsius or Fahrenheit (kelvin inside). */
 export type TemperatureUnit = 'C' | 'F';
@@ -43,7 +43,7 @@ type TableKind = Exclude<FieldKind, 'temperature' | 'plain'>;
 
 /** The table unit a field shows now: area follows length, the barometer has its own pressure choice. */
 function tableUnit(kind: TableKind, units: PanelUnits): UnitSpec {
-  if (kind === 'area') return unitSpec('area', units.length === 'mm' ? 'mm2' : 'in2');
+  if (kind === 'area') return unitSpec('area', areaUnitFor(units.length));
   if (kind === 'barometer') return unitSpec('pressure', units.barometer);
   return unitSpec(kind, units[kind] as never);
 }
