@@ -51,7 +51,7 @@ export function neighbourIndex(n: number, nc: number): Int32Array {
 }
 
 /** Along-row weight g of coarse column I as a side neighbour: (3 s(I, J) + s(I, jn)) / 4. rowC, rowD = J * ncx, jn * ncx. */
-function sideWeight(strength: Float32Array, rowC: number, rowD: number, I: number): number {
+export function sideWeight(strength: Float32Array, rowC: number, rowD: number, I: number): number {
   return 0.75 * strength[rowC + I] + 0.25 * strength[rowD + I];
 }
 

@@ -1,5 +1,6 @@
 /** Restriction P^T of one fine row, the exact transpose of prolongRow (see multigrid-bilinear.ts for the weights). */
 import type { Stencil } from './assemble.ts';
+import { sideWeight } from './multigrid-bilinear.ts';
 import { cellResidual } from './pcg-operator.ts';
 
 /**
@@ -25,14 +26,14 @@ export function restrictRow(
   const first = Math.max(0, (fs >> 1) - 1);
   const last = Math.min(ncx - 1, ((fe - 1) >> 1) + 1);
   // Sliding window of 1 / (3 + g) for the left, centre and right column.
-  let invL = 1 / (3 + sideWeightOf(strength, rowC, rowD, first > 0 ? first - 1 : first));
-  let invC = 1 / (3 + sideWeightOf(strength, rowC, rowD, first));
+  let invL = 1 / (3 + sideWeight(strength, rowC, rowD, first > 0 ? first - 1 : first));
+  let invC = 1 / (3 + sideWeight(strength, rowC, rowD, first));
   let sidePrev = 0;
   let sideCur = 0;
   const redOffset = j & 1; // red cells have i + j even
   for (let I = first; I <= last; I++) {
     const right = I + 1 < ncx ? I + 1 : I;
-    const invR = 1 / (3 + sideWeightOf(strength, rowC, rowD, right));
+    const invR = 1 / (3 + sideWeight(strength, rowC, rowD, right));
     const i0 = 2 * I;
     const red = i0 + redOffset;
     const r = red >= fs && red < fe ? cellResidual(s, x, b, j, red) : 0;
@@ -54,10 +55,6 @@ export function restrictRow(
   }
   spreadSide(strength, coarseB, rowC, rowD, last, sidePrev);
   if (last + 1 < ncx) spreadSide(strength, coarseB, rowC, rowD, last + 1, sideCur);
-}
-
-function sideWeightOf(strength: Float32Array, rowC: number, rowD: number, I: number): number {
-  return 0.75 * strength[rowC + I] + 0.25 * strength[rowD + I];
 }
 
 /** Parent share of column I: 3 : s(I, jn) across rows (all to (I, J) when jn = J). */
