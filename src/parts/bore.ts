@@ -4,6 +4,7 @@
  */
 
 import type { BorePart, Outline, SeatPart, ValvePart } from '../document/types.ts';
+import { degToRad } from './frame.ts';
 import { deckLevel } from './seat.ts';
 
 /** The bore in section coordinates. */
@@ -35,7 +36,7 @@ export function manifoldSide(outline: Outline, axisX: number): -1 | 1 {
 
 /** Where the bore sits: the valve edge (shut, at the gauge line) is `valveEdgeToWall` from the nearer wall. */
 export function boreBox(valve: ValvePart, seat: SeatPart, bore: BorePart, nearSide: -1 | 1): BoreBox {
-  const edgeReach = (valve.diameter / 2) * Math.cos((valve.axis.inclinationDeg * Math.PI) / 180);
+  const edgeReach = (valve.diameter / 2) * Math.cos(degToRad(valve.axis.inclinationDeg));
   const nearWallX = valve.axis.x + nearSide * (edgeReach + bore.valveEdgeToWall);
   const topY = deckLevel(valve, seat);
   return { nearWallX, farWallX: nearWallX - nearSide * bore.diameter, nearSide, topY, bottomY: topY - bore.depth };

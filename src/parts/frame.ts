@@ -16,7 +16,7 @@ export interface ValveFrame {
 
 /** The frame of `axis`: opening direction (sin i, -cos i) for inclination i, so 0 opens straight down (-y). */
 export function valveFrame(axis: ValveAxis): ValveFrame {
-  const i = (axis.inclinationDeg * Math.PI) / 180;
+  const i = degToRad(axis.inclinationDeg);
   const s = Math.sin(i), c = Math.cos(i);
   return { origin: [axis.x, axis.y], open: [s, -c], up: [-s, c], across: [c, s] };
 }
