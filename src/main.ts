@@ -163,11 +163,14 @@ const editor = new EditorController(viewHost, view, store, {
   onSelection: (selection) => selectionPanel.show(store.doc, selection),
 });
 
+/** Each group touches only what it changes: a layer toggle or snapping neither re-scales nor re-traces the field. */
 function applySettings(group: SettingsGroup): void {
-  view.setLayers(settings.layers);
-  view.setContourLevels(parseLevels(settings.contourLevels));
-  view.setColourRange({ mode: settings.colourMode, min: settings.colourMin, max: settings.colourMax });
-  if (group === 'draw' && lastReply) picture.field(lastReply);
+  if (group === 'draw') {
+    view.setLayers(settings.layers);
+    view.setContourLevels(parseLevels(settings.contourLevels));
+    view.setColourRange({ mode: settings.colourMode, min: settings.colourMin, max: settings.colourMax });
+  }
+  if (group === 'reference' && lastReply) picture.field(lastReply);
   if (group === 'solve' || group === 'reading') solve(store.doc, 'edit');
   if (group === 'units' && settings.units !== store.doc.units) {
     store.edit('setUnits', { units: settings.units }, 'open');

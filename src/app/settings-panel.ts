@@ -4,7 +4,8 @@ import { CELLS_BY_DETAIL } from './grid-detail.ts';
 import type { AppSettings } from './settings.ts';
 import { cellsText } from './solve-indicator.ts';
 
-export type SettingsGroup = 'solve' | 'reading' | 'draw' | 'units' | 'edit';
+/** 'draw': colours, contours and layers; 'reference': what a speed ratio of 1 means (the field is scaled again). */
+export type SettingsGroup = 'solve' | 'reading' | 'draw' | 'reference' | 'units' | 'edit';
 
 export function buildSettingsPanel(host: HTMLElement, settings: AppSettings, onChange: (group: SettingsGroup) => void): GUI {
   const gui = new GUI({ container: host, title: 'Settings' });
@@ -16,7 +17,7 @@ export function buildSettingsPanel(host: HTMLElement, settings: AppSettings, onC
   solve.add(settings, 'units', { millimetres: 'mm', inches: 'inch' }).name('units').onFinishChange(() => onChange('units'));
 
   const draw = gui.addFolder('Colours and lines');
-  draw.add(settings, 'reference', ['mean inlet speed', 'tightest station']).name('ratio of speed to').onFinishChange(() => onChange('draw'));
+  draw.add(settings, 'reference', ['mean inlet speed', 'tightest station']).name('ratio of speed to').onFinishChange(() => onChange('reference'));
   draw.add(settings, 'colourMode', { 'automatic': 'auto', 'fixed (compare variants)': 'fixed' }).name('colour range').onFinishChange(() => onChange('draw'));
   draw.add(settings, 'colourMin', 0, 5, 0.05).name('fixed from').onFinishChange(() => onChange('draw'));
   draw.add(settings, 'colourMax', 0.1, 10, 0.05).name('fixed to').onFinishChange(() => onChange('draw'));
