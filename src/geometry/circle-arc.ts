@@ -37,7 +37,7 @@ export function arcThroughPoints(a: Point, m: Point, b: Point): CircleArc | null
 }
 
 /** Largest angle step (radians) whose chord stays within `tol` of a circle of radius `r`: sagitta r(1 - cos(step/2)) = tol. */
-export function arcStepAngle(r: number, tol: number): number {
+function arcStepAngle(r: number, tol: number): number {
   return 2 * Math.acos(Math.max(-1, 1 - tol / r));
 }
 

@@ -158,7 +158,7 @@ class CurvePath implements EdgePath {
 }
 
 /** The arc of an arc edge, or null when its three points are collinear with `through` between the ends (a line). */
-export function arcOfEdge(start: Point, through: Point, end: Point, place: EdgePlace): CircleArc | null {
+function arcOfEdge(start: Point, through: Point, end: Point, place: EdgePlace): CircleArc | null {
   const chord = Math.hypot(end[0] - start[0], end[1] - start[1]);
   const near = 1e-9 * chord;
   if (Math.hypot(through[0] - start[0], through[1] - start[1]) <= near || Math.hypot(through[0] - end[0], through[1] - end[1]) <= near) {
