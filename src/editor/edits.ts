@@ -42,6 +42,12 @@ export interface EditSpec<A> {
   readonly args: z.ZodType<A>;
   /** Pure: returns a new document sharing untouched parts, or `doc` itself when nothing changes. */
   readonly run: (doc: PortDocument, args: A) => PortDocument;
+  /**
+   * True for the parts edits: `run` leaves nothing to regenerate (setPart, setParts and setLift regenerate the variant
+   * they change themselves, to check the result; removeParts drops the parts), so applyEdit skips regenerateParts,
+   * which would build the same geometry a second time on each step of a lift or valve drag.
+   */
+  readonly regeneratesParts?: true;
 }
 
 const spec = <A>(s: EditSpec<A>): EditSpec<A> => s;
@@ -83,10 +89,10 @@ export const EDITS = {
   setActiveVariant: spec({ name: 'setActiveVariant', label: 'Switch variant', args: setActiveVariantArgs, run: setActiveVariant }),
   deleteVariant: spec({ name: 'deleteVariant', label: 'Delete variant', args: deleteVariantArgs, run: deleteVariant }),
   setUnits: spec({ name: 'setUnits', label: 'Change units', args: setUnitsArgs, run: setUnits }),
-  setPart: spec({ name: 'setPart', label: 'Change part', args: setPartArgs, run: setPart }),
-  setParts: spec({ name: 'setParts', label: 'Set parts', args: setPartsArgs, run: setParts }),
-  setLift: spec({ name: 'setLift', label: 'Set lift', args: setLiftArgs, run: setLift }),
-  removeParts: spec({ name: 'removeParts', label: 'Remove parts', args: removePartsArgs, run: removeParts }),
+  setPart: spec({ name: 'setPart', label: 'Change part', args: setPartArgs, run: setPart, regeneratesParts: true }),
+  setParts: spec({ name: 'setParts', label: 'Set parts', args: setPartsArgs, run: setParts, regeneratesParts: true }),
+  setLift: spec({ name: 'setLift', label: 'Set lift', args: setLiftArgs, run: setLift, regeneratesParts: true }),
+  removeParts: spec({ name: 'removeParts', label: 'Remove parts', args: removePartsArgs, run: removeParts, regeneratesParts: true }),
 } as const;
 
 export type EditName = keyof typeof EDITS;
@@ -113,5 +119,6 @@ export function isEditName(name: string): name is EditName {
 export function applyEdit(doc: PortDocument, name: string, args: unknown): PortDocument {
   if (!isEditName(name)) throw new EditError('', `There is no edit called "${name}".`);
   const edit = EDITS[name] as EditSpec<unknown>;
-  return regenerateParts(doc, edit.run(doc, parseArgs(edit.args, name, args)), name);
+  const after = edit.run(doc, parseArgs(edit.args, name, args));
+  return edit.regeneratesParts ? after : regenerateParts(doc, after, name);
 }

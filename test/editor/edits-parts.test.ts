@@ -43,6 +43,11 @@ describe('setLift and setPart', () => {
     expect(throatX(next) - 95).toBeCloseTo(-0.89 * 23, 9);
     const moved = applyEdit(doc, 'setPart', { part: 'valve', values: { axis: { x: 96 } } });
     expect(moved.variants[0].parts?.valve?.axis).toEqual({ x: 96, y: 2.3, inclinationDeg: 0 });
+    // The parts edits regenerate their variant once, themselves: what they leave is what the numbers build.
+    for (const d of [next, moved, applyEdit(doc, 'setLift', { lift: 7 })]) {
+      expect(applyParts(active(d), d.variants[0].parts)).toEqual(active(d));
+      expect(active(d)).not.toEqual(active(doc));
+    }
   });
 
   it('refuse bad numbers with the part, field and rule, and shapes that cannot be built', () => {
