@@ -39,13 +39,13 @@ const coordinate = boundedNumber(-MAX_COORDINATE, MAX_COORDINATE, `a number from
 export const pointSchema = z.tuple([coordinate, coordinate], { error: 'must be a point [x, y] of two numbers' });
 
 const name = label(MAX_NAME_LENGTH, 'a name');
-const edgeRole = z.enum(['wall', 'inlet', 'outlet'], { error: 'must be "wall", "inlet" or "outlet"' });
+export const edgeRoleSchema = z.enum(['wall', 'inlet', 'outlet'], { error: 'must be "wall", "inlet" or "outlet"' });
 
-const lineEdge = z.strictObject({ kind: z.literal('line'), role: edgeRole, wallName: name.optional() });
-const arcEdge = z.strictObject({ kind: z.literal('arc'), role: edgeRole, wallName: name.optional(), through: pointSchema });
+const lineEdge = z.strictObject({ kind: z.literal('line'), role: edgeRoleSchema, wallName: name.optional() });
+const arcEdge = z.strictObject({ kind: z.literal('arc'), role: edgeRoleSchema, wallName: name.optional(), through: pointSchema });
 const curveEdge = z.strictObject({
   kind: z.literal('curve'),
-  role: edgeRole,
+  role: edgeRoleSchema,
   wallName: name.optional(),
   via: list(pointSchema, 0, MAX_VIA_POINTS, 'points [x, y]'),
 });

@@ -2,6 +2,7 @@
 
 import { z } from 'zod';
 import type { Edge, Outline, PortDocument, Point, Section } from '../document/types.ts';
+import { edgeRoleSchema } from '../document/schema.ts';
 import { signedArea } from '../geometry/area.ts';
 import { edgeArgs, pointSchema } from './args.ts';
 import { checkEdgeShape, edgeEnds } from './edge-shape.ts';
@@ -29,7 +30,7 @@ function changeEdge(doc: PortDocument, edit: string, index: number, island: numb
   return withActiveSection(doc, edit, withOutline(section, island, next));
 }
 
-export const setEdgeRoleArgs = z.strictObject({ ...edgeArgs, role: z.enum(['wall', 'inlet', 'outlet']) });
+export const setEdgeRoleArgs = z.strictObject({ ...edgeArgs, role: edgeRoleSchema });
 export type SetEdgeRoleArgs = z.infer<typeof setEdgeRoleArgs>;
 
 /** Marks an edge wall, inlet or outlet. Island edges are always walls. Leaving "wall" drops the wall name. */

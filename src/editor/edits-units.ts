@@ -1,8 +1,9 @@
 /** Converts the whole drawing between millimetres and inches (1 in = 25.4 mm exactly, NIST SP 811). */
 import { z } from 'zod';
+import { unitsSchema } from '../document/schema.ts';
 import type { PortDocument, Units } from '../document/types.ts';
 
-export const setUnitsArgs = z.object({ units: z.enum(['mm', 'inch']) }).strict();
+export const setUnitsArgs = z.strictObject({ units: unitsSchema });
 
 const MM_PER_INCH = 25.4;
 
