@@ -7,7 +7,8 @@
 
 import { z } from 'zod';
 import type { Outline } from './types.ts';
-import { MAX_COORDINATE, MAX_PART_LENGTH, MAX_PORT_AREA, MAX_VALVE_INCLINATION_DEG } from './limits.ts';
+import { MAX_PART_LENGTH, MAX_PORT_AREA, MAX_VALVE_INCLINATION_DEG } from './limits.ts';
+import { boundedNumber, coordinateSchema } from './schema-numbers.ts';
 
 function number(error: string) {
   return z.number({ error });
@@ -21,8 +22,7 @@ function positiveLength() {
 
 /** A length of zero or more (a margin, a lift, a clearance). */
 function lengthFromZero() {
-  const error = `must be a number from 0 to ${MAX_PART_LENGTH} (a length in the document's units)`;
-  return number(error).min(0, { error }).max(MAX_PART_LENGTH, { error });
+  return boundedNumber(0, MAX_PART_LENGTH, `a number from 0 to ${MAX_PART_LENGTH} (a length in the document's units)`);
 }
 
 /** An angle strictly between 0 and 90 degrees from the plane of the valve head. */
@@ -31,19 +31,11 @@ function cutAngle() {
   return number(error).gt(0, { error }).lt(90, { error });
 }
 
-const coordinate = (() => {
-  const error = `must be a number from -${MAX_COORDINATE} to ${MAX_COORDINATE}`;
-  return number(error).min(-MAX_COORDINATE, { error }).max(MAX_COORDINATE, { error });
-})();
-
-const inclination = (() => {
-  const lean = MAX_VALVE_INCLINATION_DEG;
-  const error = `must be a number from -${lean} to ${lean} (degrees the opening direction leans from straight down)`;
-  return number(error).min(-lean, { error }).max(lean, { error });
-})();
+const lean = MAX_VALVE_INCLINATION_DEG;
+const inclination = boundedNumber(-lean, lean, `a number from -${lean} to ${lean} (degrees the opening direction leans from straight down)`);
 
 export const valveAxisSchema = z.strictObject(
-  { x: coordinate, y: coordinate, inclinationDeg: inclination },
+  { x: coordinateSchema, y: coordinateSchema, inclinationDeg: inclination },
   { error: 'must be a valve axis { x, y, inclinationDeg }' },
 );
 
@@ -68,10 +60,7 @@ const throatPct = (() => {
   return number(error).gt(0, { error }).lt(100, { error });
 })();
 
-const throatOffsetPct = (() => {
-  const error = 'must be a number from -100 to 100 (percent of the throat radius)';
-  return number(error).min(-100, { error }).max(100, { error });
-})();
+const throatOffsetPct = boundedNumber(-100, 100, 'a number from -100 to 100 (percent of the throat radius)');
 
 export const seatPartSchema = z.strictObject(
   {

@@ -8,16 +8,11 @@
 import { z } from 'zod';
 import { FORMAT_NAME, FORMAT_VERSION, type PortDocument } from './types.ts';
 import { checkParts, partsSchema } from './parts-schema.ts';
+import { boundedNumber, coordinateSchema } from './schema-numbers.ts';
 import {
-  CONTROL_CHARACTER, MAX_COORDINATE, MAX_FILLET_RADIUS, MAX_ISLANDS, MAX_NAME_LENGTH, MAX_NOTE_LENGTH, MAX_SECTION_VERTICES,
+  CONTROL_CHARACTER, MAX_FILLET_RADIUS, MAX_ISLANDS, MAX_NAME_LENGTH, MAX_NOTE_LENGTH, MAX_SECTION_VERTICES,
   MAX_TITLE_LENGTH, MAX_VARIANTS, MAX_VIA_POINTS,
 } from './limits.ts';
-
-/** A bounded finite number; NaN and Infinity are refused by z.number() itself. */
-function boundedNumber(min: number, max: number, requirement: string) {
-  const error = `must be ${requirement}`;
-  return z.number({ error }).min(min, { error }).max(max, { error });
-}
 
 /** One-line text that is not blank (names and the title are labels in the view and the command output). */
 function label(maxLength: number, what: string) {
@@ -35,8 +30,7 @@ function list<T extends z.ZodType>(item: T, min: number, max: number, what: stri
   return z.array(item, { error }).min(min, { error }).max(max, { error });
 }
 
-const coordinate = boundedNumber(-MAX_COORDINATE, MAX_COORDINATE, `a number from -${MAX_COORDINATE} to ${MAX_COORDINATE}`);
-export const pointSchema = z.tuple([coordinate, coordinate], { error: 'must be a point [x, y] of two numbers' });
+export const pointSchema = z.tuple([coordinateSchema, coordinateSchema], { error: 'must be a point [x, y] of two numbers' });
 
 const name = label(MAX_NAME_LENGTH, 'a name');
 export const edgeRoleSchema = z.enum(['wall', 'inlet', 'outlet'], { error: 'must be "wall", "inlet" or "outlet"' });
