@@ -168,7 +168,12 @@ function applySettings(group: SettingsGroup): void {
   if (group === 'draw') {
     view.setLayers(settings.layers);
     view.setContourLevels(parseLevels(settings.contourLevels));
-    view.setColourRange({ mode: settings.colourMode, min: settings.colourMin, max: settings.colourMax });
+    try {
+      view.setColourRange({ mode: settings.colourMode, min: settings.colourMin, max: settings.colourMax });
+    } catch (error) {
+      // A fixed range whose top is not above its bottom: said in plain words; the colours keep their last range.
+      status.show(`${error instanceof Error ? error.message : String(error)} The colours keep their last range.`, 'error');
+    }
   }
   if (group === 'reference' && lastReply) picture.field(lastReply);
   if (group === 'solve' || group === 'reading') solve(store.doc, 'edit');

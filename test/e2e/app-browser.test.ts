@@ -149,6 +149,25 @@ describe('Portwright in a browser', () => {
     });
   }, CHECK_MS);
 
+  it('a fixed colour range with its top below its bottom is refused in plain words, and the colours keep their range', async () => {
+    await withApp(session, async ({ page, problems }) => {
+      const range = () => page.evaluate(() => (window as unknown as { portwright: { view: { colourRange: { min: number; max: number } } } }).portwright.view.colourRange);
+      const before = await range();
+      const control = (name: string) => page.locator('.lil-controller', { has: page.locator('.lil-name', { hasText: name }) });
+      // The settings sit in a folded group of the panel: open it as a porter would.
+      await page.locator('.lil-title', { hasText: 'Colours and lines' }).click();
+      for (const [name, text] of [['fixed from', '3'], ['fixed to', '2']]) {
+        await control(name).locator('input').fill(text);
+        await control(name).locator('input').press('Enter');
+      }
+      await control('colour range').locator('select').selectOption({ label: 'fixed (compare variants)' });
+      await expect.poll(() => page.locator('#status').getAttribute('data-level')).toBe('error');
+      expect(await page.locator('#status').innerText()).toMatch(/top above its bottom.*keep their last range/);
+      expect(await range()).toEqual(before);
+      expect(problems).toEqual([]);
+    });
+  }, CHECK_MS);
+
   it('"?" opens a help overlay that lists keys, and "?" closes it again', async () => {
     const { page } = looked;
     const help = page.locator('#help-overlay');
