@@ -5,7 +5,7 @@
  */
 
 import type { Parts, Point, ValveAxis, ValvePart } from '../document/types.ts';
-import { valveFrame } from '../parts/frame.ts';
+import { toSection, valveFrame } from '../parts/frame.ts';
 import type { PartHandleRef } from './refs.ts';
 import { roundToStep } from './snap.ts';
 
@@ -18,9 +18,7 @@ export const MAX_LIFT_SHARE = 0.5;
 
 /** Centre of the valve face (document units): `margin + lift` down the opening direction from the gauge line's centre. */
 export function liftHandlePosition(valve: ValvePart): Point {
-  const { origin, open } = valveFrame(valve.axis);
-  const down = valve.margin + valve.lift;
-  return [origin[0] + down * open[0], origin[1] + down * open[1]];
+  return toSection(valveFrame(valve.axis), 0, -(valve.margin + valve.lift));
 }
 
 /** Centre of the seat's gauge line: the valve axis point (document units). */
