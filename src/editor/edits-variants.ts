@@ -15,7 +15,7 @@ function freshName(doc: PortDocument, name: string, edit: string): string {
 }
 
 /** "<base> copy", then "<base> copy 2", "<base> copy 3"... whichever is free first (a long base is cut to fit the file). */
-export function copyName(doc: PortDocument, base: string): string {
+function copyName(doc: PortDocument, base: string): string {
   const taken = new Set(doc.variants.map((v) => v.name));
   for (let k = 1; ; k++) {
     const name = nameWithSuffix(base, k === 1 ? ' copy' : ` copy ${k}`);

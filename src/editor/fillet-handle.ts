@@ -46,7 +46,7 @@ export function handleDistance(angle: number, radius: number): number {
 }
 
 /** Inverse of handleDistance: the radius whose fillet midpoint lies `distance` along the bisector. */
-export function radiusForHandleDistance(angle: number, distance: number): number {
+function radiusForHandleDistance(angle: number, distance: number): number {
   const s = Math.sin(angle / 2);
   return (distance * s) / (1 - s);
 }

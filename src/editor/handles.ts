@@ -18,7 +18,7 @@ export interface Handle {
  * Order of precedence when two handles sit at one place: a corner wins over its zero-radius fillet handle, and any
  * handle of the outlines over the valve's lift and axis handles (which sit in open space, clear of the outlines).
  */
-export const HANDLE_ORDER: readonly HandleKind[] = ['vertex', 'through', 'via', 'fillet', 'lift', 'valve-axis'];
+const HANDLE_ORDER: readonly HandleKind[] = ['vertex', 'through', 'via', 'fillet', 'lift', 'valve-axis'];
 
 /**
  * Point handles of the section (the outline first, then each island), ordered by HANDLE_ORDER:

@@ -7,8 +7,6 @@ import { nearestOnEdge } from './handle-edge.ts';
 import { islandPart, type HandleKind, type HandleRef } from './refs.ts';
 import { distance } from './vec.ts';
 
-export { filletHandlePosition, radiusFromHandleDrag } from './fillet-handle.ts';
-
 /** What the pointer is on. For an edge, `at` is the nearest point of the edge (where a corner would go). */
 export interface Hit {
   readonly ref: HandleRef;

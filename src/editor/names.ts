@@ -7,7 +7,7 @@ import { EditError } from './errors.ts';
  * Longest name the editor takes, characters. Under the file's MAX_NAME_LENGTH (80), so a typed name always saves
  * and " copy 2" can still be added to it.
  */
-export const TYPED_NAME_MAX = 60;
+const TYPED_NAME_MAX = 60;
 
 /**
  * `name` without surrounding spaces, or an EditError when the file could not hold it: longer than TYPED_NAME_MAX,

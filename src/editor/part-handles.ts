@@ -22,7 +22,7 @@ export function liftHandlePosition(valve: ValvePart): Point {
 }
 
 /** Centre of the seat's gauge line: the valve axis point (document units). */
-export function axisHandlePosition(valve: ValvePart): Point {
+function axisHandlePosition(valve: ValvePart): Point {
   return [valve.axis.x, valve.axis.y];
 }
 

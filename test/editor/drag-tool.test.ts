@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { Point } from '../../src/document/types.ts';
 import { IDLE, stepTool, type DragAction, type ToolAction, type ToolContext, type ToolEvent, type ToolState } from '../../src/editor/drag-tool.ts';
 import { applyEdit } from '../../src/editor/edits.ts';
-import { filletHandlePosition, radiusFromHandleDrag } from '../../src/editor/hit-test.ts';
+import { filletHandlePosition, radiusFromHandleDrag } from '../../src/editor/fillet-handle.ts';
 import { active, boxDocument, boxSection } from './fixtures.ts';
 
 const ctx: ToolContext = { section: boxSection(), tolerance: 1 };

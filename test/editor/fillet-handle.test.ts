@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Section } from '../../src/document/types.ts';
-import { cornerShape, handleDistance } from '../../src/editor/fillet-handle.ts';
-import { filletHandlePosition, radiusFromHandleDrag } from '../../src/editor/hit-test.ts';
+import { cornerShape, filletHandlePosition, handleDistance, radiusFromHandleDrag } from '../../src/editor/fillet-handle.ts';
 import { boxSection, expectPointNear } from './fixtures.ts';
 
 /** Equilateral triangle: every corner 60 degrees. Corner 0 at the origin, bisector at 30 degrees. */
