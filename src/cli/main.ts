@@ -7,7 +7,7 @@ import { checkCommand } from './check.ts';
 import { solveCommand } from './solve.ts';
 
 /** Every subcommand; a new one (e.g. solve) is one file and one entry here. */
-export const COMMANDS: readonly Command[] = [checkCommand, solveCommand];
+const COMMANDS: readonly Command[] = [checkCommand, solveCommand];
 
 const HELP_FLAGS = new Set(['-h', '--help', 'help']);
 

@@ -1,16 +1,15 @@
 /** The command line of `portwright solve`: flags read into settings, each mistake a plain UserError. */
 
+import { MAX_CELLS } from '../solver/errors.ts';
 import { UserError } from './errors.ts';
 
 /** Grid cells when --cells is not given: the app's "standard" grid detail. */
 export const DEFAULT_CELLS = 250_000;
 /** Fewest cells worth solving: below this a port's throat is only a few cells across. */
-export const MIN_CELLS = 1_000;
-/** Most cells one solve may use (the solver's own limit, MAX_CELLS). */
-export const MAX_SOLVE_CELLS = 16_000_000;
+const MIN_CELLS = 1_000;
 /** Relative residual limits for --tolerance: tighter than 1e-13 is below rounding, looser than 1e-2 is not a solve. */
-export const MIN_TOLERANCE = 1e-13;
-export const MAX_TOLERANCE = 1e-2;
+const MIN_TOLERANCE = 1e-13;
+const MAX_TOLERANCE = 1e-2;
 
 export const SOLVE_ARGS = 'FILE [--variant NAME] [--cells N] [--probe X,Y]... [--json] [--tolerance T]';
 const SOLVE_USAGE = `portwright solve ${SOLVE_ARGS}`;
@@ -71,9 +70,9 @@ export function parseSolveArgs(args: readonly string[]): SolveArgs {
 
 function parseCells(text: string): number {
   const cells = Number(text.replaceAll('_', ''));
-  if (!Number.isInteger(cells) || cells < MIN_CELLS || cells > MAX_SOLVE_CELLS) {
+  if (!Number.isInteger(cells) || cells < MIN_CELLS || cells > MAX_CELLS) {
     throw new UserError(
-      `--cells must be a whole number from ${MIN_CELLS.toLocaleString('en-US')} to ${MAX_SOLVE_CELLS.toLocaleString('en-US')} (got "${text}"); ` +
+      `--cells must be a whole number from ${MIN_CELLS.toLocaleString('en-US')} to ${MAX_CELLS.toLocaleString('en-US')} (got "${text}"); ` +
         `the standard grid is ${DEFAULT_CELLS.toLocaleString('en-US')}`,
     );
   }

@@ -15,7 +15,7 @@ import { solveReportLines } from './solve-text.ts';
 import { variantDomain } from './variant-domain.ts';
 
 /** From this many grid cells a solve takes seconds, so solve says on stderr that it has started. */
-export const PROGRESS_CELLS = 1_000_000;
+const PROGRESS_CELLS = 1_000_000;
 
 export const solveCommand: Command = {
   name: 'solve',
