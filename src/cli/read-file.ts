@@ -3,7 +3,7 @@
 import { readFileSync, statSync } from 'node:fs';
 import { DocumentError } from '../document/errors.ts';
 import { readDocument, type ReadResult } from '../document/load.ts';
-import { MAX_FILE_BYTES } from '../document/limits.ts';
+import { MAX_FILE_BYTES, formatMegabytes } from '../document/limits.ts';
 import { UserError } from './errors.ts';
 
 /** The document in `path` and its file's format version; a file that cannot be read is a UserError naming `path`. */
@@ -23,7 +23,7 @@ function readSectionText(path: string): string {
     const stat = statSync(path);
     if (stat.isDirectory()) throw new UserError(`${path} is a folder, not a section file`);
     if (stat.size > MAX_FILE_BYTES) {
-      throw new UserError(`${path} is too big (${(stat.size / 1e6).toFixed(1)} MB); a section file is at most ${MAX_FILE_BYTES / 1e6} MB`);
+      throw new UserError(`${path} is too big (${formatMegabytes(stat.size)}); a section file is at most ${formatMegabytes(MAX_FILE_BYTES)}`);
     }
     return readFileSync(path, 'utf8');
   } catch (error) {

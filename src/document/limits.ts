@@ -23,6 +23,11 @@ export const MAX_TITLE_LENGTH = 120;
 /** Length of a variant note, characters. */
 export const MAX_NOTE_LENGTH = 4000;
 
+/** A file size for a message, in MB to one decimal: "5.0 MB". */
+export function formatMegabytes(bytes: number): string {
+  return `${(bytes / 1e6).toFixed(1)} MB`;
+}
+
 /** UTF-8 byte length of `text` without building the encoded bytes. */
 export function utf8Length(text: string): number {
   let bytes = 0;

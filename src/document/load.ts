@@ -3,7 +3,7 @@
 import type { z } from 'zod';
 import { FORMAT_NAME, FORMAT_VERSION, type PortDocument } from './types.ts';
 import { DocumentError, documentError } from './errors.ts';
-import { MAX_FILE_BYTES, utf8Length } from './limits.ts';
+import { MAX_FILE_BYTES, formatMegabytes, utf8Length } from './limits.ts';
 import { readJson } from './json-read.ts';
 import { writeJson } from './json-write.ts';
 import { documentSchema } from './schema.ts';
@@ -49,12 +49,8 @@ function checkSize(text: string): void {
   // Characters never outnumber UTF-8 bytes, so the cheap length test settles most huge inputs at once.
   const bytes = text.length > MAX_FILE_BYTES ? text.length : utf8Length(text);
   if (bytes > MAX_FILE_BYTES) {
-    throw documentError('', `the file is too big (${formatBytes(bytes)}); a section file is at most ${formatBytes(MAX_FILE_BYTES)}`);
+    throw documentError('', `the file is too big (${formatMegabytes(bytes)}); a section file is at most ${formatMegabytes(MAX_FILE_BYTES)}`);
   }
-}
-
-function formatBytes(bytes: number): string {
-  return `${(bytes / 1e6).toFixed(1)} MB`;
 }
 
 function expectSectionFile(raw: unknown): Record<string, unknown> {

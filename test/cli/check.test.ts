@@ -2,6 +2,7 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { run } from '../../src/cli/main.ts';
+import { MAX_FILE_BYTES } from '../../src/document/limits.ts';
 import { REPO, STACK_LINE, captureIO, tempDir } from './helpers.ts';
 
 const tmp = tempDir();
@@ -70,6 +71,12 @@ describe('check (in process)', () => {
     expect(io.stderr[0]).toBe(`portwright check: ${path}: the file cannot be used:`);
     expect(io.stderr[1]).toMatch(/^ {2}this is not a Portwright section file/);
     expect(io.stderr.filter((line) => line.includes('\n'))).toEqual([]);
+  });
+
+  it('refuses a file too big to be a section before reading it, in the loader\'s words', async () => {
+    const { code, err } = await check(tmp.write('huge.json', ' '.repeat(MAX_FILE_BYTES + 100_000)));
+    expect(code).toBe(1);
+    expect(err).toMatch(/huge\.json is too big \(5\.1 MB\); a section file is at most 5\.0 MB$/);
   });
 
   it('says a newer file needs a newer Portwright', async () => {
