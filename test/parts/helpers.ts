@@ -90,10 +90,4 @@ export function assertInDelta(actual: number, expected: number, delta = 1e-9): v
 }
 
 /** Freezes a value and everything in it, so a test proves the code under test never mutates it. */
-export function deepFreeze<T>(value: T): T {
-  if (typeof value === 'object' && value !== null) {
-    for (const child of Object.values(value)) deepFreeze(child);
-    Object.freeze(value);
-  }
-  return value;
-}
+export { deepFreeze } from '../editor/fixtures.ts';
