@@ -28,7 +28,7 @@ const HANDLE_ORDER: readonly HandleKind[] = ['vertex', 'through', 'via', 'fillet
  *
  * With `parts` (the variant's, e.g. `activeVariant(doc).parts`), what they generate gets no handles: the valve head
  * island with a valve, and the valve pocket between the anchor corners with a seat and bore (the anchors themselves
- * keep theirs); and a valve adds the lift and valve-axis handles. Without `parts` every corner is listed, as before.
+ * keep theirs); and a valve adds the lift and valve-axis handles. Without `parts` every corner is listed.
  * `generated` is what `parts` generate, for a caller that has it already (hitTest).
  */
 export function listHandles(section: Section, parts?: Parts, generated = generatedGeometry(section, parts)): Handle[] {

@@ -21,7 +21,7 @@ export interface HitOptions {
   readonly kinds?: readonly HandleKind[];
   /**
    * The variant's parametric parts (e.g. `activeVariant(doc).parts`): what they generate cannot be hit (see
-   * listHandles), and a valve adds its lift and valve-axis handles. Absent: every corner and edge counts, as before.
+   * listHandles), and a valve adds its lift and valve-axis handles. Absent: every corner and edge counts.
    */
   readonly parts?: Parts;
 }

@@ -8,7 +8,7 @@ export interface ToolContext {
   readonly section: Section;
   /**
    * The active variant's parametric parts as they are now (`activeVariant(doc).parts`). With them, generated geometry
-   * cannot be grabbed and the valve's lift and axis handles can; absent, the tool sees only the section, as before.
+   * cannot be grabbed and the valve's lift and axis handles can; absent, the tool sees only the section.
    */
   readonly parts?: Parts;
   /** Pick slop, document units (the app converts its pixel slop with the view scale). */
