@@ -1,6 +1,6 @@
 /** Plain successive over-relaxation on the solver's stencil: the baseline the multigrid solver is measured against. */
 import { diagonalOf, type Stencil } from '../src/solver/assemble.ts';
-import { residual } from '../src/solver/pcg-operator.ts';
+import { residual } from '../src/solver/pcg/operator.ts';
 
 export interface SorRun {
   readonly sweeps: number;

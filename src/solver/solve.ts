@@ -1,14 +1,14 @@
 /** The solve: rasterise, connect, assemble, warm start, MG-PCG, velocity, flux checks, wall speeds. */
 import { assemble, writeRhs } from './assemble.ts';
 import { connectedCells } from './connectivity.ts';
-import { buildMultigrid } from './multigrid.ts';
-import { pcg } from './pcg.ts';
-import { paddedVector, residual } from './pcg-operator.ts';
-import { rasterise } from './rasterise.ts';
+import { buildMultigrid } from './multigrid/multigrid.ts';
+import { pcg } from './pcg/pcg.ts';
+import { paddedVector, residual } from './pcg/operator.ts';
+import { rasterise } from './rasterise/rasterise.ts';
 import { STATION_COUNT, stationFluxes, worstImbalance } from './stations-flux.ts';
 import { MARK_INLET, type CutGrid, type FlowDomain, type SolveOptions, type SolveResult } from './types.ts';
 import { boundaryFlux, speedRatio } from './velocity.ts';
-import { markedLength } from './rasterise-checks.ts';
+import { markedLength } from './rasterise/checks.ts';
 import { peakSpeed, sharpConvexCorners } from './velocity-peak.ts';
 import { wallSpeeds } from './wall-speeds.ts';
 import { warmStartGuess } from './warm-start.ts';

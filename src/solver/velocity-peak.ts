@@ -1,6 +1,6 @@
 /** Peak speed ratio of a solved field, kept clear of partial cells and of sharp convex corners. */
-import { fluidSense } from './rasterise-checks.ts';
-import type { GridFrame } from './rasterise-frame.ts';
+import { fluidSense } from './rasterise/checks.ts';
+import type { GridFrame } from './rasterise/frame.ts';
 import type { CutGrid, FlowDomain, Ring } from './types.ts';
 
 export interface SpeedPeak {

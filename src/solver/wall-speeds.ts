@@ -1,5 +1,5 @@
 /** Speed ratio along each named wall, reconstructed at the wall from the cell potentials, for the boundary-layer march. */
-import { fluidSense } from './rasterise-checks.ts';
+import { fluidSense } from './rasterise/checks.ts';
 import { MARK_WALL } from './types.ts';
 import type { CutGrid, FlowDomain, Ring, WallSpeeds } from './types.ts';
 

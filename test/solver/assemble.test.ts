@@ -1,7 +1,7 @@
 /** Finite-volume assembly: conservation, symmetry, Dirichlet couplings and excluded cells on hand-made grids. */
 import { describe, expect, it } from 'vitest';
 import { assemble, writeRhs } from '../../src/solver/assemble.ts';
-import { paddedVector, residual } from '../../src/solver/pcg-operator.ts';
+import { paddedVector, residual } from '../../src/solver/pcg/operator.ts';
 import type { CutGrid } from '../../src/solver/types.ts';
 import { channelGrid, fluidMask } from './hand-grids.ts';
 

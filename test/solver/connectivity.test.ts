@@ -2,11 +2,11 @@
 import { describe, expect, it } from 'vitest';
 import { connectedCells } from '../../src/solver/connectivity.ts';
 import { FlowSetupError } from '../../src/solver/errors.ts';
-import { rasterise } from '../../src/solver/rasterise.ts';
+import { rasterise } from '../../src/solver/rasterise/rasterise.ts';
 import { MARK_INLET, MARK_OUTLET, MARK_WALL } from '../../src/solver/types.ts';
 import type { CutGrid } from '../../src/solver/types.ts';
-import { domainOf, portSection, ringOf } from './rasterise-shapes.ts';
-import type { Pt } from './rasterise-shapes.ts';
+import { domainOf, portSection, ringOf } from './rasterise/shapes.ts';
+import type { Pt } from './rasterise/shapes.ts';
 
 const W = MARK_WALL;
 const IN = MARK_INLET;

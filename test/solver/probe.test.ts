@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { probeFlow } from '../../src/solver/probe.ts';
 import { solveFlow } from '../../src/solver/solve.ts';
 import { channelGrid } from './hand-grids.ts';
-import { bend } from './rasterise-shapes.ts';
+import { bend } from './rasterise/shapes.ts';
 
 /** A hand grid carrying the field f at every cell centre, as phi and (doubled) as speed ratio. */
 function fieldOn(nx: number, ny: number, h: number, f: (x: number, y: number) => number) {

@@ -1,7 +1,7 @@
 /** Accuracy of the whole solve against exact and published potential flows (REFERENCES.md section 1). */
 import { describe, expect, it } from 'vitest';
 import { solveFlow } from '../../src/solver/solve.ts';
-import { bend, channel } from './rasterise-shapes.ts';
+import { bend, channel } from './rasterise/shapes.ts';
 import { cylinderInChannel, expectRelative, meanWallRatio, observedOrders, wallNamed, wallPeak } from './solver-shapes.ts';
 
 /** Cells for `across` cells over the bend's width 1; its bounding box is 2 x 2. */

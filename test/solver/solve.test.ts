@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { connectedCells } from '../../src/solver/connectivity.ts';
 import { SolveSupersededError, solveFlow, solveOnGrid } from '../../src/solver/solve.ts';
 import { channelGrid } from './hand-grids.ts';
-import { bend } from './rasterise-shapes.ts';
+import { bend } from './rasterise/shapes.ts';
 import { benchDomain } from '../../bench/bench-problem.ts';
 
 describe('solveFlow', () => {

@@ -2,7 +2,7 @@
 import { expect } from 'vitest';
 import { MARK_INLET, MARK_OUTLET, MARK_WALL } from '../../src/solver/types.ts';
 import type { FlowDomain, WallSpeeds } from '../../src/solver/types.ts';
-import { domainOf, ringOf, type Pt } from './rasterise-shapes.ts';
+import { domainOf, ringOf, type Pt } from './rasterise/shapes.ts';
 
 /** |actual / expected - 1| <= tolerance, with both numbers in the failure message. */
 export function expectRelative(actual: number, expected: number, tolerance: number): void {

@@ -6,7 +6,7 @@ import { assemble } from '../../src/solver/assemble.ts';
 import { CORNER_CLEARANCE_CELLS, CORNER_CLEARANCE_SHARE, sharpConvexCorners } from '../../src/solver/velocity-peak.ts';
 import { MARK_INLET, MARK_OUTLET, MARK_WALL } from '../../src/solver/types.ts';
 import { channelGrid, fluidMask } from './hand-grids.ts';
-import { domainOf, ringOf, type Pt } from './rasterise-shapes.ts';
+import { domainOf, ringOf, type Pt } from './rasterise/shapes.ts';
 
 /** A channel with a square step up in the floor: inlet left, outlet right; the step's top corners are convex. */
 function stepChannel(): ReturnType<typeof domainOf> {

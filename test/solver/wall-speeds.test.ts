@@ -1,11 +1,11 @@
 /** Wall speed reconstruction: exact flows sampled on the cells, wall runs and their names, NaN away from the fluid. */
 import { describe, expect, it } from 'vitest';
-import { rasterise } from '../../src/solver/rasterise.ts';
+import { rasterise } from '../../src/solver/rasterise/rasterise.ts';
 import { wallSpeeds } from '../../src/solver/wall-speeds.ts';
 import type { CutGrid, FlowDomain, WallSpeeds } from '../../src/solver/types.ts';
-import { bend, channel, domainOf, portSection, ringOf } from './rasterise-shapes.ts';
+import { bend, channel, domainOf, portSection, ringOf } from './rasterise/shapes.ts';
 import { connectedCells } from '../../src/solver/connectivity.ts';
-import type { Pt } from './rasterise-shapes.ts';
+import type { Pt } from './rasterise/shapes.ts';
 import { MARK_INLET, MARK_OUTLET, MARK_WALL } from '../../src/solver/types.ts';
 
 /** An exact potential sampled at the centres of the cells holding fluid; NaN elsewhere. */

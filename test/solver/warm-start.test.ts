@@ -4,7 +4,7 @@ import { solveFlow, solveOnGrid } from '../../src/solver/solve.ts';
 import type { PotentialField, SolveResult } from '../../src/solver/types.ts';
 import { warmStartGuess } from '../../src/solver/warm-start.ts';
 import { channelGrid, fluidMask } from './hand-grids.ts';
-import { bend } from './rasterise-shapes.ts';
+import { bend } from './rasterise/shapes.ts';
 
 const fieldOf = (r: Pick<SolveResult, 'grid' | 'phi'>): PotentialField => ({ ...r.grid, phi: r.phi });
 

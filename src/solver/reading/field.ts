@@ -1,5 +1,5 @@
 /** The cell potential carried a little way into the solid, and sampled anywhere by bilinear interpolation. */
-import type { GridFrame } from '../rasterise-frame.ts';
+import type { GridFrame } from '../rasterise/frame.ts';
 import type { CutGrid } from '../types.ts';
 
 /**

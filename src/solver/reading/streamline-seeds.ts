@@ -1,5 +1,5 @@
 /** Streamline starting points spread along the inlet at equal shares of the inlet flux. */
-import { forEachCellPiece } from '../clip-pieces.ts';
+import { forEachCellPiece } from '../rasterise/clip-pieces.ts';
 import { MARK_INLET } from '../types.ts';
 import type { CutGrid, FlowDomain } from '../types.ts';
 

@@ -1,5 +1,5 @@
 /** Solve results built from exact potentials sampled on rasterised grids, for reading tests that need no solver. */
-import { rasterise } from '../../../src/solver/rasterise.ts';
+import { rasterise } from '../../../src/solver/rasterise/rasterise.ts';
 import type { FlowDomain, SolveResult } from '../../../src/solver/types.ts';
 import { wallSpeeds } from '../../../src/solver/wall-speeds.ts';
 
@@ -36,13 +36,13 @@ export function exactResult(domain: FlowDomain, targetCells: number, flow: Exact
   return { grid, phi, speedRatio, iterations: 0, residual: 0, conductance: flow.conductance, fluxImbalance: 0, inletMeanSpeed, peak, walls };
 }
 
-/** Exact flow in a straight channel [0, L] x [0, W] (see rasterise-shapes channel): phi = 1 - x / L. */
+/** Exact flow in a straight channel [0, L] x [0, W] (see rasterise/shapes.ts channel): phi = 1 - x / L. */
 export function channelFlow(lengthL: number, widthW: number): ExactFlow {
   return { phi: (x) => 1 - x / lengthL, speed: () => 1 / lengthL, conductance: widthW / lengthL, inletLength: widthW };
 }
 
 /**
- * Exact flow in the 90 degree concentric bend of rasterise-shapes (inlet on theta = 0, outlet on theta = pi/2):
+ * Exact flow in the 90 degree concentric bend of rasterise/shapes.ts (inlet on theta = 0, outlet on theta = pi/2):
  * phi = 1 - theta / (pi / 2), speed = K / r with K = 2 / pi, flux Q = K ln(r2 / r1) (REFERENCES.md 1a, derived).
  */
 export function bendFlow(r1: number, r2: number): ExactFlow {

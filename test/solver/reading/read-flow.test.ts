@@ -1,7 +1,7 @@
 /** readFlow on exact flows: the straight channel and the concentric bend. */
 import { describe, expect, it } from 'vitest';
 import { readFlow } from '../../../src/solver/reading/index.ts';
-import { bend, channel } from '../rasterise-shapes.ts';
+import { bend, channel } from '../rasterise/shapes.ts';
 import { bendFlow, channelFlow, exactResult } from './analytic-flow.ts';
 import { assertInDelta } from './helpers.ts';
 

@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import { readFlow } from '../../../src/solver/reading/index.ts';
 import { interpolateDescending } from '../../../src/solver/reading/slow-zones.ts';
-import { bend } from '../rasterise-shapes.ts';
+import { bend } from '../rasterise/shapes.ts';
 import { bendFlow, exactResult } from './analytic-flow.ts';
 import { assertInDelta } from './helpers.ts';
 

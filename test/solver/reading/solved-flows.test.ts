@@ -6,7 +6,7 @@ import { defaultTolerance, sectionToDomain } from '../../../src/geometry/index.t
 import { readFlow, readingSummary } from '../../../src/solver/reading/index.ts';
 import { solveFlow } from '../../../src/solver/solve.ts';
 import { MARK_INLET, MARK_OUTLET, MARK_WALL } from '../../../src/solver/types.ts';
-import { domainOf, ringOf, type Pt } from '../rasterise-shapes.ts';
+import { domainOf, ringOf, type Pt } from '../rasterise/shapes.ts';
 
 /** Channel 10 x 1, flow along +x, with a pocket 0.6 wide and 1 deep in its roof at x = 4.7 .. 5.3. */
 function pocketChannel() {

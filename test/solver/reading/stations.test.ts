@@ -4,7 +4,7 @@ import { extendedPhi } from '../../../src/solver/reading/field.ts';
 import { RingIndex } from '../../../src/solver/reading/ring-index.ts';
 import { buildStations, evenLevels, tightestStation } from '../../../src/solver/reading/stations.ts';
 import type { FlowDomain, SolveResult } from '../../../src/solver/types.ts';
-import { bend, channel } from '../rasterise-shapes.ts';
+import { bend, channel } from '../rasterise/shapes.ts';
 import { bendFlow, channelFlow, exactResult } from './analytic-flow.ts';
 import { assertInDelta } from './helpers.ts';
 

@@ -4,7 +4,7 @@ import { extendedPhi } from '../../../src/solver/reading/field.ts';
 import { downstreamWalls, type WallPath } from '../../../src/solver/reading/wall-paths.ts';
 import { readWall } from '../../../src/solver/reading/walls.ts';
 import type { WallSpeeds } from '../../../src/solver/types.ts';
-import { channel } from '../rasterise-shapes.ts';
+import { channel } from '../rasterise/shapes.ts';
 import { channelFlow, exactResult } from './analytic-flow.ts';
 import { assertInDelta } from './helpers.ts';
 

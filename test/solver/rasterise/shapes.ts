@@ -1,6 +1,6 @@
 /** Small hand-made flow domains for the rasteriser, connectivity and wall-speed tests. */
-import { MARK_INLET, MARK_OUTLET, MARK_WALL } from '../../src/solver/types.ts';
-import type { CutGrid, FlowDomain, Ring } from '../../src/solver/types.ts';
+import { MARK_INLET, MARK_OUTLET, MARK_WALL } from '../../../src/solver/types.ts';
+import type { CutGrid, FlowDomain, Ring } from '../../../src/solver/types.ts';
 
 export type Pt = readonly [number, number];
 

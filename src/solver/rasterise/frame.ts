@@ -1,6 +1,6 @@
 /** The grid's frame (cell size, origin, counts) and the section's rings moved into grid units. */
-import type { CutGrid, FlowDomain, Ring } from './types.ts';
-import { fluidSense } from './rasterise-checks.ts';
+import type { CutGrid, FlowDomain, Ring } from '../types.ts';
+import { fluidSense } from './checks.ts';
 
 /** A grid's lattice without its cut-cell measures: counts, cell size and the lower-left corner of cell (0, 0). */
 export type GridFrame = Pick<CutGrid, 'nx' | 'ny' | 'h' | 'x0' | 'y0'>;

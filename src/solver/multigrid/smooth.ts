@@ -1,5 +1,5 @@
 /** Red-black Gauss-Seidel on one grid row at a time, the multigrid smoother (rows let passes be fused). */
-import { TINY, type Stencil } from './assemble.ts';
+import { TINY, type Stencil } from '../assemble.ts';
 
 /** Cell colour: (i + j) & 1; 0 = red, 1 = black. */
 export type Colour = 0 | 1;

@@ -1,10 +1,10 @@
 /** Cut-cell rasterisation of a flow domain: area fractions, face open fractions and inlet/outlet couplings. */
-import { cellFractions } from './rasterise-area.ts';
-import { bounds, checkDomain, checkInletSpan } from './rasterise-checks.ts';
-import { couplings } from './rasterise-coupling.ts';
-import { faceFractions } from './rasterise-faces.ts';
-import { gridFrame, toGridRings } from './rasterise-frame.ts';
-import type { CutGrid, FlowDomain } from './types.ts';
+import { cellFractions } from './area.ts';
+import { bounds, checkDomain, checkInletSpan } from './checks.ts';
+import { couplings } from './coupling.ts';
+import { faceFractions } from './faces.ts';
+import { gridFrame, toGridRings } from './frame.ts';
+import type { CutGrid, FlowDomain } from '../types.ts';
 
 /**
  * Lays a square grid over the domain and measures it exactly.
@@ -18,7 +18,7 @@ import type { CutGrid, FlowDomain } from './types.ts';
  * cells beside it hold fluid; a coupling is non-zero only in a cell holding fluid.
  * Memory: five Float64 arrays of about nx * ny (40 bytes a cell).
  *
- * Throws FlowSetupError for a section the solver cannot use (see rasterise-checks.ts).
+ * Throws FlowSetupError for a section the solver cannot use (see checks.ts).
  * Example: a 4 x 1 channel at targetCells 64 gives h = 0.25, nx = 18, ny = 6.
  */
 export function rasterise(domain: FlowDomain, targetCells: number): CutGrid {

@@ -1,7 +1,7 @@
-/** Restriction P^T of one fine row, the exact transpose of prolongRow (see multigrid-bilinear.ts for the weights). */
-import type { Stencil } from './assemble.ts';
-import { sideWeight } from './multigrid-bilinear.ts';
-import { cellResidual } from './pcg-operator.ts';
+/** Restriction P^T of one fine row, the exact transpose of prolongRow (see bilinear.ts for the weights). */
+import type { Stencil } from '../assemble.ts';
+import { sideWeight } from './bilinear.ts';
+import { cellResidual } from '../pcg/operator.ts';
 
 /**
  * Adds P^T (b - A' x) of fine row j to coarseB (I + J * ncx; the caller zeroes it before the first row),

@@ -7,9 +7,9 @@
  * linearly to zero at the boundary. Restriction applies the transpose, so the V-cycle stays symmetric.
  * Both rows (bilinear and operator-dependent) are built once per hierarchy, so a V-cycle only sums them.
  */
-import { diagonalOf, type Stencil } from './assemble.ts';
-import { bilinearWeights, interpolationStrength } from './multigrid-bilinear.ts';
-import { cellResidual } from './pcg-operator.ts';
+import { diagonalOf, type Stencil } from '../assemble.ts';
+import { bilinearWeights, interpolationStrength } from './bilinear.ts';
+import { cellResidual } from '../pcg/operator.ts';
 
 /** Transfer context of one fine level and its coarse level. */
 export interface TransferPair {

@@ -1,10 +1,10 @@
 /** The multigrid preconditioner: coarse operators, symmetry and definiteness, grid-independent contraction. */
 import { describe, expect, it } from 'vitest';
-import { assemble, writeRhs, type Stencil } from '../../src/solver/assemble.ts';
-import { applyMultigrid, buildMultigrid } from '../../src/solver/multigrid.ts';
-import { coarsen } from '../../src/solver/multigrid-levels.ts';
-import { paddedVector, residual } from '../../src/solver/pcg-operator.ts';
-import { channelGrid, fluidMask } from './hand-grids.ts';
+import { assemble, writeRhs, type Stencil } from '../../../src/solver/assemble.ts';
+import { applyMultigrid, buildMultigrid } from '../../../src/solver/multigrid/multigrid.ts';
+import { coarsen } from '../../../src/solver/multigrid/levels.ts';
+import { paddedVector, residual } from '../../../src/solver/pcg/operator.ts';
+import { channelGrid, fluidMask } from '../hand-grids.ts';
 
 /** Deterministic pseudo-random numbers in [-1, 1) (no unseeded randomness in tests either). */
 function seeded(seed: number): () => number {

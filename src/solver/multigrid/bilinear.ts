@@ -15,7 +15,7 @@
  * V-cycle residual factors on a square channel were 0.17, 0.35, 0.44 at 32, 128, 512 cells across,
  * against about 0.3 at every size with these (test/solver/multigrid.test.ts).
  */
-import { diagonalOf, type Stencil } from './assemble.ts';
+import { diagonalOf, type Stencil } from '../assemble.ts';
 
 /** Coarse cells whose diagonal (face sum + coupling) reaches this take full weight; 2 keeps wall and corner cells full. */
 const FULL_STRENGTH_DIAGONAL = 2;

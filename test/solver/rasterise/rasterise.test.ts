@@ -1,11 +1,11 @@
 /** The rasteriser on hand-made sections: grid frame, exact area and face fractions, couplings, set-up errors. */
 import { describe, expect, it } from 'vitest';
-import { FlowSetupError, MAX_CELLS } from '../../src/solver/errors.ts';
-import { rasterise } from '../../src/solver/rasterise.ts';
-import { MARK_INLET, MARK_OUTLET, MARK_WALL } from '../../src/solver/types.ts';
-import type { FlowDomain } from '../../src/solver/types.ts';
-import { channel, domainOf, fluidArea, polygonArea, portSection, ringOf } from './rasterise-shapes.ts';
-import type { Pt } from './rasterise-shapes.ts';
+import { FlowSetupError, MAX_CELLS } from '../../../src/solver/errors.ts';
+import { rasterise } from '../../../src/solver/rasterise/rasterise.ts';
+import { MARK_INLET, MARK_OUTLET, MARK_WALL } from '../../../src/solver/types.ts';
+import type { FlowDomain } from '../../../src/solver/types.ts';
+import { channel, domainOf, fluidArea, polygonArea, portSection, ringOf } from './shapes.ts';
+import type { Pt } from './shapes.ts';
 
 const W = MARK_WALL;
 const IN = MARK_INLET;

@@ -1,8 +1,8 @@
 /** Dirichlet coupling of cells to the inlet (phi = 1) and outlet (phi = 0) pieces that cross them. */
 import { forEachCellPiece } from './clip-pieces.ts';
-import { clamp } from './rasterise-area.ts';
-import type { GridRing } from './rasterise-frame.ts';
-import { MARK_INLET, MARK_OUTLET } from './types.ts';
+import { clamp } from './area.ts';
+import type { GridRing } from './frame.ts';
+import { MARK_INLET, MARK_OUTLET } from '../types.ts';
 
 /**
  * Smallest normal distance from a cell centre to a boundary piece used in the coupling, grid units.

@@ -1,11 +1,11 @@
 /** MG-preconditioned conjugate gradients: convergence rate, iteration cap, supersession, trivial systems. */
 import { describe, expect, it } from 'vitest';
-import { assemble, writeRhs } from '../../src/solver/assemble.ts';
-import { buildMultigrid } from '../../src/solver/multigrid.ts';
-import { pcg, type PcgOptions, type PcgReport } from '../../src/solver/pcg.ts';
-import { paddedVector } from '../../src/solver/pcg-operator.ts';
-import type { CutGrid } from '../../src/solver/types.ts';
-import { channelGrid, fluidMask } from './hand-grids.ts';
+import { assemble, writeRhs } from '../../../src/solver/assemble.ts';
+import { buildMultigrid } from '../../../src/solver/multigrid/multigrid.ts';
+import { pcg, type PcgOptions, type PcgReport } from '../../../src/solver/pcg/pcg.ts';
+import { paddedVector } from '../../../src/solver/pcg/operator.ts';
+import type { CutGrid } from '../../../src/solver/types.ts';
+import { channelGrid, fluidMask } from '../hand-grids.ts';
 
 /** `guess` is the starting potential in every cell (0 unless a test needs a start that is not already the answer). */
 function solve(grid: CutGrid, options: Partial<PcgOptions>, coarseScale?: number, guess = 0): { report: PcgReport; phi: Float64Array; history: number[] } {

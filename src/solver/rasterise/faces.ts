@@ -1,6 +1,6 @@
 /** Exact open fraction of every cell face, from where each grid line passes through the fluid. */
-import { clamp, tidyFraction } from './rasterise-area.ts';
-import type { GridRing } from './rasterise-frame.ts';
+import { clamp, tidyFraction } from './area.ts';
+import type { GridRing } from './frame.ts';
 
 /**
  * Tie rule: a point lying on grid line u = k counts as right of it, and on v = m as above it.

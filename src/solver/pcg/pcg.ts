@@ -1,8 +1,8 @@
 /** Conjugate gradients preconditioned by one multigrid V-cycle per iteration. */
-import type { Stencil } from './assemble.ts';
-import { applyMultigrid, type Multigrid } from './multigrid.ts';
-import { residual, updateDirectionAndApply } from './pcg-operator.ts';
-import { loadPadded, updateSolution } from './pcg-vectors.ts';
+import type { Stencil } from '../assemble.ts';
+import { applyMultigrid, type Multigrid } from '../multigrid/multigrid.ts';
+import { residual, updateDirectionAndApply } from './operator.ts';
+import { loadPadded, updateSolution } from './vectors.ts';
 
 export interface PcgOptions {
   /** Stop when ||r|| / ||b|| <= tolerance. */

@@ -1,12 +1,12 @@
 /** Geometric multigrid V-cycle on masked cut-cell levels, used as the conjugate-gradient preconditioner. */
-import type { Stencil } from './assemble.ts';
-import { neighbourIndex, prolongRow } from './multigrid-bilinear.ts';
-import { restrictRow } from './multigrid-restrict.ts';
-import { COARSEST_MAX_CELLS, factorCoarsest, solveCoarsest, type CoarsestSolver } from './multigrid-coarsest.ts';
-import { correctProlongCell, correctRestrictCell, transferPair, type TransferPair } from './multigrid-dirichlet.ts';
-import { COARSE_SCALE, coarsen } from './multigrid-levels.ts';
-import { rowDot, smoothColour, smoothRedFromZeroRow, smoothRow } from './multigrid-smooth.ts';
-import { paddedVector } from './pcg-operator.ts';
+import type { Stencil } from '../assemble.ts';
+import { neighbourIndex, prolongRow } from './bilinear.ts';
+import { restrictRow } from './restrict.ts';
+import { COARSEST_MAX_CELLS, factorCoarsest, solveCoarsest, type CoarsestSolver } from './coarsest.ts';
+import { correctProlongCell, correctRestrictCell, transferPair, type TransferPair } from './dirichlet.ts';
+import { COARSE_SCALE, coarsen } from './levels.ts';
+import { rowDot, smoothColour, smoothRedFromZeroRow, smoothRow } from './smooth.ts';
+import { paddedVector } from '../pcg/operator.ts';
 
 interface Level {
   readonly stencil: Stencil;

@@ -1,5 +1,5 @@
 /** Applying a 5-point stencil to a padded grid vector (the solver's matrix-vector products). */
-import type { Stencil } from './assemble.ts';
+import type { Stencil } from '../assemble.ts';
 
 /**
  * A padded grid vector: cell (i, j) at index i + j * nx + nx, with one zero row before and after,

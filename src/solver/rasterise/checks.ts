@@ -1,7 +1,7 @@
 /** Set-up checks before rasterising: a section the solver cannot use becomes a FlowSetupError a porter can act on. */
-import { FlowSetupError, MAX_CELLS, formatLength } from './errors.ts';
-import { MARK_INLET, MARK_OUTLET } from './types.ts';
-import type { FlowDomain, Ring } from './types.ts';
+import { FlowSetupError, MAX_CELLS, formatLength } from '../errors.ts';
+import { MARK_INLET, MARK_OUTLET } from '../types.ts';
+import type { FlowDomain, Ring } from '../types.ts';
 
 /** Twice the signed area of a ring (positive when counter-clockwise), length units squared. */
 function ringDoubleArea(ring: Ring): number {

@@ -1,6 +1,6 @@
 /** Direct solve on the coarsest multigrid level: dense Cholesky over its active cells. */
-import { diagonalOf, type Stencil } from './assemble.ts';
-import { couplingOf } from './assemble-dirichlet.ts';
+import { diagonalOf, type Stencil } from '../assemble.ts';
+import { couplingOf } from '../assemble-dirichlet.ts';
 
 /** Factorised coarsest level. */
 export interface CoarsestSolver {

@@ -1,6 +1,6 @@
 /** Exact fluid area fraction of every cell, from the rings' boundary alone (Green's theorem plus a row sweep). */
 import { forEachCellPiece } from './clip-pieces.ts';
-import type { GridRing } from './rasterise-frame.ts';
+import type { GridRing } from './frame.ts';
 
 /** Fractions this close to 0 or 1 are rounding noise of the row sums and are made exact. */
 const FRACTION_NOISE = 1e-12;

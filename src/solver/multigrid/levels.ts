@@ -1,6 +1,6 @@
 /** Coarse levels by 2x2 cell agglomeration: face conductances and Dirichlet couplings summed, then scaled. */
-import { rowSpans, type Stencil } from './assemble.ts';
-import { dirichletList } from './assemble-dirichlet.ts';
+import { rowSpans, type Stencil } from '../assemble.ts';
+import { dirichletList } from '../assemble-dirichlet.ts';
 
 /**
  * Scale applied to the summed couplings of a coarse level.

@@ -1,11 +1,11 @@
 /** The rasteriser on random triangles: total area, fractions in 0..1 and open length along grid lines. */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { rasterise } from '../../src/solver/rasterise.ts';
-import { MARK_INLET, MARK_OUTLET, MARK_WALL } from '../../src/solver/types.ts';
-import type { CutGrid } from '../../src/solver/types.ts';
-import { domainOf, fluidArea, polygonArea, ringOf } from './rasterise-shapes.ts';
-import type { Pt } from './rasterise-shapes.ts';
+import { rasterise } from '../../../src/solver/rasterise/rasterise.ts';
+import { MARK_INLET, MARK_OUTLET, MARK_WALL } from '../../../src/solver/types.ts';
+import type { CutGrid } from '../../../src/solver/types.ts';
+import { domainOf, fluidArea, polygonArea, ringOf } from './shapes.ts';
+import type { Pt } from './shapes.ts';
 
 /** Counter-clockwise triangle with its longest edge as inlet and the next as outlet. */
 function triangleGrid(tri: Pt[], targetCells: number): CutGrid {
