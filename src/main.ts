@@ -5,7 +5,7 @@ import { autosaver, restoreAutosave } from './app/autosave.ts';
 import { DocumentStore, type ChangeCause } from './app/document-store.ts';
 import { EditorController } from './app/editor-controller.ts';
 import { FlowPicture } from './app/flow-picture.ts';
-import { CELLS_BY_DETAIL, DRAG_CELLS } from './app/grid-detail.ts';
+import { caseSetup, CELLS_BY_DETAIL, DRAG_CELLS } from './study/index.ts';
 import { fillHelp } from './app/help-overlay.ts';
 import { LiveSolve } from './app/live-solve.ts';
 import { mountBenchPanel } from './app/bench-panel.ts';
@@ -21,7 +21,7 @@ import { StatusLine } from './app/status.ts';
 import { loadDocument } from './document/load.ts';
 import type { PortDocument } from './document/types.ts';
 import { activeSection, applyEdit, type CommandName } from './editor/index.ts';
-import { defaultTolerance, sectionBounds, sectionToDomain } from './geometry/index.ts';
+import { sectionBounds } from './geometry/index.ts';
 import type { FlowDomain } from './solver/types.ts';
 import { FlowView } from './view/flow-view.ts';
 import { SolverPool } from './workers/pool.ts';
@@ -76,11 +76,10 @@ const live = new LiveSolve(pool.live, {
   },
 });
 
-function currentDomain(doc: PortDocument): FlowDomain | null {
-  const section = activeSection(doc);
+/** The domain the study pipeline sets up for this grid (the command's `solve` sets up the same one). */
+function currentDomain(doc: PortDocument, cells: number): FlowDomain | null {
   try {
-    // A quarter of the kernel's default keeps small fillets smooth when zoomed in; segments grow only as 1/sqrt(tol).
-    return sectionToDomain(section, defaultTolerance(section) / 4, doc.units);
+    return caseSetup(doc, { targetCells: cells }).domain;
   } catch (error) {
     status.show(error instanceof Error ? error.message : String(error), 'error');
     readings.showStale('This reading belongs to the last shape that solved.');
@@ -90,7 +89,8 @@ function currentDomain(doc: PortDocument): FlowDomain | null {
 
 function solve(doc: PortDocument, cause: ChangeCause): void {
   editTime = performance.now();
-  const domain = currentDomain(doc);
+  const cells = cause === 'drag' ? DRAG_CELLS : CELLS_BY_DETAIL[settings.gridDetail];
+  const domain = currentDomain(doc, cells);
   if (!domain) {
     // Let go on a shape that cannot be solved (e.g. the valve shut on its seat): the drag's drawing still ends.
     if (cause !== 'drag') dragging = false;
@@ -103,8 +103,8 @@ function solve(doc: PortDocument, cause: ChangeCause): void {
   // Mid-drag the outline is drawn with the field solved for it (onField), not over the last one.
   if (!dragging) picture.outline(domain);
   const reading = { units: doc.units, slowFraction: settings.slowFraction, inletMeanSpeedMs: settings.inletSpeedMs };
-  if (cause === 'drag') void live.request(domain, 'drag', DRAG_CELLS, null);
-  else void live.request(domain, 'full', CELLS_BY_DETAIL[settings.gridDetail], reading);
+  if (cause === 'drag') void live.request(domain, 'drag', cells, null);
+  else void live.request(domain, 'full', cells, reading);
 }
 
 function showDocument(doc: PortDocument): void {

@@ -1,6 +1,6 @@
 /** The settings panel (lil-gui) over the one settings object; tells the app which group changed. */
 import GUI from 'lil-gui';
-import { CELLS_BY_DETAIL } from './grid-detail.ts';
+import { CELLS_BY_DETAIL } from '../study/grid-detail.ts';
 import type { AppSettings } from './settings.ts';
 import { cellsText } from './solve-indicator.ts';
 

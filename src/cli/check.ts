@@ -24,7 +24,7 @@ function checkFile(path: string, io: CliIO): number {
   io.out(`  variants: ${document.variants.length}, active: "${document.activeVariant}"`);
   const broken: string[] = [];
   for (const variant of document.variants) {
-    const summary = summariseVariant(variant, document.units);
+    const summary = summariseVariant(variant, document);
     printVariant(variant, summary, document, io);
     if (summary.problems.length > 0) broken.push(variant.name);
   }

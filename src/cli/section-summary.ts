@@ -1,6 +1,6 @@
 /** The facts `check` reports about one variant: edge counts, islands, walls, and the fluid area from the geometry kernel. */
 
-import type { Variant } from '../document/types.ts';
+import type { PortDocument, Variant } from '../document/types.ts';
 import { GeometryError, regionArea } from '../geometry/index.ts';
 import { PartsError } from '../parts/index.ts';
 import { variantDomain } from './variant-domain.ts';
@@ -24,7 +24,7 @@ export interface SectionSummary {
  * would solve (parts regenerated), so check and solve agree. Geometry and parts problems are reported, not thrown
  * (any other error is a fault and is thrown).
  */
-export function summariseVariant(variant: Variant, units: string): SectionSummary {
+export function summariseVariant(variant: Variant, document: PortDocument): SectionSummary {
   const section = variant.section;
   const roles = section.outline.edges.map((edge) => edge.role);
   const inletEdges = roles.filter((role) => role === 'inlet').length;
@@ -35,7 +35,7 @@ export function summariseVariant(variant: Variant, units: string): SectionSummar
   let wallNames: readonly string[] = [];
   let fluidArea: number | undefined;
   try {
-    const domain = variantDomain(variant, units);
+    const domain = variantDomain(variant, document);
     wallNames = domain.wallNames;
     fluidArea = regionArea(domain);
   } catch (error) {

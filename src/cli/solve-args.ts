@@ -3,8 +3,8 @@
 import { MAX_CELLS } from '../solver/errors.ts';
 import { UserError } from './errors.ts';
 
-/** Grid cells when --cells is not given: the app's "standard" grid detail. */
-export const DEFAULT_CELLS = 250_000;
+/** The app's "standard" grid detail, named in the message for a bad --cells. */
+const STANDARD_CELLS = 250_000;
 /** Fewest cells worth solving: below this a port's throat is only a few cells across. */
 const MIN_CELLS = 1_000;
 /** Relative residual limits for --tolerance: tighter than 1e-13 is below rounding, looser than 1e-2 is not a solve. */
@@ -18,8 +18,8 @@ export interface SolveArgs {
   readonly file: string;
   /** Variant to solve; undefined means the document's active variant. */
   readonly variant: string | undefined;
-  /** Target grid cells over the section's bounding box. */
-  readonly cells: number;
+  /** Target grid cells over the section's bounding box; undefined means the file's own grid detail. */
+  readonly cells: number | undefined;
   /** Points to read, document units. */
   readonly probes: readonly (readonly [number, number])[];
   readonly json: boolean;
@@ -61,7 +61,7 @@ export function parseSolveArgs(args: readonly string[]): SolveArgs {
   return {
     file: files[0],
     variant: one('--variant'),
-    cells: cellsText === undefined ? DEFAULT_CELLS : parseCells(cellsText),
+    cells: cellsText === undefined ? undefined : parseCells(cellsText),
     probes: (values.get('--probe') ?? []).map(parseProbe),
     json,
     tolerance: toleranceText === undefined ? undefined : parseTolerance(toleranceText),
@@ -73,7 +73,7 @@ function parseCells(text: string): number {
   if (!Number.isInteger(cells) || cells < MIN_CELLS || cells > MAX_CELLS) {
     throw new UserError(
       `--cells must be a whole number from ${MIN_CELLS.toLocaleString('en-US')} to ${MAX_CELLS.toLocaleString('en-US')} (got "${text}"); ` +
-        `the standard grid is ${DEFAULT_CELLS.toLocaleString('en-US')}`,
+        `the standard grid is ${STANDARD_CELLS.toLocaleString('en-US')}`,
     );
   }
   return cells;

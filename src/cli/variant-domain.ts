@@ -1,13 +1,16 @@
-/** A variant's flow domain as `solve` solves it and `check` judges it: parts regenerated, default chordal tolerance. */
+/** A variant's flow domain as `solve` solves it and `check` judges it: the study's own case set-up on the file's grid. */
 
-import type { Variant } from '../document/types.ts';
-import { defaultTolerance, sectionToDomain } from '../geometry/index.ts';
-import { sectionForSolver } from '../parts/index.ts';
+import type { PortDocument, Variant } from '../document/types.ts';
+import { caseSetup, CELLS_BY_DETAIL } from '../study/index.ts';
 import type { FlowDomain } from '../solver/types.ts';
 
+/** Target cells of the file's own grid detail: what the app solves it on. */
+export function fileCells(document: PortDocument): number {
+  return CELLS_BY_DETAIL[document.settings.gridDetail];
+}
+
 /** Throws GeometryError or PartsError (both the porter's to fix); anything else is a fault. */
-export function variantDomain(variant: Variant, units: string): FlowDomain {
-  // Regenerate the parts: a hand-edited file's stored geometry may no longer match its numbers.
-  const section = sectionForSolver(variant);
-  return sectionToDomain(section, defaultTolerance(section), units);
+export function variantDomain(variant: Variant, document: PortDocument): FlowDomain {
+  const doc = { ...document, variants: [variant], activeVariant: variant.name };
+  return caseSetup(doc, { targetCells: fileCells(document) }).domain;
 }

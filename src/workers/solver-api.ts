@@ -1,7 +1,6 @@
 /** The solver worker's API: a thin adapter from messages to the pure solver; it owns no physics. */
 import * as Comlink from 'comlink';
-import { readFlow } from '../solver/reading/index.ts';
-import { solveFlow } from '../solver/solve.ts';
+import { solveCase } from '../study/solve-case.ts';
 import type { FlowReading } from '../solver/reading/index.ts';
 import type { PotentialField, SolveResult } from '../solver/types.ts';
 import type { FailureReply, FieldReply, SolveReply, SolverWorkerApi } from './protocol.ts';
@@ -18,17 +17,15 @@ export function createSolverApi(): SolverWorkerApi {
       if (superseded()) return failure(request.id, 'superseded', 'A newer request replaced this one.');
       const started = performance.now();
       try {
-        const result = solveFlow(request.domain, {
+        const { result, reading } = solveCase(request.domain, {
           targetCells: request.targetCells,
           tolerance: request.tolerance,
           warmStart: request.warmStart && lastPotential ? lastPotential : undefined,
           shouldStop: superseded,
-          // The reading marches along the walls, so it always needs their speeds.
-          wallSpeeds: request.wallSpeeds !== false || Boolean(request.reading),
-        });
+          wallSpeeds: request.wallSpeeds,
+        }, request.reading ?? null);
         if (superseded()) return failure(request.id, 'superseded', 'A newer request replaced this one.');
         lastPotential = potentialOf(result);
-        const reading = request.reading ? readFlow(request.domain, result, request.reading) : null;
         return transferReply(toReply(request.id, result, reading, performance.now() - started));
       } catch (error) {
         return failureFrom(request.id, error);

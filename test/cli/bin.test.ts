@@ -2,16 +2,17 @@ import { readFileSync, symlinkSync, mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { loadDocument } from '../../src/document/load.ts';
-import { defaultTolerance, regionArea, sectionToDomain } from '../../src/geometry/index.ts';
+import { regionArea } from '../../src/geometry/index.ts';
+import { caseSetup, CELLS_BY_DETAIL } from '../../src/study/index.ts';
 import { BIN, REPO, STACK_LINE, runBin, tempDir } from './helpers.ts';
 
 const tmp = tempDir();
 afterAll(() => tmp.cleanup());
 
-/** The fluid area the geometry kernel gives for a sample's first variant, as the command prints it. */
+/** The fluid area of a sample's active variant as set up for its standard grid, as the command prints it. */
 function kernelArea(sample: string): string {
-  const section = loadDocument(readFileSync(join(REPO, sample), 'utf8')).variants[0].section;
-  return regionArea(sectionToDomain(section, defaultTolerance(section))).toFixed(1);
+  const doc = loadDocument(readFileSync(join(REPO, sample), 'utf8'));
+  return regionArea(caseSetup(doc, { targetCells: CELLS_BY_DETAIL.standard }).domain).toFixed(1);
 }
 
 describe('portwright check (the real bin, in a child process)', () => {

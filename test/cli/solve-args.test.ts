@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { UserError } from '../../src/cli/errors.ts';
-import { DEFAULT_CELLS, parseSolveArgs } from '../../src/cli/solve-args.ts';
+import { parseSolveArgs } from '../../src/cli/solve-args.ts';
 
 /** The UserError message parseSolveArgs throws for `args`. */
 function refusal(args: string[]): string {
@@ -14,11 +14,10 @@ function refusal(args: string[]): string {
 }
 
 describe('solve arguments', () => {
-  it('defaults: the active variant, the standard 250,000-cell grid, no probes, readable output', () => {
+  it("defaults: the active variant, the file's own grid detail (cells undefined), no probes, readable output", () => {
     expect(parseSolveArgs(['port.json'])).toEqual({
-      file: 'port.json', variant: undefined, cells: DEFAULT_CELLS, probes: [], json: false, tolerance: undefined,
+      file: 'port.json', variant: undefined, cells: undefined, probes: [], json: false, tolerance: undefined,
     });
-    expect(DEFAULT_CELLS).toBe(250_000);
   });
 
   it('reads every flag, in any order, as "--flag value" or "--flag=value"', () => {

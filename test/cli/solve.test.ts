@@ -159,7 +159,7 @@ describe('solve refuses what it cannot use, with exit 1 and a plain message', ()
     const { code, err, out } = await solve([join(REPO, 'samples/short-side-compare.json'), '--variant', 'ported']);
     expect(code).toBe(1);
     expect(out).toBe('');
-    expect(err).toBe(`portwright solve: ${join(REPO, 'samples/short-side-compare.json')} has no variant "ported"; its variants are: "tight short side", "generous short side"`);
+    expect(err).toBe(`portwright solve: ${join(REPO, 'samples/short-side-compare.json')}: There is no variant "ported"; the variants are: "tight short side", "generous short side".`);
   });
 
   it('--cells 10', async () => {
