@@ -2,7 +2,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { loadDocument } from '../../../src/document/load.ts';
-import { defaultTolerance, sectionToDomain } from '../../../src/geometry/index.ts';
+import { caseSetup } from '../../../src/study/index.ts';
 import { readFlow, readingSummary } from '../../../src/solver/reading/index.ts';
 import { solveFlow } from '../../../src/solver/solve.ts';
 import { MARK_INLET, MARK_OUTLET, MARK_WALL } from '../../../src/solver/types.ts';
@@ -49,10 +49,8 @@ describe('over-wide stations in a solved channel with a side pocket', () => {
 /** Solves and reads the active variant of a sample file. */
 function readSample(file: string) {
   const doc = loadDocument(readFileSync(new URL(`../../../samples/${file}`, import.meta.url), 'utf8'));
-  const variant = doc.variants.find((v) => v.name === doc.activeVariant) ?? doc.variants[0];
-  const domain = sectionToDomain(variant.section, defaultTolerance(variant.section), doc.units);
-  const units = doc.units === 'inch' ? 'inch' : 'mm';
-  return readFlow(domain, solveFlow(domain, { targetCells: 120_000 }), { units });
+  const { domain } = caseSetup(doc, { targetCells: 120_000 });
+  return readFlow(domain, solveFlow(domain, { targetCells: 120_000 }), { units: doc.units });
 }
 
 describe('street-port samples: tight against generous short side', () => {

@@ -1,0 +1,62 @@
+/** The app and `portwright solve --json` give the same numbers for the same file on the same grid (one case pipeline). */
+
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { run } from '../../src/cli/main.ts';
+import { captureIO, REPO } from '../cli/helpers.ts';
+import { CHECK_MS, openApp, startApp, type AppPage, type AppSession } from './app-session.ts';
+
+/** The app opens on this file (src/main.ts) at its own grid detail, the command's default grid too. */
+const SAMPLE = join(REPO, 'samples/short-side-compare.json');
+
+interface SolvedJson {
+  readonly conductance: number;
+  readonly slowShare: number;
+  readonly tightest: { readonly width: number } | null;
+  readonly findings: readonly string[];
+  readonly walls: readonly { readonly name: string; readonly peakSpeedRatio: number }[];
+}
+
+let session: AppSession;
+let app: AppPage;
+
+beforeAll(async () => {
+  session = await startApp();
+  app = await openApp(session);
+}, CHECK_MS);
+
+afterAll(async () => {
+  await session?.close();
+});
+
+async function commandJson(): Promise<SolvedJson> {
+  const io = captureIO();
+  expect(await run(['solve', SAMPLE, '--json'], io), io.stderr.join('\n')).toBe(0);
+  return JSON.parse(io.stdout.join('\n')) as SolvedJson;
+}
+
+const slug = (name: string) => name.toLowerCase().replace(/[^a-z0-9]+/g, '-');
+
+describe('app and command on the same file', () => {
+  it('show the same conductance, wall peaks, tightest section, slow share and findings', async () => {
+    const json = await commandJson();
+    const { page } = app;
+    const cell = (key: string) => page.locator(`[data-reading="${key}"]`).innerText();
+    const doc = JSON.parse(readFileSync(SAMPLE, 'utf8')) as { settings: { gridDetail: string } };
+    expect(doc.settings.gridDetail).toBe('standard');
+
+    const rows = await page.locator('#readings tr').allInnerTexts();
+    const conductanceRow = rows.find((r) => r.startsWith('conductance'));
+    expect(conductanceRow, rows.join('\n')).toContain(json.conductance.toFixed(4));
+    expect(await cell('tightest')).toBe(`${json.tightest!.width.toFixed(1)} mm wide`);
+    expect(await cell('slow-share')).toBe(`${(100 * json.slowShare).toFixed(1)}% of the section`);
+    for (const wall of ['short side', 'long side']) {
+      const inJson = json.walls.find((w) => w.name === wall)!;
+      expect(await cell(`${slug(wall)}-peak`), wall).toBe(inJson.peakSpeedRatio.toFixed(3));
+    }
+    const findings = await page.locator('#readings .findings button').allInnerTexts();
+    expect(findings).toEqual(json.findings);
+    expect(app.problems).toEqual([]);
+  }, CHECK_MS);
+});
