@@ -63,9 +63,10 @@ function placeFormat(units: SolveReport['units']): PlaceFormat {
 }
 
 function wallLines(wall: WallReport, nameWidth: number, f: PlaceFormat): string[] {
+  if (wall.peakSpeedRatio === undefined) return [`  ${wall.name.padEnd(nameWidth)}  no flow reaches this wall`];
   const head = `  ${wall.name.padEnd(nameWidth)}  ${ratio(wall.peakSpeedRatio).padStart(5)}`;
   if (wall.sides === undefined) return [`${head}  ${detachmentText(wall.detachment, f)}`];
-  return [head, ...wall.sides.map((side) => `    ${side.side}: peak ${ratio(side.peakSpeedRatio)}, ${detachmentText(side.detachment, f)}`)];
+  return [head, ...wall.sides.map((side) => `    ${side.side}: peak ${side.peakSpeedRatio === undefined ? 'none' : ratio(side.peakSpeedRatio)}, ${detachmentText(side.detachment, f)}`)];
 }
 
 function detachmentText(d: WallReport['detachment'], f: PlaceFormat): string {
@@ -81,7 +82,7 @@ function tightestText(report: SolveReport, f: PlaceFormat): string {
 
 function probeText(probe: ProbeReport): string {
   if (!probe.inFluid) return 'outside the fluid';
-  if (!Number.isFinite(probe.potential)) return 'no solved flow here (a pocket the flow does not reach)';
+  if (probe.potential === undefined || probe.speedRatio === undefined) return 'no solved flow here (a pocket the flow does not reach)';
   return `potential ${probe.potential.toFixed(4)}, speed ratio ${ratio(probe.speedRatio)}`;
 }
 
