@@ -115,7 +115,7 @@ describe('solve, readable summary', () => {
     expect(out).toMatch(/tightest section ahead of the valve: \d+\.\d mm wide/);
     expect(out).toMatch(/slow share: [\d.]+% of the section/);
     expect(out).toMatch(/\n {2}short side +\d\.\d\d {2}(stays on|leaves at)/);
-    expect(out).toMatch(/\n {4}left of the flow: peak \d\.\d\d/);
+    expect(out).toMatch(/\n {4}left of the flow: fastest \d\.\d\d/);
     expect(out).toMatch(/\(20\.0, 51\.0\) mm: potential 0\.\d{4}, speed ratio \d\.\d\d/);
     expect(out).toContain('(0.0, 0.0) mm: outside the fluid');
     expect(lines.at(-1)).toBe(IDEAL_FLOW_CAUTION);
