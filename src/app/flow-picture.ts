@@ -70,7 +70,8 @@ export class FlowPicture {
     const ratio = this.tightestMeanRatio;
     const scale = this.settings.reference === 'tightest station' && ratio ? 1 / ratio : 1;
     const values = scale === 1 ? reply.speedRatio : reply.speedRatio.map((v) => v * scale);
-    const field: FieldImage = { nx: reply.nx, ny: reply.ny, x0: reply.x0, y0: reply.y0, h: reply.h, values };
+    const clearPeak = reply.peak.speedRatio * scale;
+    const field: FieldImage = { nx: reply.nx, ny: reply.ny, x0: reply.x0, y0: reply.y0, h: reply.h, values, clearPeak };
     this.view.setField(field);
     if (reply.reading) {
       this.view.setStreamlines(reply.reading.streamlines.map((s) => ({ xy: thinPolyline(s.xy, 2 * reply.h), closed: false })));

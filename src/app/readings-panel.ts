@@ -17,11 +17,11 @@ export class ReadingsPanel {
     const rows: ReadingRow[] = [
       ['grid', `${reply.nx} × ${reply.ny} cells, ${reply.h.toFixed(units === 'mm' ? 2 : 4)} ${units}`],
       ['solve', `${reply.iterations} iterations, residual ${reply.residual.toExponential(1)}, ${refineMs.toFixed(0)} ms`],
-      ['peak speed ratio (clear of sharp corners)', `${reply.peak.speedRatio.toFixed(2)} at (${reply.peak.x.toFixed(digits)}, ${reply.peak.y.toFixed(digits)})`, 'peak'],
+      ['peak speed ratio (clear of sharp corners)', peakText(reply.peak, digits), 'peak'],
     ];
     // The port's walls are what a porter can change; the bench's bore and the valve are in the plots.
     for (const wall of reading?.walls ?? []) {
-      if (wall.inPort) rows.push([`${wall.name} peak`, `${wall.peak.speedRatio.toFixed(3)}`, `${slug(wall.name)}-peak`]);
+      if (wall.inPort) rows.push([`${wall.name}, fastest wall flow`, `${wall.peak.speedRatio.toFixed(3)}`, `${slug(wall.name)}-peak`]);
     }
     if (reading?.tightest) rows.push(['tightest section', `${reading.tightest.width.toFixed(digits)} ${units} wide`, 'tightest']);
     if (reading) rows.push(['slow share', `${(100 * reading.slow.share).toFixed(1)}% of the section`, 'slow-share']);
@@ -59,4 +59,14 @@ export class ReadingsPanel {
 
 function slug(name: string): string {
   return name.toLowerCase().replace(/[^a-z0-9]+/g, '-');
+}
+
+/**
+ * The solver's peak, kept clear of sharp convex corners and of cells cut by a wall: "3.54 at (x, y)". The colour
+ * bar's corner spike is a different number on purpose (the highest cell, at a corner); a section whose every
+ * whole cell lies beside a sharp corner has no such peak, said in words.
+ */
+function peakText(peak: FieldReply['peak'], digits: number): string {
+  if (!Number.isFinite(peak.speedRatio)) return 'none: every whole cell lies beside a sharp corner';
+  return `${peak.speedRatio.toFixed(2)} at (${peak.x.toFixed(digits)}, ${peak.y.toFixed(digits)})`;
 }

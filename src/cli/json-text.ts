@@ -1,8 +1,12 @@
-/** JSON for people and programs: numbers to six significant figures, NaN as null, short lists kept on one line. */
+/** JSON for people and programs: numbers to six significant figures, short lists kept on one line; never NaN. */
 
-/** Six significant figures: finer than any tracing, yet the same from run to run; NaN and infinities become null. */
-export function roundForJson(value: number): number | null {
-  if (!Number.isFinite(value)) return null;
+/**
+ * Six significant figures: finer than any tracing, yet the same from run to run. JSON has no NaN or infinity, and a
+ * quantity with no value is left out of the report rather than written as a number, so meeting one here is a fault
+ * in Portwright: it throws (exit code 2) instead of writing null into a number's place.
+ */
+export function roundForJson(value: number): number {
+  if (!Number.isFinite(value)) throw new TypeError(`solve --json: ${value} has no place in a report's numbers`);
   const rounded = Number(value.toPrecision(6));
   return rounded === 0 ? 0 : rounded; // no "-0"
 }

@@ -13,14 +13,15 @@ type Detachment = ReadingSummary['walls'][number]['detachment'];
 export interface WallSideReport {
   /** "left of the flow" or "right of the flow", looking downstream. */
   readonly side: string;
-  readonly peakSpeedRatio: number;
+  /** undefined when the side has no sample with a speed */
+  readonly peakSpeedRatio: number | undefined;
   readonly detachment: Detachment;
 }
 
 export interface WallReport {
   readonly name: string;
-  /** Highest speed ratio over the wall's samples (NaN when none is solved). */
-  readonly peakSpeedRatio: number;
+  /** Highest speed ratio over the wall's samples; undefined when no flow reaches the wall (no samples). */
+  readonly peakSpeedRatio: number | undefined;
   /** Cp recovered after the peak, for an open wall (undefined for a closed island wall, see sides). */
   readonly pressureRecovered: number | undefined;
   /** Where the boundary layer likely leaves the wall (s from the wall's upstream end); for an island, the earlier side. */
@@ -36,9 +37,9 @@ export interface ProbeReport {
   readonly y: number;
   /** False when the point lies in solid metal or outside the section. */
   readonly inFluid: boolean;
-  /** NaN outside the fluid (null in JSON). */
-  readonly potential: number;
-  readonly speedRatio: number;
+  /** Undefined (left out of JSON) outside the fluid and in a pocket the flow does not reach. */
+  readonly potential: number | undefined;
+  readonly speedRatio: number | undefined;
 }
 
 /** Everything solve prints; lengths in the document's units, speeds as ratios to the mean inlet speed. */
@@ -111,8 +112,10 @@ export function buildSolveReport(solved: SolvedVariant, probes: readonly (readon
 }
 
 function probeReport(domain: FlowDomain, result: SolveResult, x: number, y: number): ProbeReport {
-  if (!pointInRegion(domain, x, y)) return { x, y, inFluid: false, potential: NaN, speedRatio: NaN };
-  return { x, y, inFluid: true, ...probeFlow(result, x, y) };
+  if (!pointInRegion(domain, x, y)) return { x, y, inFluid: false, potential: undefined, speedRatio: undefined };
+  const read = probeFlow(result, x, y);
+  const solved = Number.isFinite(read.potential) && Number.isFinite(read.speedRatio);
+  return { x, y, inFluid: true, potential: solved ? read.potential : undefined, speedRatio: solved ? read.speedRatio : undefined };
 }
 
 /**
@@ -122,10 +125,10 @@ function probeReport(domain: FlowDomain, result: SolveResult, x: number, y: numb
  */
 function wallReport(wall: WallSpeeds, summary: ReadingSummary): WallReport {
   const samples: number[][] = [];
-  let peak = NaN;
+  let peak: number | undefined;
   for (let k = 0; k < wall.samples.length; k += 4) {
     samples.push([wall.samples[k], wall.samples[k + 1], wall.samples[k + 2], wall.samples[k + 3]]);
-    if (Number.isFinite(wall.samples[k + 3]) && !(wall.samples[k + 3] <= peak)) peak = wall.samples[k + 3];
+    if (peak === undefined || wall.samples[k + 3] > peak) peak = wall.samples[k + 3];
   }
   const open = summary.walls.find((w) => w.name === wall.name);
   if (open !== undefined) {

@@ -26,11 +26,11 @@ export function solveReportLines(report: SolveReport): string[] {
       (report.converged ? '' : ' (stopped at the iteration cap before reaching the tolerance)'),
     `  conductance: ${sig(report.conductance, 4)} per unit depth (flux per unit potential drop)`,
     `  flux imbalance: ${report.fluxImbalance.toExponential(1)} (worst station against the total)`,
-    `  peak speed ratio: ${ratio(report.peak.speedRatio)} at ${f.at(report.peak.x, report.peak.y)} (kept clear of sharp corners)`,
+    `  peak speed ratio: ${peakText(report.peak, f)}`,
     `  tightest section ahead of the valve: ${tightestText(report, f)}`,
     `  slow share: ${percent(report.slowShare)} of the section, ${percent(report.portSlowShare)} of the port`,
     '',
-    'walls (peak speed ratio; where the flow likely leaves the wall, measured from its upstream end):',
+    'walls (fastest wall flow, as a speed ratio; where the flow likely leaves the wall, measured from its upstream end):',
   ];
   const nameWidth = Math.max(...report.walls.map((w) => w.name.length));
   for (const wall of report.walls) lines.push(...wallLines(wall, nameWidth, f));
@@ -63,14 +63,21 @@ function placeFormat(units: SolveReport['units']): PlaceFormat {
 }
 
 function wallLines(wall: WallReport, nameWidth: number, f: PlaceFormat): string[] {
+  if (wall.peakSpeedRatio === undefined) return [`  ${wall.name.padEnd(nameWidth)}  no flow reaches this wall`];
   const head = `  ${wall.name.padEnd(nameWidth)}  ${ratio(wall.peakSpeedRatio).padStart(5)}`;
   if (wall.sides === undefined) return [`${head}  ${detachmentText(wall.detachment, f)}`];
-  return [head, ...wall.sides.map((side) => `    ${side.side}: peak ${ratio(side.peakSpeedRatio)}, ${detachmentText(side.detachment, f)}`)];
+  return [head, ...wall.sides.map((side) => `    ${side.side}: fastest ${side.peakSpeedRatio === undefined ? 'none' : ratio(side.peakSpeedRatio)}, ${detachmentText(side.detachment, f)}`)];
 }
 
 function detachmentText(d: WallReport['detachment'], f: PlaceFormat): string {
   if (d === null) return 'stays on';
   return `leaves at ${f.at(d.x, d.y)}, ${f.dist(d.s)} along (${METHOD_WORDS[d.method]})`;
+}
+
+/** The solver's peak, clear of sharp corners (a sharp corner's own spike is not a port's peak). */
+function peakText(peak: SolveReport['peak'], f: PlaceFormat): string {
+  if (!Number.isFinite(peak.speedRatio)) return 'none clear of sharp corners (every whole cell lies beside one)';
+  return `${ratio(peak.speedRatio)} at ${f.at(peak.x, peak.y)} (clear of sharp corners)`;
 }
 
 function tightestText(report: SolveReport, f: PlaceFormat): string {
@@ -81,7 +88,7 @@ function tightestText(report: SolveReport, f: PlaceFormat): string {
 
 function probeText(probe: ProbeReport): string {
   if (!probe.inFluid) return 'outside the fluid';
-  if (!Number.isFinite(probe.potential)) return 'no solved flow here (a pocket the flow does not reach)';
+  if (probe.potential === undefined || probe.speedRatio === undefined) return 'no solved flow here (a pocket the flow does not reach)';
   return `potential ${probe.potential.toFixed(4)}, speed ratio ${ratio(probe.speedRatio)}`;
 }
 

@@ -1,5 +1,6 @@
 /** Speed ratio along each named wall, reconstructed at the wall from the cell potentials, for the boundary-layer march. */
 import { fluidSense } from './rasterise/checks.ts';
+import { solveLeadingBlock } from './leading-block.ts';
 import { MARK_WALL } from './types.ts';
 import type { CutGrid, FlowDomain, Ring, WallSpeeds } from './types.ts';
 
@@ -25,7 +26,9 @@ interface WallRun {
  * used by two separate runs gets " (2)", " (3)" added.
  * Samples every `spacing` length units (default the cell size), ends included: x, y, s, speed / speedScale.
  * `phi` is the cell potential (row-major i + j * nx, NaN where not solved); `speedScale` is the mean inlet
- * speed in potential units per length unit. Where no solved cell lies next to the wall the ratio is NaN.
+ * speed in potential units per length unit. A point with no solved cell near it (the tip of a sliver of fluid
+ * narrower than a cell, a pocket the flow does not reach) has no speed and is left out, so s may jump over it;
+ * a wall with no such cell anywhere has no samples.
  *
  * Reconstruction: the tangential derivative at the wall point comes from a weighted least-squares fit,
  * over the solved cells within 2.5 cells joined to the wall point through open faces (so fluid behind a
@@ -101,6 +104,16 @@ function sampleRun(run: WallRun, fitter: WallFitter, speedScale: number, spacing
     out[4 * q + 3] = Math.abs(fitter.tangentialDerivative(x, y, tx, ty, -ty * run.sense, tx * run.sense)) / speedScale;
   }
   smoothAlong(out, count + 1, run.closed);
+  return withSpeed(out);
+}
+
+/** The samples (stride 4) whose speed ratio is a number; the array itself when all are. */
+function withSpeed(samples: Float64Array): Float64Array {
+  const keep: number[] = [];
+  for (let q = 0; q < samples.length / 4; q++) if (Number.isFinite(samples[4 * q + 3])) keep.push(q);
+  if (4 * keep.length === samples.length) return samples;
+  const out = new Float64Array(4 * keep.length);
+  keep.forEach((q, k) => out.set(samples.subarray(4 * q, 4 * q + 4), 4 * k));
   return out;
 }
 
@@ -154,26 +167,42 @@ class WallFitter {
     });
     const unknowns = used >= 6 ? 4 : used >= 2 ? 2 : 0;
     if (unknowns === 0) return NaN;
-    const coef = solveSymmetric(this.normal, this.rhs, unknowns);
+    const coef = solveLeadingBlock(this.normal, this.rhs, unknowns);
     return coef === null ? NaN : coef[1] / h;
   }
 
   /**
-   * The solved cell holding the fluid next to (x, y): a step into the fluid, growing until one is found,
-   * also slanted along the wall both ways for points at a corner; -1 if none.
+   * The solved cell holding the fluid next to (x, y): a step into the fluid, growing until one is found, also
+   * slanted along the wall both ways for points at a corner; failing that, a slide along the wall (the tip of a
+   * sliver of fluid narrower than a cell, where the inward step lands past the far side). Only cells whose centre
+   * lies inside the fit radius count; -1 if none.
    */
   private startCell(x: number, y: number, tx: number, ty: number, nx: number, ny: number): number {
-    const { grid } = this;
     for (const step of [1e-6, 0.5, 1]) {
       for (const slant of [0, 1, -1]) {
-        const i = Math.floor((x + step * grid.h * (nx + slant * tx) - grid.x0) / grid.h);
-        const j = Math.floor((y + step * grid.h * (ny + slant * ty) - grid.y0) / grid.h);
-        if (i < 0 || j < 0 || i >= grid.nx || j >= grid.ny) continue;
-        const c = i + j * grid.nx;
-        if (grid.cellFraction[c] > 0 && Number.isFinite(this.phi[c])) return c;
+        const c = this.solvedCellAt(x, y, step * (nx + slant * tx), step * (ny + slant * ty));
+        if (c >= 0) return c;
+      }
+    }
+    for (const along of [0.5, -0.5, 1, -1, 1.5, -1.5, 2, -2]) {
+      for (const inward of [1e-6, 0.25]) {
+        const c = this.solvedCellAt(x, y, along * tx + inward * nx, along * ty + inward * ny);
+        if (c >= 0) return c;
       }
     }
     return -1;
+  }
+
+  /** The solved cell holding (x, y) + h (dx, dy), if its centre lies within the fit radius of (x, y); else -1. */
+  private solvedCellAt(x: number, y: number, dx: number, dy: number): number {
+    const { grid } = this;
+    const i = Math.floor((x + dx * grid.h - grid.x0) / grid.h);
+    const j = Math.floor((y + dy * grid.h - grid.y0) / grid.h);
+    if (i < 0 || j < 0 || i >= grid.nx || j >= grid.ny) return -1;
+    const c = i + j * grid.nx;
+    if (!(grid.cellFraction[c] > 0) || !Number.isFinite(this.phi[c])) return -1;
+    const r = Math.hypot(grid.x0 + (i + 0.5) * grid.h - x, grid.y0 + (j + 0.5) * grid.h - y);
+    return r < FIT_RADIUS * grid.h ? c : -1;
   }
 
   /** Breadth-first walk over open faces from `start`, within the window; `take` says whether a cell joins (and is walked on from). */
@@ -212,30 +241,4 @@ class WallFitter {
       for (let b = 0; b < 4; b++) this.normal[4 * a + b] += weight * basis[a] * basis[b];
     }
   }
-}
-
-/** Solves the leading `n` x `n` block of a 4 x 4 system by Gaussian elimination with partial pivoting; null if singular. */
-function solveSymmetric(matrix: Float64Array, rhs: Float64Array, n: number): Float64Array | null {
-  const a = Float64Array.from(matrix);
-  const b = Float64Array.from(rhs);
-  let scale = 0;
-  for (let r = 0; r < n; r++) scale = Math.max(scale, Math.abs(a[5 * r]));
-  for (let col = 0; col < n; col++) {
-    let pivot = col;
-    for (let r = col + 1; r < n; r++) if (Math.abs(a[4 * r + col]) > Math.abs(a[4 * pivot + col])) pivot = r;
-    if (!(Math.abs(a[4 * pivot + col]) > 1e-12 * scale)) return null;
-    for (let k = 0; k < 4; k++) [a[4 * col + k], a[4 * pivot + k]] = [a[4 * pivot + k], a[4 * col + k]];
-    [b[col], b[pivot]] = [b[pivot], b[col]];
-    for (let r = col + 1; r < n; r++) {
-      const f = a[4 * r + col] / a[4 * col + col];
-      for (let k = col; k < n; k++) a[4 * r + k] -= f * a[4 * col + k];
-      b[r] -= f * b[col];
-    }
-  }
-  for (let r = n - 1; r >= 0; r--) {
-    let sum = b[r];
-    for (let k = r + 1; k < n; k++) sum -= a[4 * r + k] * b[k];
-    b[r] = sum / a[4 * r + r];
-  }
-  return b;
 }

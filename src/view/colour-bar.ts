@@ -7,6 +7,24 @@ import type { ValueRange } from './types.ts';
 import { COLOUR_BAR, LABEL_FONT, LABEL_TEXT, SMALL_FONT } from './view-style.ts';
 
 const COLOUR_BAR_TITLE = 'speed ratio';
+/**
+ * The field's highest cell counts as a corner spike when it lies this far above the peak clear of sharp corners:
+ * 2%, above the cell-to-cell scatter of a smooth peak, far below the spike at a sharp convex corner (which grows
+ * without bound as the grid is refined).
+ */
+const SPIKE_MARGIN = 1.02;
+
+/**
+ * The lines under the bar for the top of the field, or none. Only a spike is told: the highest cell (`highest`)
+ * above both the colour scale and the peak clear of sharp corners (`clearPeak`, the readings' peak speed ratio), so
+ * the bar never shows a second number called a peak. Example: range 0..3.2, highest 7.66, clearPeak 3.54 ->
+ * ['▲ corner spike', '7.66']; highest 3.55 -> [].
+ */
+export function spikeLines(range: ValueRange, highest: number, clearPeak: number): string[] {
+  const aboveScale = Number.isFinite(highest) && highest > range.max * (1 + 1e-6);
+  const spike = Number.isFinite(clearPeak) && highest > clearPeak * SPIKE_MARGIN;
+  return aboveScale && spike ? ['\u25B2 corner spike', formatLevel(highest)] : [];
+}
 
 /** Height of the colour bar panel in a container `containerHeight` CSS px tall. */
 function colourBarHeight(containerHeight: number): number {
@@ -39,15 +57,16 @@ export class ColourBar {
   }
 
   /**
-   * Redraw for a range. `peak` is the field's highest value: when it lies above the range (auto range leaves out
-   * the top 0.5 %, e.g. a sharp corner), the panel says so, because those cells show the top colour.
+   * Redraw for a range. `highest` is the field's highest value, `clearPeak` the peak clear of sharp corners: a
+   * corner spike above the range (auto range leaves out the top 0.5 %) is named under the bar, because those cells
+   * show the top colour (see spikeLines).
    */
-  draw(range: ValueRange, peak: number, containerHeight: number, pixelRatio: number): void {
-    const clipped = Number.isFinite(peak) && peak > range.max * (1 + 1e-6);
-    const peakText = clipped ? `\u25B2 max ${formatLevel(peak)}` : '';
+  draw(range: ValueRange, highest: number, clearPeak: number, containerHeight: number, pixelRatio: number): void {
+    const spike = spikeLines(range, highest, clearPeak);
+    const clipped = spike.length > 0;
     // Each drag step brings a new field, often with the same range (always so with a fixed one): redraw only when
     // the panel would change.
-    const key = `${range.min} ${range.max} ${peakText} ${containerHeight} ${pixelRatio}`;
+    const key = `${range.min} ${range.max} ${spike.join(' ')} ${containerHeight} ${pixelRatio}`;
     if (key === this.drawn) return;
     this.drawn = key;
     const width = COLOUR_BAR.width;
@@ -65,13 +84,14 @@ export class ColourBar {
     haloText(ctx, COLOUR_BAR_TITLE, 8, 14, LABEL_TEXT, LABEL_FONT);
 
     const top = 32;
-    const bottom = height - (clipped ? 30 : 14);
+    const bottom = height - (clipped ? 44 : 14);
     const x = 10;
     this.drawGradient(x, top, bottom);
     this.drawTicks(range, x + COLOUR_BAR.barWidth, top, bottom);
     if (clipped) {
       ctx.textAlign = 'left';
-      haloText(ctx, peakText, 8, height - 12, LABEL_TEXT, SMALL_FONT);
+      haloText(ctx, spike[0], 8, height - 26, LABEL_TEXT, SMALL_FONT);
+      haloText(ctx, spike[1], 20, height - 12, LABEL_TEXT, SMALL_FONT);
     }
   }
 

@@ -250,7 +250,7 @@ export class FlowView {
   private applyRange(): void {
     this.content.updateRange();
     this.scene.setRange(this.content.range);
-    this.colourBar.draw(this.content.range, this.content.peak, this.nav.state.height, this.pixelRatio);
+    this.colourBar.draw(this.content.range, this.content.highest, this.content.clearPeak, this.nav.state.height, this.pixelRatio);
   }
 
   /** Mid-drag the view does not refit: the point dragged would run away from the pointer. */
@@ -265,7 +265,7 @@ export class FlowView {
     this.pixelRatio = window.devicePixelRatio || 1;
     this.scene.setSize(w, h, this.pixelRatio);
     this.overlay.setSize(w, h, this.pixelRatio);
-    this.colourBar.draw(this.content.range, this.content.peak, h, this.pixelRatio);
+    this.colourBar.draw(this.content.range, this.content.highest, this.content.clearPeak, h, this.pixelRatio);
     this.nav.resize(w, h, this.content.contentBounds());
   }
 }

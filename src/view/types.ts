@@ -17,6 +17,11 @@ export interface FieldImage {
   readonly h: number;
   /** Speed ratio per cell (dimensionless), row-major i + j * nx; NaN outside the fluid. */
   readonly values: Float32Array;
+  /**
+   * The peak speed ratio clear of sharp corners (the readings' peak), in the units of `values`; the colour bar names
+   * a higher cell a corner spike. Left out: the bar names none.
+   */
+  readonly clearPeak?: number;
 }
 
 /** A polyline in section units. */

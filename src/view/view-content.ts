@@ -39,7 +39,9 @@ export class ViewContent {
   /** Derived from field and colourRange by updateRange(). */
   range: ValueRange = { min: 0, max: 1 };
   /** Highest finite field value, NaN without a field. */
-  peak = NaN;
+  highest = NaN;
+  /** The field's peak clear of sharp corners (FieldImage.clearPeak), NaN when not given. */
+  clearPeak = NaN;
 
   /** Recompute contour lines and their label places (after the field, clip or levels change). */
   updateContours(): void {
@@ -62,7 +64,8 @@ export class ViewContent {
   updateRange(): void {
     const values = this.field ? this.field.values : null;
     this.range = resolveColourRange(this.colourRange, values);
-    this.peak = values ? finiteMax(values) : NaN;
+    this.highest = values ? finiteMax(values) : NaN;
+    this.clearPeak = this.field?.clearPeak ?? NaN;
   }
 
   /** Extent of the walls, or null when there are none. */

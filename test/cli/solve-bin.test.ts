@@ -22,7 +22,7 @@ describe('portwright solve (the real bin, in a child process)', () => {
   it('prints the readable summary by default, the caution last', () => {
     const ran = runBin(['solve', 'samples/street-tight-short-side.json', '--cells', '30000']);
     expect(ran.code).toBe(0);
-    expect(ran.stdout).toContain('walls (peak speed ratio;');
+    expect(ran.stdout).toContain('walls (fastest wall flow, as a speed ratio;');
     expect(ran.stdout.trimEnd().split('\n').at(-1)).toMatch(/^Caution: ideal 2D flow.*confirm on a flow bench/);
   });
 

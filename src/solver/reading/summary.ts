@@ -11,8 +11,9 @@ export interface ReadingSummary {
   readonly portSlowShare: number;
   readonly walls: {
     name: string;
-    peakSpeedRatio: number;
-    pressureRecovered: number;
+    /** undefined when the wall has no reading (no sample with a speed) */
+    peakSpeedRatio: number | undefined;
+    pressureRecovered: number | undefined;
     detachment: { s: number; x: number; y: number; method: DetachmentMethod; shapeFactor: number } | null;
   }[];
   readonly findings: string[];
@@ -33,8 +34,8 @@ export function readingSummary(reading: FlowReading): ReadingSummary {
       const at = d.detachment;
       return {
         name: d.name,
-        peakSpeedRatio: round(wall ? wall.peak.speedRatio : NaN),
-        pressureRecovered: round(wall ? wall.pressureRecovered : NaN),
+        peakSpeedRatio: wall ? round(wall.peak.speedRatio) : undefined,
+        pressureRecovered: wall ? round(wall.pressureRecovered) : undefined,
         detachment: at ? { s: round(at.s), x: round(at.x), y: round(at.y), method: at.method, shapeFactor: round(at.shapeFactor) } : null,
       };
     }),
@@ -42,7 +43,7 @@ export function readingSummary(reading: FlowReading): ReadingSummary {
   };
 }
 
-/** Six significant figures; a missing number stays NaN (JSON.stringify writes it as null). */
+/** Six significant figures; NaN would be a fault upstream and passes through for the writer to refuse. */
 function round(value: number): number {
   return Number.isFinite(value) ? Number(value.toPrecision(6)) : NaN;
 }
