@@ -1,6 +1,6 @@
 #!/usr/bin/env node
 // Builds the headless command into one ES module (dist-cli/portwright.js) with esbuild, and says whether that build is current.
-import { mkdirSync, readFileSync, realpathSync, renameSync, statSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, realpathSync, renameSync, statSync, writeFileSync } from 'node:fs';
 import { dirname, join, relative } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
@@ -14,21 +14,25 @@ export const LAYOUT = { repo: REPO, outDir: join(REPO, 'dist-cli') };
 /** The bundled command of a layout. */
 export const bundlePath = (layout = LAYOUT) => join(layout.outDir, 'portwright.js');
 const stampPath = (layout) => join(layout.outDir, 'build.json');
+/** The command's entry, relative to the layout's repo. */
+const ENTRY = join('src', 'cli', 'main.ts');
 /** Beside the sources, what else the bundle depends on: this file (how it is built) and the lock file (zod's version). */
 const BUILD_INPUTS = [relative(REPO, fileURLToPath(import.meta.url)), 'package-lock.json'];
 /** A source changed this little before a build started counts as changed after it: file times are coarse. */
 const CLOCK_MARGIN_MS = 100;
 
 /**
- * Why the bundle cannot be used as it is: 'missing' (never built, or built by an older layout), 'stale' (a source it
+ * Why the bundle cannot be used as it is: 'missing' (never built), 'stale' (a source it
  * was built from changed since the build started), or null when it is current. A source that no longer exists is not
- * counted: the module that imported it changed too. Costs one stat per source file (about 150).
+ * counted: the module that imported it changed too. Costs one stat per source file (about 140).
  */
 export function bundleState(layout = LAYOUT) {
+  if (!existsSync(bundlePath(layout)) || !existsSync(stampPath(layout))) return 'missing';
+  // Installed from a packed copy (package.json "files"), the sources are not there: the shipped bundle is the command.
+  if (!existsSync(join(layout.repo, ENTRY))) return null;
   let stamp;
   try {
     stamp = JSON.parse(readFileSync(stampPath(layout), 'utf8'));
-    statSync(bundlePath(layout));
   } catch {
     return 'missing';
   }
@@ -54,7 +58,7 @@ export async function buildBundle(layout = LAYOUT) {
   const esbuild = await import('esbuild');
   const result = await esbuild.build({
     absWorkingDir: layout.repo,
-    entryPoints: [join(layout.repo, 'src', 'cli', 'main.ts')],
+    entryPoints: [join(layout.repo, ENTRY)],
     bundle: true,
     platform: 'node',
     format: 'esm',

@@ -11,14 +11,20 @@ afterAll(() => tmp.cleanup());
 /** File times in seconds since 1970, as utimesSync takes them. */
 const BUILD_STARTED_S = 2_000_000_000;
 
-/** A layout whose one source, a.ts, was last changed at `sourceChangedS`, with a bundle built at BUILD_STARTED_S. */
+/**
+ * A layout with a bundle built at BUILD_STARTED_S from the entry src/cli/main.ts (an hour older) and a.ts, last changed
+ * at `sourceChangedS`.
+ */
 function fakeLayout(name: string, sourceChangedS: number): BuildLayout {
   const layout = { repo: join(tmp.dir, name), outDir: join(tmp.dir, name, 'out') };
   mkdirSync(layout.outDir, { recursive: true });
+  mkdirSync(join(layout.repo, 'src', 'cli'), { recursive: true });
+  writeFileSync(join(layout.repo, 'src', 'cli', 'main.ts'), "export * from '../../a.ts';\n");
+  utimesSync(join(layout.repo, 'src', 'cli', 'main.ts'), BUILD_STARTED_S - 3600, BUILD_STARTED_S - 3600);
   writeFileSync(join(layout.repo, 'a.ts'), 'export const a = 1;\n');
   utimesSync(join(layout.repo, 'a.ts'), sourceChangedS, sourceChangedS);
   writeFileSync(join(layout.outDir, 'portwright.js'), 'export const run = () => 0;\n');
-  const stamp = { startedMs: BUILD_STARTED_S * 1000, inputs: ['a.ts', 'gone.ts'] };
+  const stamp = { startedMs: BUILD_STARTED_S * 1000, inputs: ['src/cli/main.ts', 'a.ts', 'gone.ts'] };
   writeFileSync(join(layout.outDir, 'build.json'), JSON.stringify(stamp));
   return layout;
 }
@@ -34,6 +40,12 @@ describe('bundleState: is the built command current?', () => {
 
   it('is stale when a source changed just before the build started (coarse file times)', () => {
     expect(bundleState(fakeLayout('same-time', BUILD_STARTED_S - 0.05))).toBe('stale');
+  });
+
+  it('is current in a packed copy, which ships the bundle without its sources', () => {
+    const packed = fakeLayout('packed', BUILD_STARTED_S + 1);
+    rmSync(join(packed.repo, 'src'), { recursive: true });
+    expect(bundleState(packed)).toBeNull();
   });
 
   it('is missing without a build record or without the bundle', () => {
