@@ -15,6 +15,8 @@ export default defineConfig({
   test: {
     include: ['test/**/*.test.ts'],
     setupFiles: ['test/setup-fast-check.ts'],
+    // The bin tests run the compiled command (dist-cli/); it is rebuilt here, once, if a source changed.
+    globalSetup: ['test/global-setup.ts'],
     testTimeout: 60_000,
     hookTimeout: 120_000,
   },
