@@ -2,6 +2,7 @@
 import { assemble, writeRhs, type Stencil } from './assemble.ts';
 import { connectedCells } from './connectivity.ts';
 import { buildMultigrid } from './multigrid/multigrid.ts';
+import { fullMultigridStart } from './multigrid/full-multigrid.ts';
 import { pcg } from './pcg/pcg.ts';
 import { paddedVector, residual } from './pcg/operator.ts';
 import { rasterise } from './rasterise/rasterise.ts';
@@ -82,11 +83,14 @@ export function solveOnGrid(grid: CutGrid, options: GridSolveOptions): GridSolut
   const mask = options.mask ?? connectedCells(grid);
   const stencil = assemble(grid, mask);
   const phi = new Float64Array(nx * ny);
-  if (options.warmStart) warmStartGuess(options.warmStart, grid, mask, phi);
   const r = new Float64Array(nx * ny);
   const bNorm = writeRhs(grid, mask, r);
   const work = { p: paddedVector(nx, ny), z: paddedVector(nx, ny) };
-  const report = pcg(stencil, buildMultigrid(stencil), phi, r, bNorm, work, {
+  const mg = buildMultigrid(stencil);
+  // From an earlier field when given (the refine-after-drag path), else from the coarse levels' own solution.
+  if (options.warmStart) warmStartGuess(options.warmStart, grid, mask, phi);
+  else fullMultigridStart(mg, r, phi, work.z);
+  const report = pcg(stencil, mg, phi, r, bNorm, work, {
     tolerance: options.tolerance ?? DEFAULT_TOLERANCE,
     maxIterations: options.maxIterations ?? DEFAULT_MAX_ITERATIONS,
     shouldStop: options.shouldStop,
