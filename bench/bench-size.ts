@@ -8,19 +8,20 @@ import { pcg } from '../src/solver/pcg/pcg.ts';
 import { paddedVector } from '../src/solver/pcg/operator.ts';
 import { rasterise } from '../src/solver/rasterise/rasterise.ts';
 import { markedLength } from '../src/solver/rasterise/checks.ts';
-import { solveFlow, solveOnGrid } from '../src/solver/solve.ts';
+import { fieldsFromPotential, solveFlow } from '../src/solver/solve.ts';
 import { MARK_INLET, type CutGrid, type SolveResult } from '../src/solver/types.ts';
+import { sharpConvexCorners } from '../src/solver/velocity-peak.ts';
 import { wallSpeeds } from '../src/solver/wall-speeds.ts';
 import { benchDomain } from './bench-problem.ts';
-import { sor, sorFactor } from './sor.ts';
+import { sor, sorFactor, sorPlan } from './sor.ts';
 
 export interface SizeArgs {
   readonly cells: number;
   readonly runs: number;
   /** 'time': timings and SOR; 'memory': one solve after a full collection, for its peak memory alone. */
   readonly mode: 'time' | 'memory';
-  /** 'scan' the SOR factor, use a given span count, or 'skip' SOR. */
-  readonly sor: 'scan' | 'skip' | number;
+  /** Run the SOR baseline or skip it. */
+  readonly sor: boolean;
 }
 
 export interface SizeReport {
@@ -37,10 +38,19 @@ export interface SizeReport {
   readonly baselineRssMb: number;
   /** Typed-array memory the result holds (grid, potential, speed ratio, wall samples), MB. */
   readonly arrayBuffersMb: number;
-  readonly phases: { rasterise: number; connect: number; solve: number; setup: number; pcg: number; walls: number };
+  /** Median ms of each phase of solveFlow, run one after another as solveFlow does. */
+  readonly phases: Phases;
   /** Median ms of the linear solve alone (multigrid set-up + PCG from zero), the part SOR replaces. */
   readonly linearMs: number;
-  readonly sor: { omega: number; spans: number; sweeps: number; residual: number; converged: boolean; ms: number } | null;
+  readonly sor: { omega: number; rhoJ: number; factorIterations: number; sweeps: number; residual: number; converged: boolean; ms: number } | null;
+}
+
+/**
+ * rasterise, connect (connectedCells), assemble, setup (multigrid hierarchy), pcg (start and MG-PCG iterations),
+ * fields (true residual, fluxes, station check, speed ratio, peak), walls (wall speeds).
+ */
+export interface Phases {
+  rasterise: number; connect: number; assemble: number; setup: number; pcg: number; fields: number; walls: number;
 }
 
 const TOLERANCE = 1e-8;
@@ -77,9 +87,9 @@ function measureTime(args: SizeArgs): TimeReport {
   if (last === null) throw new Error('no benchmark runs');
   const { grid, iterations, residual } = last;
   last = null;
-  const phases = timePhases(args.cells);
+  const phases = timePhases(args.cells, args.runs);
   const { stencil, b, bNorm, linearMs } = timeLinear(grid, args.runs);
-  const sorReport = args.sor === 'skip' ? null : runSor(stencil, b, bNorm, grid, args.sor);
+  const sorReport = args.sor ? runSor(stencil, b, bNorm, grid) : null;
   return {
     cells: args.cells, nx: grid.nx, ny: grid.ny, iterations, residual, medianMs: median(wall), medianCpuMs: median(cpu),
     phases, linearMs, sor: sorReport,
@@ -100,32 +110,48 @@ function measureMemory(cells: number): MemoryReport {
   return { peakRssMb, baselineRssMb, arrayBuffersMb: bytes / MB };
 }
 
-/** One solve split into its phases, ms. */
-function timePhases(cells: number): SizeReport['phases'] {
+/** solveFlow split into its phases: the median ms of each over `runs` solves. */
+function timePhases(cells: number, runs: number): Phases {
   const domain = benchDomain();
-  let t = performance.now();
-  const lap = () => {
-    const now = performance.now();
-    const ms = now - t;
-    t = now;
-    return ms;
-  };
-  const grid = rasterise(domain, cells);
-  const rasteriseMs = lap();
-  const mask = connectedCells(grid);
-  const connect = lap();
-  const solution = solveOnGrid(grid, { inletLength: markedLength(domain, MARK_INLET), mask });
-  const solve = lap();
-  wallSpeeds(domain, grid, solution.phi, solution.inletMeanSpeed);
-  const walls = lap();
-  const { setupMs, pcgMs } = timeLinearOnce(grid, mask);
-  return { rasterise: rasteriseMs, connect, solve, setup: setupMs, pcg: pcgMs, walls };
+  const laps: Phases[] = [];
+  for (let run = 0; run < runs; run++) {
+    let t = performance.now();
+    const lap = () => {
+      const now = performance.now();
+      const ms = now - t;
+      t = now;
+      return ms;
+    };
+    const grid = rasterise(domain, cells);
+    const rasteriseMs = lap();
+    const mask = connectedCells(grid);
+    const connect = lap();
+    const stencil = assemble(grid, mask);
+    const assembleMs = lap();
+    const mg = buildMultigrid(stencil);
+    const setup = lap();
+    const { nx, ny } = grid;
+    const phi = new Float64Array(nx * ny);
+    const r = new Float64Array(nx * ny);
+    const bNorm = writeRhs(grid, mask, r);
+    const work = { p: paddedVector(nx, ny), z: paddedVector(nx, ny) };
+    pcg(stencil, mg, phi, r, bNorm, work, { tolerance: TOLERANCE, maxIterations: 200 });
+    const pcgMs = lap();
+    const options = { inletLength: markedLength(domain, MARK_INLET), corners: sharpConvexCorners(domain) };
+    const fields = fieldsFromPotential(stencil, grid, phi, r, work.p, bNorm, options);
+    const fieldsMs = lap();
+    wallSpeeds(domain, grid, fields.phi, fields.inletMeanSpeed);
+    const walls = lap();
+    laps.push({ rasterise: rasteriseMs, connect, assemble: assembleMs, setup, pcg: pcgMs, fields: fieldsMs, walls });
+  }
+  const keys = Object.keys(laps[0]) as (keyof Phases)[];
+  return Object.fromEntries(keys.map((key) => [key, median(laps.map((l) => l[key]))])) as unknown as Phases;
 }
 
 function timeLinearOnce(grid: CutGrid, mask: Uint8Array): { setupMs: number; pcgMs: number; stencil: Stencil; b: Float64Array; bNorm: number } {
   const { nx, ny } = grid;
-  const t0 = performance.now();
   const stencil = assemble(grid, mask);
+  const t0 = performance.now();
   const mg = buildMultigrid(stencil);
   const t1 = performance.now();
   const x = new Float64Array(nx * ny);
@@ -149,23 +175,12 @@ function timeLinear(grid: CutGrid, runs: number): { stencil: Stencil; b: Float64
   return { stencil: last.stencil, b: last.b, bNorm: last.bNorm, linearMs: median(times) };
 }
 
-/** SOR with the best of three factor spans (scan: one grid-crossing of sweeps each), or a given span. */
-function runSor(stencil: Stencil, b: Float64Array, bNorm: number, grid: CutGrid, spansArg: 'scan' | number): SizeReport['sor'] {
-  const x = paddedVector(grid.nx, grid.ny);
-  let spans = typeof spansArg === 'number' ? spansArg : 1;
-  if (spansArg === 'scan') {
-    let best = Infinity;
-    for (const candidate of [1, 2, 4]) {
-      const trial = sor(stencil, b, bNorm, x, sorFactor(grid.nx, grid.ny, candidate), TOLERANCE, SOR_LIMIT_MS, 2 * Math.max(grid.nx, grid.ny));
-      if (trial.residual < best) {
-        best = trial.residual;
-        spans = candidate;
-      }
-    }
-  }
-  const omega = sorFactor(grid.nx, grid.ny, spans);
-  const run = sor(stencil, b, bNorm, x, omega, TOLERANCE, SOR_LIMIT_MS);
-  return { omega, spans, ...run };
+/** Red-black SOR over the fluid cells with Young's optimum factor from the measured Jacobi radius (bench/sor.ts). */
+function runSor(stencil: Stencil, b: Float64Array, bNorm: number, grid: CutGrid): SizeReport['sor'] {
+  const plan = sorPlan(stencil);
+  const factor = sorFactor(stencil, plan);
+  const run = sor(stencil, plan, b, bNorm, paddedVector(grid.nx, grid.ny), factor.omega, TOLERANCE, SOR_LIMIT_MS);
+  return { omega: factor.omega, rhoJ: factor.rhoJ, factorIterations: factor.iterations, ...run };
 }
 
 function median(values: readonly number[]): number {

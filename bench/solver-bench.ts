@@ -1,6 +1,6 @@
 /**
- * Solver benchmark (npm run bench): the full solve of a realistic port section at 64k to 4M cells against plain
- * SOR on the same system. Each size runs in two fresh processes: one for timings (repeated solves in a warm
+ * Solver benchmark (npm run bench): the full solve of a realistic port section at 64k to 4M cells against
+ * red-black SOR over the fluid cells with its optimum factor (bench/sor.ts) on the same system. Each size runs in two fresh processes: one for timings (repeated solves in a warm
  * process, as in the app), one for the peak memory of a single solve. Times are medians of wall-clock time
  * (other work on the machine shows up in them; CPU time is printed beside them). "runtime MB" is the resident
  * set before the solve (Node, the TypeScript loader, compiled code), included in "peak MB".
@@ -11,12 +11,11 @@ import { loadavg } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { SAMPLE } from './bench-problem.ts';
 import { runSize, type MemoryReport, type SizeArgs, type SizeReport, type TimeReport } from './bench-size.ts';
+import { SOR_FACTOR_METHOD } from './sor.ts';
 
 const SIZES = [65_536, 262_144, 1_048_576, 4_194_304];
 /** Runs per size: more where a run is short, so that a burst of other work on the machine moves the median less. */
 const RUNS = (cells: number) => (cells > 2_000_000 ? 3 : cells > 300_000 ? 5 : 11);
-/** SOR factor spans are scanned up to this size; larger sizes reuse the best span found. */
-const SCAN_UP_TO = 262_144;
 
 if (process.argv[2] === '--child') {
   const args = JSON.parse(process.argv[3]) as SizeArgs;
@@ -29,14 +28,12 @@ function main(): void {
   const sizes = process.env.BENCH_SIZES ? process.env.BENCH_SIZES.split(',').map(Number) : SIZES;
   const withSor = process.env.BENCH_SOR !== '0';
   console.log(`Portwright solver benchmark: ${SAMPLE}, tolerance 1e-8, load average ${loadavg().map((l) => l.toFixed(1)).join(' ')}`);
+  if (withSor) console.log(`Baseline: red-black SOR over fluid cells from 0, same operator and stopping rule; ${SOR_FACTOR_METHOD}`);
   const reports: SizeReport[] = [];
-  let spans = 0;
   for (const cells of sizes) {
-    const sor = withSor ? (cells <= SCAN_UP_TO || spans === 0 ? 'scan' : spans) : 'skip';
-    const timing = inChild({ cells, runs: RUNS(cells), mode: 'time', sor }) as TimeReport;
-    const memory = inChild({ cells, runs: 1, mode: 'memory', sor: 'skip' }) as MemoryReport;
+    const timing = inChild({ cells, runs: RUNS(cells), mode: 'time', sor: withSor }) as TimeReport;
+    const memory = inChild({ cells, runs: 1, mode: 'memory', sor: false }) as MemoryReport;
     const report: SizeReport = { ...timing, ...memory };
-    if (report.sor && cells <= SCAN_UP_TO) spans = report.sor.spans;
     reports.push(report);
     console.log(describe(report));
   }
@@ -54,10 +51,13 @@ function inChild(args: SizeArgs): TimeReport | MemoryReport {
 function describe(r: SizeReport): string {
   const p = r.phases;
   const sor = r.sor
-    ? `SOR (omega ${r.sor.omega.toFixed(5)}, ${r.sor.sweeps} sweeps) ${r.sor.converged ? `${fmtMs(r.sor.ms)}` : `stopped at ${fmtMs(r.sor.ms)} with residual ${r.sor.residual.toExponential(1)}`}`
+    ? `SOR (rhoJ ${r.sor.rhoJ.toFixed(7)} from ${r.sor.factorIterations} inverse iterations, omega ${r.sor.omega.toFixed(5)}, ${r.sor.sweeps} sweep pairs) ` +
+      (r.sor.converged ? fmtMs(r.sor.ms) : `capped at ${fmtMs(r.sor.ms)} with relative residual ${r.sor.residual.toExponential(1)}`)
     : 'SOR skipped';
-  return `${r.nx} x ${r.ny}: phases rasterise ${fmtMs(p.rasterise)}, connect ${fmtMs(p.connect)}, solve ${fmtMs(p.solve)} ` +
-    `(setup ${fmtMs(p.setup)} + MG-PCG ${fmtMs(p.pcg)}), wall speeds ${fmtMs(p.walls)}; ${sor}`;
+  const total = Object.values(p).reduce((a, b) => a + b, 0);
+  return `${r.nx} x ${r.ny}: phases (medians, ms) rasterise ${p.rasterise.toFixed(1)}, connect ${p.connect.toFixed(1)}, ` +
+    `assemble ${p.assemble.toFixed(1)}, multigrid set-up ${p.setup.toFixed(1)}, PCG ${p.pcg.toFixed(1)}, ` +
+    `velocity and checks ${p.fields.toFixed(1)}, wall speeds ${p.walls.toFixed(1)}; sum ${total.toFixed(0)}; ${sor}`;
 }
 
 function table(reports: readonly SizeReport[]): string {

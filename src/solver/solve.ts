@@ -1,7 +1,8 @@
 /** The solve: rasterise, connect, assemble, warm start, MG-PCG, velocity, flux checks, wall speeds. */
-import { assemble, writeRhs } from './assemble.ts';
+import { assemble, writeRhs, type Stencil } from './assemble.ts';
 import { connectedCells } from './connectivity.ts';
 import { buildMultigrid } from './multigrid/multigrid.ts';
+import { fullMultigridStart } from './multigrid/full-multigrid.ts';
 import { pcg } from './pcg/pcg.ts';
 import { paddedVector, residual } from './pcg/operator.ts';
 import { rasterise } from './rasterise/rasterise.ts';
@@ -82,31 +83,58 @@ export function solveOnGrid(grid: CutGrid, options: GridSolveOptions): GridSolut
   const mask = options.mask ?? connectedCells(grid);
   const stencil = assemble(grid, mask);
   const phi = new Float64Array(nx * ny);
-  if (options.warmStart) warmStartGuess(options.warmStart, grid, mask, phi);
   const r = new Float64Array(nx * ny);
   const bNorm = writeRhs(grid, mask, r);
   const work = { p: paddedVector(nx, ny), z: paddedVector(nx, ny) };
-  const report = pcg(stencil, buildMultigrid(stencil), phi, r, bNorm, work, {
+  const mg = buildMultigrid(stencil);
+  // From an earlier field when given (the refine-after-drag path), else from the coarse levels' own solution.
+  if (options.warmStart) warmStartGuess(options.warmStart, grid, mask, phi);
+  else fullMultigridStart(mg, r, phi, work.z);
+  const report = pcg(stencil, mg, phi, r, bNorm, work, {
     tolerance: options.tolerance ?? DEFAULT_TOLERANCE,
     maxIterations: options.maxIterations ?? DEFAULT_MAX_ITERATIONS,
     shouldStop: options.shouldStop,
     onIteration: options.onIteration,
   });
   if (report.stopped) throw new SolveSupersededError(report.iterations);
+  const fields = fieldsFromPotential(stencil, grid, phi, r, work.p, bNorm, options);
+  return { ...fields, iterations: report.iterations, converged: report.converged };
+}
+
+/**
+ * Everything the result derives from a solved potential: true residual, boundary and station fluxes, speed ratio,
+ * peak; then marks phi NaN outside the solve. @param r scratch of nx * ny, becomes the speed ratio (i + j * nx);
+ * @param padded scratch padded vector.
+ */
+export function fieldsFromPotential(
+  stencil: Stencil, grid: CutGrid, phi: Float64Array, r: Float64Array, padded: Float64Array, bNorm: number,
+  options: Pick<GridSolveOptions, 'inletLength' | 'corners'>,
+): Omit<GridSolution, 'iterations' | 'converged'> {
   // Report the true residual b - A phi, not the recurrence's.
-  writeRhs(grid, mask, r);
-  work.p.set(phi, nx);
-  const trueResidual = bNorm > 0 ? residual(stencil, work.p, r, r) / bNorm : 0;
-  const flux = boundaryFlux(grid, mask, phi);
+  writeRhs(grid, stencil.active, r);
+  padded.set(phi, grid.nx);
+  const trueResidual = bNorm > 0 ? residual(stencil, padded, r, r) / bNorm : 0;
+  const flux = boundaryFlux(stencil, grid, phi);
   const total = 0.5 * (flux.inlet + flux.outlet);
   const inletMeanSpeed = flux.inlet / options.inletLength;
   const fluxImbalance = worstImbalance(stationFluxes(stencil, grid, phi, STATION_COUNT), total);
   const speed = r;
   speedRatio(stencil, grid.h, phi, inletMeanSpeed, speed);
   const peak = peakSpeed(grid, speed, options.corners ?? new Float64Array(0));
-  for (let k = 0; k < phi.length; k++) if (mask[k] !== 1) phi[k] = NaN;
+  markUnsolved(stencil, phi);
   return {
-    grid, phi, speedRatio: speed, iterations: report.iterations, residual: trueResidual, converged: report.converged,
-    conductance: total, fluxImbalance, inletMeanSpeed, peak, inletFlux: flux.inlet, outletFlux: flux.outlet,
+    grid, phi, speedRatio: speed, residual: trueResidual, conductance: total, fluxImbalance, inletMeanSpeed, peak,
+    inletFlux: flux.inlet, outletFlux: flux.outlet,
   };
+}
+
+/** Sets phi to NaN in every cell outside the solve (i + j * nx); whole row runs outside the active spans at once. */
+function markUnsolved(s: Stencil, phi: Float64Array): void {
+  const { nx, ny, active, rowStart, rowEnd } = s;
+  for (let j = 0; j < ny; j++) {
+    const rowK = j * nx;
+    phi.fill(NaN, rowK, rowK + rowStart[j]);
+    phi.fill(NaN, rowK + rowEnd[j], rowK + nx);
+    for (let k = rowK + rowStart[j], end = rowK + rowEnd[j]; k < end; k++) if (active[k] !== 1) phi[k] = NaN;
+  }
 }

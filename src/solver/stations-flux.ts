@@ -18,25 +18,28 @@ export function stationFluxes(s: Stencil, grid: CutGrid, phi: Float64Array, coun
   const levels = new Float64Array(count + 2);
   for (let m = 0; m < count + 2; m++) levels[m] = m / (count + 1);
   const flux = new Float64Array(count + 2);
-  const { nx, ny, faceX, faceY, active } = s;
+  const { nx, ny, faceX, faceY, rowStart, rowEnd } = s;
+  // Open faces lie inside the active spans (a face is open only between two active cells).
   for (let j = 0; j < ny; j++) {
     const rowX = j * (nx + 1);
-    for (let i = 1; i < nx; i++) {
+    const rowK = j * nx;
+    for (let i = Math.max(1, rowStart[j]), end = rowEnd[j]; i < end; i++) {
       const coef = faceX[rowX + i];
-      if (coef !== 0) addCrossing(phi[i - 1 + j * nx], phi[i + j * nx], coef, levels, flux, count);
+      if (coef !== 0) addCrossing(phi[rowK + i - 1], phi[rowK + i], coef, levels, flux, count);
+    }
+    if (j === 0) continue;
+    for (let k = rowK + rowStart[j], end = rowK + rowEnd[j]; k < end; k++) {
+      const coef = faceY[k];
+      if (coef !== 0) addCrossing(phi[k - nx], phi[k], coef, levels, flux, count);
     }
   }
-  for (let k = nx; k < nx * ny; k++) {
-    const coef = faceY[k];
-    if (coef !== 0) addCrossing(phi[k - nx], phi[k], coef, levels, flux, count);
-  }
   const { inletCoupling, outletCoupling } = grid;
-  for (let k = 0; k < nx * ny; k++) {
-    if (active[k] !== 1) continue;
+  const { cells } = s.dirichlet; // the active cells with a coupling
+  for (let n = 0; n < cells.length; n++) {
+    const k = cells[n];
     const p = phi[k];
     const cin = inletCoupling[k];
     const cout = outletCoupling[k];
-    if (cin === 0 && cout === 0) continue;
     for (let m = 1; m <= count; m++) {
       if (p <= levels[m]) flux[m] += cin * (1 - p);
       else flux[m] += cout * p;

@@ -9,15 +9,17 @@ export interface BoundaryFlux {
 }
 
 /**
- * Sums the Dirichlet fluxes: inlet coupling * (1 - phi) and outlet coupling * (phi - 0) over the solved cells.
+ * Sums the Dirichlet fluxes: inlet coupling * (1 - phi) and outlet coupling * (phi - 0) over the solved cells
+ * (the stencil's Dirichlet list holds exactly the solved cells with a coupling, so only those are visited).
  * @param phi potential, i + j * nx (values in excluded cells are ignored).
  */
-export function boundaryFlux(grid: CutGrid, mask: Uint8Array, phi: Float64Array): BoundaryFlux {
+export function boundaryFlux(s: Stencil, grid: CutGrid, phi: Float64Array): BoundaryFlux {
   const { inletCoupling, outletCoupling } = grid;
+  const { cells } = s.dirichlet;
   let inlet = 0;
   let outlet = 0;
-  for (let k = 0; k < phi.length; k++) {
-    if (mask[k] !== 1) continue;
+  for (let m = 0; m < cells.length; m++) {
+    const k = cells[m];
     inlet += inletCoupling[k] * (1 - phi[k]);
     outlet += outletCoupling[k] * phi[k];
   }
@@ -33,12 +35,16 @@ export function boundaryFlux(grid: CutGrid, mask: Uint8Array, phi: Float64Array)
  * @param out speed ratio, i + j * nx, written; NaN in excluded cells.
  */
 export function speedRatio(s: Stencil, h: number, phi: Float64Array, meanInletSpeed: number, out: Float64Array): void {
-  const { nx, ny, faceX, faceY, active } = s;
+  const { nx, ny, faceX, faceY, active, rowStart, rowEnd } = s;
   const scale = 1 / (h * meanInletSpeed);
   for (let j = 0; j < ny; j++) {
     const rowX = j * (nx + 1);
-    for (let i = 0; i < nx; i++) {
-      const k = i + j * nx;
+    const rowK = j * nx;
+    // Outside the active span every cell is excluded.
+    out.fill(NaN, rowK, rowK + rowStart[j]);
+    out.fill(NaN, rowK + rowEnd[j], rowK + nx);
+    for (let i = rowStart[j], end = rowEnd[j]; i < end; i++) {
+      const k = i + rowK;
       if (active[k] !== 1) {
         out[k] = NaN;
         continue;

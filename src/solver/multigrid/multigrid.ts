@@ -25,6 +25,8 @@ export interface Multigrid {
   readonly coarsest: CoarsestSolver | null;
   /** Red-black sweep pairs before and after each coarse correction. */
   readonly sweeps: number;
+  /** Scale of the coarse couplings (MultigridOptions.coarseScale), for restricting a right-hand side. */
+  readonly coarseScale: number;
 }
 
 export interface MultigridOptions {
@@ -52,7 +54,7 @@ export function buildMultigrid(fine: Stencil, options: MultigridOptions = {}): M
     b = new Float64Array(s.nx * s.ny);
   }
   levels.push({ stencil: s, x, b, down: null });
-  return { levels, coarsest: factorCoarsest(s), sweeps: Math.max(1, options.sweeps ?? 1) };
+  return { levels, coarsest: factorCoarsest(s), sweeps: Math.max(1, options.sweeps ?? 1), coarseScale: scale };
 }
 
 /**
@@ -62,6 +64,14 @@ export function buildMultigrid(fine: Stencil, options: MultigridOptions = {}): M
  */
 export function applyMultigrid(mg: Multigrid, r: Float64Array, z: Float64Array): number {
   return vCycle(mg, 0, z, r);
+}
+
+/**
+ * As applyMultigrid, on level `depth` (0 = finest) with that level's r (i + j * nx) and z (padded; 0 outside
+ * the level's active spans on entry). Uses the coarser levels' vectors as scratch.
+ */
+export function applyMultigridAt(mg: Multigrid, depth: number, r: Float64Array, z: Float64Array): number {
+  return vCycle(mg, depth, z, r);
 }
 
 function vCycle(mg: Multigrid, depth: number, x: Float64Array, b: Float64Array): number {

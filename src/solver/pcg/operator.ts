@@ -58,17 +58,19 @@ export function updateDirectionAndApply(s: Stencil, p: Float64Array, z: Float64A
 
 /**
  * r = b - A x with x padded and b, r plain (i + j * nx); returns ||r||_2. r may alias b.
+ * Only the active row spans are written and summed: b must be 0 outside them (a right-hand side of the
+ * masked system is), and r there is left as it was (so pass r = b, or an r that is 0 there).
  */
 export function residual(s: Stencil, x: Float64Array, b: Float64Array, r: Float64Array): number {
-  const { nx, ny } = s;
+  const { nx, ny, rowStart, rowEnd } = s;
   const { cells, coupling, rowPtr } = s.dirichlet;
   let sum = 0;
   for (let j = 0; j < ny; j++) {
     const rowK = j * nx;
     // Once at the start and once at the end of a solve, not per iteration: the shared cell formula is enough.
-    for (let i = 0; i < nx; i++) r[rowK + i] = cellResidual(s, x, b, j, i);
+    for (let i = rowStart[j], end = rowEnd[j]; i < end; i++) r[rowK + i] = cellResidual(s, x, b, j, i);
     for (let m = rowPtr[j]; m < rowPtr[j + 1]; m++) r[cells[m]] -= coupling[m] * x[cells[m] + nx];
-    for (let k = rowK; k < rowK + nx; k++) sum += r[k] * r[k];
+    for (let k = rowK + rowStart[j], end = rowK + rowEnd[j]; k < end; k++) sum += r[k] * r[k];
   }
   return Math.sqrt(sum);
 }

@@ -56,7 +56,7 @@ export function pcg(
     const pAp = updateDirectionAndApply(s, p, z, beta); // p = z + beta p; z = A p
     if (!(pAp > 0) || !(rz > 0)) break; // breakdown: no further progress possible in floating point
     const alpha = rz / pAp;
-    rel = Math.sqrt(updateSolution(x, r, p, z, alpha, nx)) / bNorm;
+    rel = Math.sqrt(updateSolution(s, x, r, p, z, alpha)) / bNorm;
     iterations++;
     options.onIteration?.(iterations, rel);
     if (rel <= options.tolerance) break;
