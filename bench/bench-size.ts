@@ -70,7 +70,7 @@ export function runSize(args: SizeArgs): TimeReport | MemoryReport {
 
 /** Timings as the app sees them: repeated solves in one warm process, the collector left to itself. */
 function measureTime(args: SizeArgs): TimeReport {
-  const domain = benchDomain();
+  const domain = benchDomain(args.cells);
   solveFlow(domain, { targetCells: 16_384 }); // compile the hot loops before timing
   const wall: number[] = [];
   const cpu: number[] = [];
@@ -98,7 +98,7 @@ function measureTime(args: SizeArgs): TimeReport {
 
 /** Peak memory of one solve in a fresh process (warmed up on a small grid, then fully collected). */
 function measureMemory(cells: number): MemoryReport {
-  const domain = benchDomain();
+  const domain = benchDomain(cells);
   solveFlow(domain, { targetCells: 16_384 });
   collectGarbage();
   const baselineRssMb = process.memoryUsage().rss / MB;
@@ -112,7 +112,7 @@ function measureMemory(cells: number): MemoryReport {
 
 /** solveFlow split into its phases: the median ms of each over `runs` solves. */
 function timePhases(cells: number, runs: number): Phases {
-  const domain = benchDomain();
+  const domain = benchDomain(cells);
   const laps: Phases[] = [];
   for (let run = 0; run < runs; run++) {
     let t = performance.now();

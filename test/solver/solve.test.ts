@@ -77,7 +77,7 @@ describe('solveOnGrid', () => {
 
 describe('the tight short-side street-port sample (bench problem)', () => {
   it('solves in a grid-independent number of iterations and passes its flux through every station', () => {
-    const runs = [65_536, 262_144].map((cells) => solveFlow(benchDomain(), { targetCells: cells }));
+    const runs = [65_536, 262_144].map((cells) => solveFlow(benchDomain(cells), { targetCells: cells }));
     console.log(`sample: ${runs.map((r) => `${r.grid.nx} x ${r.grid.ny}: ${r.iterations} iterations, conductance ${r.conductance.toFixed(5)}, ` +
       `station imbalance ${r.fluxImbalance.toExponential(1)}, peak ${r.peak.speedRatio.toFixed(2)}`).join('; ')}`);
     for (const r of runs) {
