@@ -29,6 +29,7 @@ export function solveReportLines(report: SolveReport): string[] {
     `  peak speed ratio: ${ratio(report.peak.speedRatio)} at ${f.at(report.peak.x, report.peak.y)} (kept clear of sharp corners)`,
     `  tightest section ahead of the valve: ${tightestText(report, f)}`,
     `  slow share: ${percent(report.slowShare)} of the section, ${percent(report.portSlowShare)} of the port`,
+    ...report.thinWalls.map((wall) => `  warning: ${wall.note}`),
     '',
     'walls (peak speed ratio; where the flow likely leaves the wall, measured from its upstream end):',
   ];
