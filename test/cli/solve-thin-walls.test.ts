@@ -59,6 +59,9 @@ describe('solve: a divider thinner than a grid cell', () => {
     expect(walls).toHaveLength(1);
     expect(walls[0].wallName).toBe('divider');
     expect(walls[0].thickness).toBeCloseTo(0.02, 6);
+    // Placed half way along the divider's thinnest cells, not at its root.
+    expect(walls[0].x).toBeGreaterThan(5);
+    expect(walls[0].x).toBeLessThan(15);
     expect(walls[0].y).toBeGreaterThan(0.98);
     expect(walls[0].y).toBeLessThan(1.04);
     expect(walls[0].cellCount).toBeGreaterThan(400);
@@ -70,7 +73,7 @@ describe('solve: a divider thinner than a grid cell', () => {
 
   it('prints a plain warning naming the wall, its place and thickness, the cell it is solved as and the grid to use', () => {
     expect(thinText).toMatch(
-      /  warning: Wall "divider" is thinner than a grid cell near \(0\.0, 1\.0\) mm \(about 0\.02 mm thick\): it is solved as a wall about one cell \(0\.037 mm\) thick\. A grid of about 410,000 cells would resolve it\./,
+      /  warning: Wall "divider" is thinner than a grid cell near \(9\.5, 1\.0\) mm \(about 0\.02 mm thick\): it is solved as a wall about one cell \(0\.037 mm\) thick\. A grid of about 410,000 cells would resolve it\./,
     );
   });
 });

@@ -16,25 +16,29 @@ export function cellsToResolve(boxArea: number, thickness: number): number {
   return thickness > 0 ? Math.ceil((4 * boxArea) / (thickness * thickness)) : Infinity;
 }
 
+/** Relative tolerance within which split cells count as equally thin (a straight divider of even thickness). */
+const SAME_THICKNESS = 1e-6;
+
 /**
- * One entry per wall name (in the order the rings first reach them) at its thinnest split cell, with the count of
- * split cells. `wallNames` is FlowDomain.wallNames; `boxArea` the domain's bounding-box area, length units squared.
+ * One entry per wall name (in the order the rings first reach them), placed at the middle one of its thinnest split
+ * cells (so an even divider is placed half way along, not at its root), with the count of split cells.
+ * `wallNames` is FlowDomain.wallNames; `boxArea` the domain's bounding-box area, length units squared.
  */
 export function thinWallsOf(scan: SplitScan, rings: readonly GridRing[], wallNames: readonly string[], frame: GridFrame, boxArea: number): ThinWall[] {
-  const byName = new Map<string, { x: number; y: number; thickness: number; cellCount: number }>();
+  const byName = new Map<string, { x: number; y: number; thickness: number }[]>();
   for (const split of scan.cells.values()) {
     const { distance, wallName } = thinnestGap(split, rings, wallNames);
-    const thickness = distance * frame.h;
-    const entry = byName.get(wallName);
-    const x = frame.x0 + (split.i + 0.5) * frame.h;
-    const y = frame.y0 + (split.j + 0.5) * frame.h;
-    if (entry === undefined) byName.set(wallName, { x, y, thickness, cellCount: 1 });
-    else {
-      entry.cellCount++;
-      if (thickness < entry.thickness) Object.assign(entry, { x, y, thickness });
-    }
+    const place = { x: frame.x0 + (split.i + 0.5) * frame.h, y: frame.y0 + (split.j + 0.5) * frame.h, thickness: distance * frame.h };
+    const list = byName.get(wallName);
+    if (list === undefined) byName.set(wallName, [place]);
+    else list.push(place);
   }
-  return [...byName].map(([wallName, e]) => ({ wallName, ...e, resolvingCells: cellsToResolve(boxArea, e.thickness) }));
+  return [...byName].map(([wallName, places]) => {
+    const least = places.reduce((m, p) => Math.min(m, p.thickness), Infinity);
+    const thinnest = places.filter((p) => p.thickness <= least * (1 + SAME_THICKNESS));
+    const { x, y } = thinnest[thinnest.length >> 1];
+    return { x, y, wallName, thickness: least, cellCount: places.length, resolvingCells: cellsToResolve(boxArea, least) };
+  });
 }
 
 /** Least distance between the kept piece's chains and any dropped piece's chains (grid units), and the wall there. */
