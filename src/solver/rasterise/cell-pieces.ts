@@ -23,6 +23,9 @@ export interface CellPiece {
 /** Area sums further than this from the cell's measured fraction mean the walk went wrong, and it is not used. */
 const AREA_CHECK = 1e-9;
 
+/** Border positions closer than this (grid units) are one point: cut points off a grid line carry rounding. */
+const SAME_POINT = 1e-9;
+
 /**
  * The pieces of cell (i, j) from its chains (at least two, none closed), or null when the walk cannot be made
  * consistent (an end off the border, two chains entering at one point, areas not adding up to `fraction`).
@@ -52,7 +55,11 @@ export function cellPieces(chains: readonly CellChain[], i: number, j: number, f
   return Math.abs(total - fraction) <= AREA_CHECK ? pieces : null;
 }
 
-/** next[c] = the chain whose entry comes first counter-clockwise after chain c's exit; null unless one-to-one. */
+/**
+ * next[c] = the chain whose entry comes first counter-clockwise after chain c's exit; null unless one-to-one.
+ * An entry at the very point of the exit comes last, a whole turn on: there the boundary only touches the border
+ * from the other side, as the two faces of a wall of no thickness do (its upper face leaves where its lower face enters).
+ */
 function linkChains(entry: Float64Array, exit: Float64Array): Int32Array | null {
   const count = entry.length;
   const next = new Int32Array(count);
@@ -61,11 +68,12 @@ function linkChains(entry: Float64Array, exit: Float64Array): Int32Array | null 
     let best = -1;
     let bestGap = Infinity;
     for (let e = 0; e < count; e++) {
-      const gap = ccwGap(exit[c], entry[e]);
+      const gap = linkGap(exit[c], entry[e]);
+      if (Math.abs(gap - bestGap) <= SAME_POINT) return null;
       if (gap < bestGap) {
         bestGap = gap;
         best = e;
-      } else if (gap === bestGap) return null;
+      }
     }
     if (taken[best]) return null;
     taken[best] = 1;
@@ -97,9 +105,9 @@ function pieceOf(cycle: readonly number[], chains: readonly CellChain[], entry: 
   cycle.forEach((c, k) => {
     const uv = chains[c].uv;
     for (let p = 0; p < uv.length; p += 4) twice += (uv[p] - i) * (uv[p + 3] - j) - (uv[p + 2] - i) * (uv[p + 1] - j);
-    const to = entry[cycle[(k + 1) % cycle.length]];
-    twice += stretchCross(exit[c], exit[c] + ccwGap(exit[c], to));
-    addStretch(sides, exit[c], exit[c] + ccwGap(exit[c], to));
+    const end = exit[c] + linkGap(exit[c], entry[cycle[(k + 1) % cycle.length]]);
+    twice += stretchCross(exit[c], end);
+    addStretch(sides, exit[c], end);
   });
   return { area: 0.5 * twice, chains: cycle, sides };
 }
@@ -131,10 +139,11 @@ function addStretch(sides: [number[], number[], number[], number[]], a: number, 
   }
 }
 
-/** Counter-clockwise border distance from a to b, 0..4 (0 when they coincide). */
-function ccwGap(a: BorderT, b: BorderT): number {
+/** Counter-clockwise border distance from exit a to entry b, 0..4, a whole turn (4) when they are one point. */
+function linkGap(a: BorderT, b: BorderT): number {
   const d = b - a;
-  return d < 0 ? d + 4 : d;
+  const gap = d < 0 ? d + 4 : d;
+  return gap <= SAME_POINT || gap >= 4 - SAME_POINT ? 4 : gap;
 }
 
 /** Cell-local point at border position t (any real; taken modulo 4). */

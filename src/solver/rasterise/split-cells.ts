@@ -31,8 +31,11 @@ export interface SplitScan {
 export function findSplitCells(rings: readonly GridRing[], fraction: Float64Array, nx: number, ny: number): SplitScan {
   const raw = new Map<number, { i: number; j: number; chains: CellChain[]; pieces: CellPiece[] }>();
   let fallbacks = 0;
-  for (const [cell, chains] of cellChains(rings, nx, ny)) {
-    if (chains.length < 2 || fraction[cell] === 0) continue;
+  for (const [cell, all] of cellChains(rings, nx, ny)) {
+    if (all.length < 2 || fraction[cell] === 0) continue;
+    // A chain shorter than rounding (a corner grazed by a cut point) bounds nothing.
+    const chains = all.filter((c) => chainLength(c) > NEGLIGIBLE_LENGTH);
+    if (chains.length < 2) continue;
     const i = cell % nx;
     const j = (cell - i) / nx;
     const pieces = chains.some((c) => c.closed) ? null : cellPieces(chains, i, j, fraction[cell]);
@@ -50,6 +53,15 @@ export function findSplitCells(rings: readonly GridRing[], fraction: Float64Arra
     cells.set(cell, { i: r.i, j: r.j, chains: r.chains, pieces, kept });
   }
   return { cells, fallbacks };
+}
+
+/** Chains shorter than this (grid units) are left out of the walk. */
+const NEGLIGIBLE_LENGTH = 1e-9;
+
+function chainLength(chain: CellChain): number {
+  let length = 0;
+  for (let p = 0; p < chain.uv.length; p += 4) length += Math.hypot(chain.uv[p + 2] - chain.uv[p], chain.uv[p + 3] - chain.uv[p + 1]);
+  return length;
 }
 
 /** Overlaps shorter than this (fraction of a face) do not join pieces: they are rounding at a shared end point. */

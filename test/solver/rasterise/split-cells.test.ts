@@ -114,6 +114,19 @@ describe('split cells: what is not a split', () => {
     expect(scanOf(dividedBox(2, 0.1), 16).fallbacks).toBe(0);
   });
 
+  it('a divider of no thickness (its two faces on one line) splits the cells it crosses, with no fallback', () => {
+    // Mid-row, then at 45 degrees through grid nodes (h = sqrt(16 / 128) = 0.354, nodes every 0.354 along x and y).
+    for (const [domain, target] of [[dividedBox(2.1, 0, 3), 256], [dividedBox(2, 0, 3, Math.PI / 4), 128]] as const) {
+      const scan = scanOf(domain, target);
+      expect(scan.fallbacks).toBe(0);
+      const walls = rasterise(domain, target).thinWalls;
+      expect(walls.map((w) => w.wallName)).toEqual(['divider']);
+      expect(walls[0].thickness).toBe(0);
+      expect(walls[0].resolvingCells).toBe(Infinity);
+      expect(walls[0].cellCount).toBe(scan.cells.size);
+    }
+  });
+
   it('a divider thicker than a cell splits nothing', () => {
     expect(rasterise(dividedBox(1.3, 1.4), 16).thinWalls).toEqual([]);
   });
@@ -160,6 +173,29 @@ describe('split cells: what is not a split', () => {
       { seed: 2024, numRuns: 80 },
     );
     expect(fallbacks).toBe(0);
+  });
+});
+
+describe('split cells: dividers on the lattice of the grid (ends, faces and corners on grid lines and nodes)', () => {
+  it('never falls back to the single-piece measures', () => {
+    let fallbacks = 0;
+    let splits = 0;
+    for (let eighth = 0; eighth < 8; eighth++) {
+      for (const target of [16, 128, 1024]) {
+        for (let quarter = 4; quarter <= 12; quarter += 2) {
+          for (const thickness of [0, 0.01, 0.125]) {
+            for (const reach of [3, 3.25]) {
+              const scan = scanOf(dividedBox(quarter / 4, thickness, reach, (eighth * Math.PI) / 4), target);
+              fallbacks += scan.fallbacks;
+              splits += scan.cells.size;
+            }
+          }
+        }
+      }
+    }
+    expect(fallbacks).toBe(0);
+    // Not a vacuous pass: plenty of those cells are split.
+    expect(splits).toBeGreaterThan(1000);
   });
 });
 
