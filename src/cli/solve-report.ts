@@ -4,8 +4,9 @@ import type { Units } from '../document/types.ts';
 import { pointInRegion } from '../geometry/index.ts';
 import type { BreathingSummary } from '../parts/index.ts';
 import { probeFlow } from '../solver/probe.ts';
+import { thinWallNote } from '../solver/thin-wall-note.ts';
 import type { ReadingSummary } from '../solver/reading/index.ts';
-import type { FlowDomain, SolveResult, WallSpeeds } from '../solver/types.ts';
+import type { FlowDomain, SolveResult, ThinWall, WallSpeeds } from '../solver/types.ts';
 
 type Detachment = ReadingSummary['walls'][number]['detachment'];
 
@@ -42,6 +43,11 @@ export interface ProbeReport {
   readonly speedRatio: number | undefined;
 }
 
+/** A wall thinner than a grid cell (solved as about one cell thick), with the warning the command prints. */
+export interface ThinWallReport extends ThinWall {
+  readonly note: string;
+}
+
 /** Everything solve prints; lengths in the document's units, speeds as ratios to the mean inlet speed. */
 export interface SolveReport {
   readonly title: string;
@@ -55,6 +61,8 @@ export interface SolveReport {
   /** Flux per unit potential drop, per unit depth (dimensionless in 2D). */
   readonly conductance: number;
   readonly fluxImbalance: number;
+  /** Walls thinner than a grid cell, one per wall name; empty when there are none. */
+  readonly thinWalls: readonly ThinWallReport[];
   /** Potential drop per length unit at the inlet (flux / inlet length) at a unit potential drop. */
   readonly inletMeanSpeed: number;
   readonly peak: SolveResult['peak'];
@@ -97,6 +105,7 @@ export function buildSolveReport(solved: SolvedVariant, probes: readonly (readon
     residual: result.residual,
     conductance: result.conductance,
     fluxImbalance: result.fluxImbalance,
+    thinWalls: result.thinWalls.map((wall) => ({ ...wall, note: thinWallNote(wall, { units: solved.units, spacing: grid.h }) })),
     inletMeanSpeed: result.inletMeanSpeed,
     peak: result.peak,
     probes: probes.map(([x, y]) => probeReport(solved.domain, result, x, y)),

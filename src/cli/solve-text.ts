@@ -29,6 +29,7 @@ export function solveReportLines(report: SolveReport): string[] {
     `  peak speed ratio: ${peakText(report.peak, f)}`,
     `  tightest section ahead of the valve: ${tightestText(report, f)}`,
     `  slow share: ${percent(report.slowShare)} of the section, ${percent(report.portSlowShare)} of the port`,
+    ...report.thinWalls.map((wall) => `  warning: ${wall.note}`),
     '',
     'walls (fastest wall flow, as a speed ratio; where the flow likely leaves the wall, measured from its upstream end):',
   ];

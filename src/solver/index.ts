@@ -2,3 +2,4 @@
 export * from './types.ts';
 export { FlowSetupError } from './errors.ts';
 export { solveFlow, SolveSupersededError, DEFAULT_TOLERANCE, DEFAULT_MAX_ITERATIONS } from './solve.ts';
+export { thinWallNote, type GridChoice, type ThinWallNoteOptions } from './thin-wall-note.ts';

@@ -39,7 +39,7 @@ export interface GridSolveOptions extends Pick<SolveOptions, 'tolerance' | 'maxI
 }
 
 /** Everything of a SolveResult but the wall speeds (those need the domain). */
-export type GridSolution = Omit<SolveResult, 'walls'> & {
+export type GridSolution = Omit<SolveResult, 'walls' | 'thinWalls'> & {
   /** False when the iteration cap came first. */
   readonly converged: boolean;
   /** Inlet and outlet flux, per unit depth at unit potential drop (their mean is the conductance). */
@@ -68,7 +68,7 @@ export function solveFlow(domain: FlowDomain, options: SolveOptions): SolveResul
   stopIfSuperseded(options.shouldStop, solution.iterations);
   // About a seventh of a 30k-cell drag solve; a picture without wall plots need not pay it.
   const walls = options.wallSpeeds === false ? [] : wallSpeeds(domain, grid, solution.phi, solution.inletMeanSpeed);
-  return { ...solution, walls };
+  return { ...solution, walls, thinWalls: grid.thinWalls };
 }
 
 /** Between phases too, so a superseded solve on a big grid does not finish its set-up or read-out first. */

@@ -56,6 +56,29 @@ export interface CutGrid {
   readonly outletCoupling: Float64Array;
 }
 
+/**
+ * A wall thinner than a grid cell, found where a cell held fluid on both sides of it (the cell kept its largest
+ * piece; the wall is solved as a wall about one cell thick). One entry per wall name, at its thinnest place.
+ */
+export interface ThinWall {
+  /** Centre of the cell where the wall is thinnest, length units. */
+  readonly x: number;
+  readonly y: number;
+  /** The wall's name (FlowDomain.wallNames), or 'unnamed wall'. */
+  readonly wallName: string;
+  /** Least distance between the fluid on either side of the wall in those cells, length units (about its thickness). */
+  readonly thickness: number;
+  /** Number of cells where this wall split the fluid. */
+  readonly cellCount: number;
+  /** Target cells at which the grid spacing would be at most half the thickness (Infinity for a wall of no thickness). */
+  readonly resolvingCells: number;
+}
+
+/** The cut-cell grid and the thin walls found while measuring it. */
+export interface RasterGrid extends CutGrid {
+  readonly thinWalls: readonly ThinWall[];
+}
+
 export interface SolveOptions {
   /** Target number of grid cells over the domain's bounding box. */
   readonly targetCells: number;
@@ -106,4 +129,6 @@ export interface SolveResult {
   readonly inletMeanSpeed: number;
   readonly peak: { readonly speedRatio: number; readonly x: number; readonly y: number };
   readonly walls: readonly WallSpeeds[];
+  /** Walls thinner than a grid cell, solved as about one cell thick (empty when there are none). */
+  readonly thinWalls: readonly ThinWall[];
 }

@@ -1,6 +1,6 @@
 /** Messages between the app and the solver workers: plain data, typed arrays transferred. */
 import type { FlowReading, ReadingOptions } from '../solver/reading/index.ts';
-import type { FlowDomain } from '../solver/types.ts';
+import type { FlowDomain, ThinWall } from '../solver/types.ts';
 
 export interface SolveRequest {
   /** Increasing per client; a newer id supersedes every older one. */
@@ -43,6 +43,8 @@ export interface FieldReply {
   readonly walls: readonly WallSpeedsReply[];
   /** Mean inlet speed at a unit potential drop (potential per length). */
   readonly inletMeanSpeed: number;
+  /** Walls thinner than a grid cell, solved as about one cell thick (thinWallNote gives the warning); often empty. */
+  readonly thinWalls: readonly ThinWall[];
   /** The flow reading, when asked for. */
   readonly reading: FlowReading | null;
   /** Time the worker spent, ms (measured outside the solver). */

@@ -52,6 +52,7 @@ function toReply(id: number, result: SolveResult, reading: FlowReading | null, w
     // The result is this reply's alone: its wall samples are sent as they are (transferred, not copied).
     walls: result.walls.map((w) => ({ name: w.name, samples: w.samples })),
     inletMeanSpeed: result.inletMeanSpeed,
+    thinWalls: result.thinWalls,
     reading,
     workerMs,
   };

@@ -46,6 +46,23 @@ describe('solver worker API over a MessageChannel', () => {
     expect(domain.outer.xy.length).toBeGreaterThan(0);
   });
 
+  it('carries the walls thinner than a cell: none on the sample, the divider on a divided channel', async () => {
+    const { client, close } = channelClient();
+    open.push(close);
+    const sample = await client.solveLatest({ domain: sampleDomain(), targetCells: 5_000 });
+    expect(sample?.ok && sample.thinWalls).toEqual([]);
+    // A 4 x 2 channel turning round a 0.01 thick divider (y 0.95..0.96, x 0..3): inlet below it, outlet above.
+    const pts = [0, 0, 4, 0, 4, 2, 0, 2, 0, 0.96, 3, 0.96, 3, 0.95, 0, 0.95];
+    const marks = [0, 0, 0, 2, 0, 0, 0, 1];
+    const domain: FlowDomain = {
+      outer: { xy: Float64Array.from(pts), marks: Uint8Array.from(marks), wallIds: Int32Array.from([-1, -1, -1, -1, 0, 0, 0, -1]) },
+      islands: [],
+      wallNames: ['divider'],
+    };
+    const divided = await client.solveLatest({ domain, targetCells: 2_000 });
+    expect(divided?.ok && divided.thinWalls.map((w) => w.wallName)).toEqual(['divider']);
+  });
+
   it('skips wall speeds only when asked and no reading needs them (the drag preview)', async () => {
     const { client, close } = channelClient();
     open.push(close);

@@ -48,18 +48,23 @@ export function couplings(rings: readonly GridRing[], fraction: Float64Array, nx
       const nv = ((uv[2 * m] - u0) / length) * sense;
       const target = mark === MARK_INLET ? inletCoupling : outletCoupling;
       forEachCellPiece(u0, v0, uv[2 * m], uv[2 * m + 1], (ua, va, ub, vb) => {
-        const piece = Math.hypot(ub - ua, vb - va);
-        if (piece === 0) return;
-        const um = 0.5 * (ua + ub);
-        const vm = 0.5 * (va + vb);
-        const i = clamp(Math.floor(um + NUDGE * nu), 0, nx - 1);
-        const j = clamp(Math.floor(vm + NUDGE * nv), 0, ny - 1);
+        if (ua === ub && va === vb) return;
+        const i = clamp(Math.floor(0.5 * (ua + ub) + NUDGE * nu), 0, nx - 1);
+        const j = clamp(Math.floor(0.5 * (va + vb) + NUDGE * nv), 0, ny - 1);
         // A cell whose area rounded to 0 holds no fluid to couple (a sliver below rounding level).
         if (fraction[i + j * nx] === 0) return;
-        const dn = (i + 0.5 - um) * nu + (j + 0.5 - vm) * nv;
-        target[i + j * nx] += piece / Math.max(dn, MIN_NORMAL_DISTANCE);
+        target[i + j * nx] += pieceCoupling(ua, va, ub, vb, nu, nv, i, j);
       });
     }
   }
   return { inletCoupling, outletCoupling };
+}
+
+/**
+ * Coupling Lb / max(dn, h / 4) of one inlet or outlet piece (ua, va) -> (ub, vb) to cell (i, j), grid units;
+ * (nu, nv) is the unit normal pointing into the fluid.
+ */
+export function pieceCoupling(ua: number, va: number, ub: number, vb: number, nu: number, nv: number, i: number, j: number): number {
+  const dn = (i + 0.5 - 0.5 * (ua + ub)) * nu + (j + 0.5 - 0.5 * (va + vb)) * nv;
+  return Math.hypot(ub - ua, vb - va) / Math.max(dn, MIN_NORMAL_DISTANCE);
 }

@@ -4,13 +4,18 @@ import { bounds, checkDomain, checkInletSpan } from './checks.ts';
 import { couplings } from './coupling.ts';
 import { faceFractions } from './faces.ts';
 import { gridFrame, toGridRings } from './frame.ts';
-import type { CutGrid, FlowDomain } from '../types.ts';
+import { findSplitCells, keepLargestPieces } from './split-cells.ts';
+import { thinWallsOf } from './thin-wall-report.ts';
+import type { FlowDomain, RasterGrid } from '../types.ts';
 
 /**
  * Lays a square grid over the domain and measures it exactly.
  * Cell size h = sqrt(bounding-box area / targetCells), with one spare cell around the box
  * (so the box's lower-left corner is grid node (1, 1)). Area and face fractions come from exact clipping
  * of the rings against the grid, not from sampling cell centres.
+ *
+ * A cell that a wall thinner than a cell crosses holds fluid on both sides of it; it keeps only its largest
+ * piece (split-cells.ts), so the wall never leaks, and the wall is listed in `thinWalls`.
  *
  * Units for the finite-volume balance: a face's conductance is its open fraction (open length / centre
  * spacing h), the same dimensionless units as the inlet and outlet couplings.
@@ -21,15 +26,18 @@ import type { CutGrid, FlowDomain } from '../types.ts';
  * Throws FlowSetupError for a section the solver cannot use (see checks.ts).
  * Example: a 4 x 1 channel at targetCells 64 gives h = 0.25, nx = 18, ny = 6.
  */
-export function rasterise(domain: FlowDomain, targetCells: number): CutGrid {
+export function rasterise(domain: FlowDomain, targetCells: number): RasterGrid {
   checkDomain(domain, targetCells);
-  const frame = gridFrame(bounds(domain), targetCells);
+  const box = bounds(domain);
+  const frame = gridFrame(box, targetCells);
   checkInletSpan(domain, frame.h);
   const { nx, ny } = frame;
   const rings = toGridRings(domain, frame);
   const cellFraction = cellFractions(rings, nx, ny);
   const { openX, openY } = faceFractions(rings, cellFraction, nx, ny);
   const { inletCoupling, outletCoupling } = couplings(rings, cellFraction, nx, ny);
-  return { ...frame, cellFraction, openX, openY, inletCoupling, outletCoupling };
+  const split = findSplitCells(rings, cellFraction, nx, ny);
+  const thinWalls = thinWallsOf(split, rings, domain.wallNames, frame, (box[2] - box[0]) * (box[3] - box[1]));
+  keepLargestPieces(split, rings, { cellFraction, openX, openY, inletCoupling, outletCoupling }, nx);
+  return { ...frame, cellFraction, openX, openY, inletCoupling, outletCoupling, thinWalls };
 }
-

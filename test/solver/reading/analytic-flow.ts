@@ -33,7 +33,7 @@ export function exactResult(domain: FlowDomain, targetCells: number, flow: Exact
     }
   }
   const walls = wallSpeeds(domain, grid, phi, inletMeanSpeed);
-  return { grid, phi, speedRatio, iterations: 0, residual: 0, conductance: flow.conductance, fluxImbalance: 0, inletMeanSpeed, peak, walls };
+  return { grid, phi, speedRatio, iterations: 0, residual: 0, conductance: flow.conductance, fluxImbalance: 0, inletMeanSpeed, peak, walls, thinWalls: grid.thinWalls };
 }
 
 /** Exact flow in a straight channel [0, L] x [0, W] (see rasterise/shapes.ts channel): phi = 1 - x / L. */
