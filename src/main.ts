@@ -22,6 +22,7 @@ import { loadDocument } from './document/load.ts';
 import type { PortDocument } from './document/types.ts';
 import { activeSection, applyEdit, type CommandName } from './editor/index.ts';
 import { sectionBounds } from './geometry/index.ts';
+import { thinWallNote } from './solver/thin-wall-note.ts';
 import type { FlowDomain } from './solver/types.ts';
 import { FlowView } from './view/flow-view.ts';
 import { SolverPool } from './workers/pool.ts';
@@ -65,6 +66,7 @@ const live = new LiveSolve(pool.live, {
       if (reply.reading) plots.show(reply.reading, store.doc.units);
       readings.clearStale();
       status.clearErrors();
+      showThinWalls(reply);
     }
     indicator.solved(kind, reply.nx * reply.ny, ms, live.busy);
   },
@@ -75,6 +77,13 @@ const live = new LiveSolve(pool.live, {
     readings.showStale('This reading belongs to the last shape that solved.');
   },
 });
+
+/** A wall thinner than a cell is solved as a wall one cell thick: say so after each full solve (previews may not resolve what the full grid does). */
+function showThinWalls(reply: FieldReply): void {
+  if (reply.thinWalls.length === 0) return;
+  const choices = Object.entries(CELLS_BY_DETAIL).map(([label, cells]) => ({ label, cells }));
+  status.show(reply.thinWalls.map((wall) => thinWallNote(wall, { units: store.doc.units, spacing: reply.h, choices })).join(' '), 'warn');
+}
 
 /** The domain the study pipeline sets up for this grid (the command's `solve` sets up the same one). */
 function currentDomain(doc: PortDocument, cells: number): FlowDomain | null {
@@ -114,6 +123,11 @@ function showDocument(doc: PortDocument): void {
 
 const autosave = autosaver();
 store.subscribe((doc, cause) => {
+  // An opened file brings its own units and grid detail, and is solved on its own grid as the command solves it.
+  if (cause === 'open') {
+    settings.units = doc.units;
+    settings.gridDetail = doc.settings.gridDetail;
+  }
   solve(doc, cause);
   autosave(doc);
   // Mid-drag only the field and the handles follow the pointer; panels catch up when the drag ends.
@@ -124,8 +138,7 @@ store.subscribe((doc, cause) => {
   showPartsNumbers(byId('breathing'), bench, doc);
   if (cause === 'open') {
     editor.reset();
-    // An opened file brings its own units: the settings panel shows them (it said the old ones before).
-    settings.units = doc.units;
+    // The settings panel shows the opened file's units and grid detail (it said the old ones before).
     refreshSettingsPanel();
     view.setUnits(doc.units);
     view.fitToView(sectionBounds(activeSection(doc)));

@@ -1,11 +1,13 @@
-/** The app and `portwright solve --json` give the same numbers for the same file on the same grid (one case pipeline). */
+/** The app and `portwright solve --json` give the same numbers for the same file on the same grid (one case pipeline),
+ * and the app says so when a wall is thinner than its grid. */
 
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { run } from '../../src/cli/main.ts';
 import { captureIO, REPO } from '../cli/helpers.ts';
-import { CHECK_MS, openApp, startApp, type AppPage, type AppSession } from './app-session.ts';
+import { uBendFile } from '../study/drawn-shapes.ts';
+import { CHECK_MS, openApp, startApp, waitForFullSolves, type AppPage, type AppSession } from './app-session.ts';
 
 /** The app opens on this file (src/main.ts) at its own grid detail, the command's default grid too. */
 const SAMPLE = join(REPO, 'samples/short-side-compare.json');
@@ -58,5 +60,21 @@ describe('app and command on the same file', () => {
     const findings = await page.locator('#readings .findings button').allInnerTexts();
     expect(findings).toEqual(json.findings);
     expect(app.problems).toEqual([]);
+  }, CHECK_MS);
+});
+
+describe('a wall thinner than the grid in the app', () => {
+  it('is named in the status line after the full solve, with what would resolve it', async () => {
+    const { page } = app;
+    const solved = await page.evaluate(() => (window as unknown as { portwright: { timings: Array<{ kind: string }> } }).portwright.timings.filter((t) => t.kind === 'full').length);
+    const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.click('#open-button')]);
+    // The preview grid over this 20 x 2 mm piece has cells of 0.026 mm with rows at y = 0.982 and 1.008 [derived from
+    // rasterise/frame.ts]: the 0.005 mm divider at y = 1 lies inside one row, splitting its cells.
+    await chooser.setFiles({ name: 'u-bend.json', mimeType: 'application/json', buffer: Buffer.from(uBendFile(0.005, 'preview')) });
+    await waitForFullSolves(page, solved + 1);
+    const status = page.locator('#status');
+    expect(await status.getAttribute('data-level')).toBe('warn');
+    expect(await status.innerText()).toMatch(/^Wall "divider" is thinner than a grid cell near \(.+\) mm \(about 0\.005 mm thick\): it is solved as a wall about one cell/);
+    expect(await status.innerText()).toContain('None of the grid details would resolve it: thicken the wall in the drawing.');
   }, CHECK_MS);
 });

@@ -56,3 +56,21 @@ export function drawnCylinder(d: number, dOverH: number, widthsEachSide: number)
     }],
   });
 }
+
+/**
+ * An invented U-bend test piece (mm), 20 long: inlet on x = 0 below a divider, outlet on x = 0 above it, two channels
+ * 1 mm wide whatever the divider's thickness, the divider ending 1 mm short of the end wall; solved on `gridDetail`.
+ */
+export function uBendFile(divider: number, gridDetail = 'standard'): string {
+  const top = 2 + divider;
+  const at = (x: number, y: number) => ({ at: [x, y] });
+  const wall = (wallName: string) => ({ kind: 'line', role: 'wall', wallName });
+  const outline = {
+    vertices: [at(0, 0), at(20, 0), at(20, top), at(0, top), at(0, 1 + divider), at(19, 1 + divider), at(19, 1), at(0, 1)],
+    edges: [wall('floor'), wall('end wall'), wall('roof'), { kind: 'line', role: 'outlet' }, wall('divider'), wall('divider'), wall('divider'), { kind: 'line', role: 'inlet' }],
+  };
+  return JSON.stringify({
+    format: 'portwright-section', version: 3, title: `U-bend test piece, ${divider} mm divider`, units: 'mm', activeVariant: 'bend',
+    settings: { gridDetail }, variants: [{ name: 'bend', note: '', section: { outline, islands: [] } }],
+  });
+}
