@@ -20,7 +20,8 @@ import { buildSettingsPanel, type SettingsGroup } from './app/settings-panel.ts'
 import { StatusLine } from './app/status.ts';
 import { loadDocument } from './document/load.ts';
 import type { PortDocument } from './document/types.ts';
-import { activeSection, applyEdit, type CommandName } from './editor/index.ts';
+import { activeSection, activeVariant, applyEdit, type CommandName } from './editor/index.ts';
+import { deckLine } from './parts/index.ts';
 import { defaultTolerance, sectionBounds, sectionToDomain } from './geometry/index.ts';
 import type { FlowDomain } from './solver/types.ts';
 import { FlowView } from './view/flow-view.ts';
@@ -102,7 +103,7 @@ function solve(doc: PortDocument, cause: ChangeCause): void {
   view.setInteractive(dragging);
   // Mid-drag the outline is drawn with the field solved for it (onField), not over the last one.
   if (!dragging) picture.outline(domain);
-  const reading = { units: doc.units, slowFraction: settings.slowFraction, inletMeanSpeedMs: settings.inletSpeedMs };
+  const reading = { units: doc.units, slowFraction: settings.slowFraction, inletMeanSpeedMs: settings.inletSpeedMs, deck: deckLine(activeVariant(doc)) ?? undefined };
   if (cause === 'drag') void live.request(domain, 'drag', DRAG_CELLS, null);
   else void live.request(domain, 'full', CELLS_BY_DETAIL[settings.gridDetail], reading);
 }

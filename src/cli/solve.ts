@@ -3,7 +3,7 @@
 import type { PortDocument, Variant } from '../document/index.ts';
 import { GeometryError } from '../geometry/index.ts';
 import { DEFAULT_MAX_ITERATIONS, DEFAULT_TOLERANCE, FlowSetupError, solveFlow, type FlowDomain } from '../solver/index.ts';
-import { PartsError, breathingSummary, partsNotes } from '../parts/index.ts';
+import { PartsError, breathingSummary, deckLine, partsNotes } from '../parts/index.ts';
 import { readFlow, readingSummary } from '../solver/reading/index.ts';
 import { EXIT_OK, type CliIO, type Command } from './command.ts';
 import { UserError } from './errors.ts';
@@ -41,7 +41,7 @@ function solveVariant(options: SolveArgs, io: CliIO): SolvedVariant {
   }
   const tolerance = options.tolerance ?? DEFAULT_TOLERANCE;
   const result = solve(domain, options.cells, tolerance, where, document.units);
-  const summary = readingSummary(readFlow(domain, result, { units: document.units }));
+  const summary = readingSummary(readFlow(domain, result, { units: document.units, deck: deckLine(variant) ?? undefined }));
   // Converged unless the cap came first with the residual still above the tolerance.
   const converged = result.iterations < DEFAULT_MAX_ITERATIONS || result.residual <= tolerance;
   const breathing = breathingSummary(variant, document.units);

@@ -1,18 +1,22 @@
 /** Slow zones: cells that move far below the mean speed of their own station, and how much of the section they are. */
 import type { CutGrid } from '../types.ts';
-import type { SlowZones, Station } from './types.ts';
+import { pastDeck } from './deck.ts';
+import type { DeckLine, SlowZones, Station } from './types.ts';
 
 /**
  * Marks solved cells whose speed ratio is below `slowFraction` times their station's mean speed ratio. A cell's
  * station mean comes from its potential, linear between the two stations around it (held constant beyond the first
  * and last). Shares are fluid-area weighted (cell fraction); the port share counts only cells with potential above
- * `valvePhi` (every cell when it is null).
+ * `valvePhi` (every cell when it is null). Cells whose centre lies past `deck` (the test bore) are not judged: never
+ * marked and left out of both shares.
  * @param phi cell potential, row-major i + j * nx, NaN where not solved
  * @param speedRatio cell speed ratio, row-major i + j * nx, NaN where not solved
  */
 export function slowZones(
   grid: CutGrid, phi: Float64Array, speedRatio: Float64Array, stations: readonly Station[], slowFraction: number, valvePhi: number | null,
+  deck: DeckLine | null = null,
 ): SlowZones {
+  const { nx, h, x0, y0 } = grid;
   const mask = new Uint8Array(grid.nx * grid.ny);
   const port = new Uint8Array(grid.nx * grid.ny);
   const levels = stations.map((s) => s.phi);
@@ -21,6 +25,7 @@ export function slowZones(
   for (let c = 0; c < mask.length; c++) {
     const f = grid.cellFraction[c];
     if (!(f > 0) || !Number.isFinite(phi[c]) || !Number.isFinite(speedRatio[c])) continue;
+    if (deck !== null && pastDeck(deck, x0 + ((c % nx) + 0.5) * h, y0 + (Math.floor(c / nx) + 0.5) * h) > 0) continue;
     const inPort = valvePhi === null || phi[c] > valvePhi;
     const slow = stations.length > 0 && speedRatio[c] < slowFraction * interpolateDescending(levels, means, phi[c]);
     area += f;
