@@ -5,7 +5,7 @@ import { autosaver, restoreAutosave } from './app/autosave.ts';
 import { DocumentStore, type ChangeCause } from './app/document-store.ts';
 import { EditorController } from './app/editor-controller.ts';
 import { FlowPicture } from './app/flow-picture.ts';
-import { caseSetup, CELLS_BY_DETAIL, DRAG_CELLS } from './study/index.ts';
+import { caseSetup, CELLS_BY_DETAIL, DRAG_CELLS, type CaseSetup } from './study/index.ts';
 import { fillHelp } from './app/help-overlay.ts';
 import { LiveSolve } from './app/live-solve.ts';
 import { mountBenchPanel } from './app/bench-panel.ts';
@@ -85,10 +85,10 @@ function showThinWalls(reply: FieldReply): void {
   status.show(reply.thinWalls.map((wall) => thinWallNote(wall, { units: store.doc.units, spacing: reply.h, choices })).join(' '), 'warn');
 }
 
-/** The domain the study pipeline sets up for this grid (the command's `solve` sets up the same one). */
-function currentDomain(doc: PortDocument, cells: number): FlowDomain | null {
+/** The case the study pipeline sets up for this grid (the command's `solve` sets up the same one). */
+function currentCase(doc: PortDocument, cells: number): CaseSetup | null {
   try {
-    return caseSetup(doc, { targetCells: cells }).domain;
+    return caseSetup(doc, { targetCells: cells });
   } catch (error) {
     status.show(error instanceof Error ? error.message : String(error), 'error');
     readings.showStale('This reading belongs to the last shape that solved.');
@@ -99,8 +99,8 @@ function currentDomain(doc: PortDocument, cells: number): FlowDomain | null {
 function solve(doc: PortDocument, cause: ChangeCause): void {
   editTime = performance.now();
   const cells = cause === 'drag' ? DRAG_CELLS : CELLS_BY_DETAIL[settings.gridDetail];
-  const domain = currentDomain(doc, cells);
-  if (!domain) {
+  const setup = currentCase(doc, cells);
+  if (!setup) {
     // Let go on a shape that cannot be solved (e.g. the valve shut on its seat): the drag's drawing still ends.
     if (cause !== 'drag') dragging = false;
     view.setInteractive(dragging);
@@ -110,8 +110,9 @@ function solve(doc: PortDocument, cause: ChangeCause): void {
   dragging = cause === 'drag';
   view.setInteractive(dragging);
   // Mid-drag the outline is drawn with the field solved for it (onField), not over the last one.
+  const { domain } = setup;
   if (!dragging) picture.outline(domain);
-  const reading = { units: doc.units, slowFraction: settings.slowFraction, inletMeanSpeedMs: settings.inletSpeedMs };
+  const reading = { ...setup.reading, slowFraction: settings.slowFraction, inletMeanSpeedMs: settings.inletSpeedMs };
   if (cause === 'drag') void live.request(domain, 'drag', cells, null);
   else void live.request(domain, 'full', cells, reading);
 }

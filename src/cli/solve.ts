@@ -62,7 +62,7 @@ function setUp(build: () => CaseSetup, file: string): CaseSetup {
 
 function solve(setup: CaseSetup, tolerance: number, where: string, units: string): SolvedCase & { reading: NonNullable<SolvedCase['reading']> } {
   try {
-    const solved = solveCase(setup.domain, { targetCells: setup.targetCells, tolerance }, { units: units as 'mm' | 'inch' });
+    const solved = solveCase(setup.domain, { targetCells: setup.targetCells, tolerance }, setup.reading);
     return { result: solved.result, reading: solved.reading! };
   } catch (error) {
     if (!(error instanceof FlowSetupError)) throw error;

@@ -6,6 +6,7 @@ export { valveFrame, toSection, fromSection, type ValveFrame } from './frame.ts'
 export { VALVE_ISLAND_NAME, valveIsland, valveHalfProfile, type ValveHalfProfile } from './valve-head.ts';
 export { seatRing, throatDiameter, deckLevel, type SeatRing } from './seat.ts';
 export { boreBox, manifoldSide, type BoreBox } from './bore.ts';
+export { deckLine, type DeckLine } from './deck.ts';
 export { anchorIndices, pocketAnchors, type PocketAnchors } from './anchors.ts';
 export { partsNotes, SHROUD_CLEARANCE_SHARE, type PartsNote, type PartsNoteOptions } from './notes.ts';
 export {

@@ -2,7 +2,8 @@
 
 import type { PortDocument, Section, Variant } from '../document/types.ts';
 import { sectionBounds, sectionToDomain } from '../geometry/index.ts';
-import { sectionForSolver } from '../parts/index.ts';
+import { deckLine, sectionForSolver } from '../parts/index.ts';
+import type { ReadingOptions } from '../solver/reading/index.ts';
 import { gridFrame } from '../solver/rasterise/frame.ts';
 import type { FlowDomain } from '../solver/types.ts';
 import { StudyError } from './errors.ts';
@@ -28,6 +29,9 @@ export interface CaseSetup {
   readonly targetCells: number;
   /** Chordal tolerance the curved edges were flattened within, document units. */
   readonly flattenTolerance: number;
+  /** The reading options that come from the document (units, and the deck past which nothing is judged); a caller
+   * adds its own settings (slow share, inlet speed) on top. */
+  readonly reading: ReadingOptions;
 }
 
 /**
@@ -41,7 +45,8 @@ export function caseSetup(doc: PortDocument, spec: CaseSpec): CaseSetup {
   const section = sectionForSolver(variant);
   const flattenTolerance = solveFlattenTolerance(section, spec.targetCells);
   const domain = sectionToDomain(section, flattenTolerance, doc.units);
-  return { variant, section, domain, targetCells: spec.targetCells, flattenTolerance };
+  const reading: ReadingOptions = { units: doc.units, deck: deckLine(variant) ?? undefined };
+  return { variant, section, domain, targetCells: spec.targetCells, flattenTolerance, reading };
 }
 
 /**

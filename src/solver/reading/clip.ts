@@ -1,5 +1,7 @@
 /** Clips polylines to the fluid: inside the outline, outside every island. */
-import type { RingIndex } from './ring-index.ts';
+import type { BoundaryHit, RingIndex } from './ring-index.ts';
+
+const NO_HITS: readonly BoundaryHit[] = [];
 
 /**
  * The parts of each polyline that lie in the fluid. Each segment is cut where it crosses the boundary and each
@@ -18,9 +20,10 @@ export function clipToFluid(lines: readonly Float64Array[], index: RingIndex): F
     };
     for (let k = 0; k + 3 < line.length; k += 2) {
       const ax = line[k], ay = line[k + 1], bx = line[k + 2], by = line[k + 3];
-      const cuts = [0, ...index.crossings(ax, ay, bx, by).map((hit) => hit.t), 1];
-      for (let p = 0; p + 1 < cuts.length; p++) {
-        const t0 = cuts[p], t1 = cuts[p + 1];
+      // most segments are far from any boundary: no cut, one piece, and a cheap inside test
+      const hits = index.clearBox(ax, ay, bx, by) ? NO_HITS : index.crossings(ax, ay, bx, by);
+      for (let p = 0; p <= hits.length; p++) {
+        const t0 = p === 0 ? 0 : hits[p - 1].t, t1 = p === hits.length ? 1 : hits[p].t;
         if (t1 - t0 <= 0) continue;
         const tm = 0.5 * (t0 + t1);
         if (!index.contains(ax + tm * (bx - ax), ay + tm * (by - ay))) {

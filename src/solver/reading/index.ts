@@ -30,7 +30,7 @@ export function readFlow(domain: FlowDomain, result: SolveResult, options: Readi
   const phi = extendedPhi(grid, result.phi);
   const index = new RingIndex(grid, domain);
   const input = { domain, grid, phi, index, conductance: result.conductance, inletMeanSpeed: result.inletMeanSpeed };
-  const stations = buildStations(input, evenLevels(settings.stationCount));
+  const stations = buildStations(input, evenLevels(settings.stationCount), settings.deck);
   const valvePhi = valvePotential(domain, grid, phi, settings.valveIslandName);
   const paths = downstreamWalls(result.walls, grid, phi);
   const valve = valvePhi === null ? null : { phi: valvePhi, name: settings.valveIslandName };
@@ -38,7 +38,7 @@ export function readFlow(domain: FlowDomain, result: SolveResult, options: Readi
     stations,
     valvePhi,
     tightest: tightestStation(stations, valvePhi),
-    slow: slowZones(grid, result.phi, result.speedRatio, stations, settings.slowFraction, valvePhi),
+    slow: slowZones(grid, result.phi, result.speedRatio, stations, settings.slowFraction, valvePhi, settings.deck),
     overWide: overWideStations(stations, valvePhi, settings.overWideThreshold, settings.overWideWindow),
     walls: paths.map((path) => readWall(path, valve)).filter((w): w is WallReading => w !== null),
     detachments: wallDetachments(paths, settings),

@@ -1,7 +1,7 @@
 /** Defaults and range checks for the flow-reading settings. */
 import { DEFAULT_SHAPE_FACTOR_LIMIT } from '../boundary-layer/march.ts';
 import { ReadingSettingError } from './errors.ts';
-import type { LengthUnits, ReadingOptions } from './types.ts';
+import type { DeckLine, LengthUnits, ReadingOptions } from './types.ts';
 
 /** Metres per document unit for each units label (1 in = 25.4 mm exactly, NIST SP 811). */
 const METRES_PER_UNIT: Readonly<Record<LengthUnits, number>> = { mm: 0.001, inch: 0.0254 };
@@ -22,6 +22,8 @@ export interface ReadingSettings {
   readonly start: 'turbulent' | 'laminar';
   readonly shapeFactorLimit: number;
   readonly streamlineCount: number;
+  /** Past this line nothing is judged; null: everything is. */
+  readonly deck: DeckLine | null;
 }
 
 /** Fills in defaults (see ReadingOptions) and throws ReadingSettingError for a value out of range. */
@@ -49,7 +51,18 @@ export function readingSettings(options: ReadingOptions = {}): ReadingSettings {
     start,
     shapeFactorLimit: inRange('shapeFactorLimit', 'detachment shape factor', options.shapeFactorLimit ?? DEFAULT_SHAPE_FACTOR_LIMIT, 1.5, 4),
     streamlineCount: inRange('streamlineCount', 'number of streamlines', options.streamlineCount ?? 24, 0, 1000, true),
+    deck: deckSetting(options.deck),
   };
+}
+
+/** The deck as given, checked: finite numbers and a normal that points somewhere. */
+function deckSetting(deck: DeckLine | undefined): DeckLine | null {
+  if (deck === undefined) return null;
+  const { x, y, normalX, normalY } = deck;
+  if (![x, y, normalX, normalY].every(Number.isFinite) || Math.hypot(normalX, normalY) === 0) {
+    throw new ReadingSettingError('deck', `The deck line needs a point and a direction into the bore, not (${x}, ${y}) towards (${normalX}, ${normalY}).`);
+  }
+  return { x, y, normalX, normalY };
 }
 
 function inRange(setting: string, label: string, value: number, min: number, max: number, whole = false): number {

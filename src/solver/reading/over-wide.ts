@@ -2,7 +2,8 @@
 import type { OverWideStation, Station } from './types.ts';
 
 /**
- * Flags stations (of those with potential above `valvePhi`: the port, upstream of the valve; all when null) whose
+ * Flags stations (of the judged ones with potential above `valvePhi`: the port, upstream of the valve; all judged
+ * ones when null) whose
  * width exceeds their envelope by more than `threshold` (a share, e.g. 0.1).
  * The envelope is a morphological opening of the width sequence over `window` stations: a running minimum, then a
  * running maximum of that. It follows straight tapers and narrow throats exactly and cuts off any bulge spanning
@@ -11,7 +12,7 @@ import type { OverWideStation, Station } from './types.ts';
  * or longer count as a change of port size, not a bulge.
  */
 export function overWideStations(stations: readonly Station[], valvePhi: number | null, threshold: number, window: number): OverWideStation[] {
-  const picked = stations.map((s, index) => ({ s, index })).filter(({ s }) => valvePhi === null || s.phi > valvePhi);
+  const picked = stations.map((s, index) => ({ s, index })).filter(({ s }) => s.judged && (valvePhi === null || s.phi > valvePhi));
   const envelope = opening(picked.map(({ s }) => s.width), (window - 1) / 2);
   const out: OverWideStation[] = [];
   picked.forEach(({ s, index }, k) => {

@@ -38,7 +38,7 @@ export class RingIndex {
       const n = ring.marks.length;
       for (let k = 0; k < n; k++) {
         const m = (k + 1) % n;
-        for (const c of this.cellsOf(ring.xy[2 * k], ring.xy[2 * k + 1], ring.xy[2 * m], ring.xy[2 * m + 1])) triples.push(c, r, k);
+        this.fileSegment(ring.xy[2 * k], ring.xy[2 * k + 1], ring.xy[2 * m], ring.xy[2 * m + 1], r, k, triples);
       }
     });
     const cells = grid.nx * grid.ny;
@@ -61,6 +61,23 @@ export class RingIndex {
     if (i < 0 || j < 0 || i >= this.grid.nx || j >= this.grid.ny) return false;
     const c = i + j * this.grid.nx;
     return this.start[c + 1] > this.start[c];
+  }
+
+  /**
+   * True when no boundary segment is filed in any cell of the bounding box of (ax, ay)-(bx, by): the segment then
+   * crosses no boundary (crossings would find none) and lies wholly in fluid or wholly in solid.
+   */
+  clearBox(ax: number, ay: number, bx: number, by: number): boolean {
+    const { nx, ny, h, x0, y0 } = this.grid;
+    const i0 = Math.max(0, Math.floor((Math.min(ax, bx) - x0) / h));
+    const i1 = Math.min(nx - 1, Math.floor((Math.max(ax, bx) - x0) / h));
+    const j0 = Math.max(0, Math.floor((Math.min(ay, by) - y0) / h));
+    const j1 = Math.min(ny - 1, Math.floor((Math.max(ay, by) - y0) / h));
+    for (let j = j0; j <= j1; j++) {
+      const row = j * nx;
+      if (this.start[row + i1 + 1] > this.start[row + i0]) return false;
+    }
+    return true;
   }
 
   /**
@@ -139,23 +156,26 @@ export class RingIndex {
     return t >= 0 && t <= 1 && u >= 0 && u < 1 ? t : null;
   }
 
-  /** Cells a segment passes through: for each grid row it spans, the columns of its piece in that row. */
-  private cellsOf(ax: number, ay: number, bx: number, by: number): number[] {
+  /**
+   * Files segment k of ring r in every cell it passes through (for each grid row it spans, the columns of its piece
+   * in that row) by pushing (cell, r, k) onto `triples`.
+   */
+  private fileSegment(ax: number, ay: number, bx: number, by: number, r: number, k: number, triples: number[]): void {
     const { nx, ny, h, x0, y0 } = this.grid;
-    const out: number[] = [];
+    const flat = by === ay;
     // a hair of slack so a segment lying on a grid line is filed in the cells on both sides
     const ja = Math.floor((Math.min(ay, by) - y0) / h - SLACK);
     const jb = Math.floor((Math.max(ay, by) - y0) / h + SLACK);
     for (let j = Math.max(0, ja); j <= Math.min(ny - 1, jb); j++) {
       const ylo = Math.max(Math.min(ay, by), y0 + j * h);
       const yhi = Math.min(Math.max(ay, by), y0 + (j + 1) * h);
-      const xAt = (y: number): number => (by === ay ? ax : ax + ((y - ay) * (bx - ax)) / (by - ay));
-      const xa = by === ay ? Math.min(ax, bx) : Math.min(xAt(ylo), xAt(yhi));
-      const xb = by === ay ? Math.max(ax, bx) : Math.max(xAt(ylo), xAt(yhi));
+      const xlo = flat ? ax : ax + ((ylo - ay) * (bx - ax)) / (by - ay);
+      const xhi = flat ? ax : ax + ((yhi - ay) * (bx - ax)) / (by - ay);
+      const xa = flat ? Math.min(ax, bx) : Math.min(xlo, xhi);
+      const xb = flat ? Math.max(ax, bx) : Math.max(xlo, xhi);
       const i0 = Math.max(0, Math.floor((xa - x0) / h - SLACK));
       const i1 = Math.min(nx - 1, Math.floor((xb - x0) / h + SLACK));
-      for (let i = i0; i <= i1; i++) out.push(i + j * nx);
+      for (let i = i0; i <= i1; i++) triples.push(i + j * nx, r, k);
     }
-    return out;
   }
 }

@@ -1,36 +1,47 @@
 /** Slow zones: cells that move far below the mean speed of their own station, and how much of the section they are. */
 import type { CutGrid } from '../types.ts';
-import type { SlowZones, Station } from './types.ts';
+import { pastDeck } from './deck.ts';
+import type { DeckLine, SlowZones, Station } from './types.ts';
 
 /**
  * Marks solved cells whose speed ratio is below `slowFraction` times their station's mean speed ratio. A cell's
  * station mean comes from its potential, linear between the two stations around it (held constant beyond the first
  * and last). Shares are fluid-area weighted (cell fraction); the port share counts only cells with potential above
- * `valvePhi` (every cell when it is null).
+ * `valvePhi` (every cell when it is null). Cells whose centre lies past `deck` (the test bore) are not judged: never
+ * marked and left out of both shares.
  * @param phi cell potential, row-major i + j * nx, NaN where not solved
  * @param speedRatio cell speed ratio, row-major i + j * nx, NaN where not solved
  */
 export function slowZones(
   grid: CutGrid, phi: Float64Array, speedRatio: Float64Array, stations: readonly Station[], slowFraction: number, valvePhi: number | null,
+  deck: DeckLine | null = null,
 ): SlowZones {
-  const mask = new Uint8Array(grid.nx * grid.ny);
-  const port = new Uint8Array(grid.nx * grid.ny);
+  const { nx, ny, h, x0, y0 } = grid;
+  const mask = new Uint8Array(nx * ny);
+  const port = new Uint8Array(nx * ny);
   const levels = stations.map((s) => s.phi);
   const means = stations.map((s) => s.meanSpeedRatio);
+  // a cell at or above this speed ratio cannot be slow whatever its station (the margin covers rounding in the
+  // interpolation), so the station mean is looked up only for the few cells below it
+  const neverSlow = stations.length > 0 ? slowFraction * Math.max(...means) * (1 + 1e-9) : -Infinity;
   let area = 0, slowArea = 0, portArea = 0, portSlowArea = 0;
-  for (let c = 0; c < mask.length; c++) {
-    const f = grid.cellFraction[c];
-    if (!(f > 0) || !Number.isFinite(phi[c]) || !Number.isFinite(speedRatio[c])) continue;
-    const inPort = valvePhi === null || phi[c] > valvePhi;
-    const slow = stations.length > 0 && speedRatio[c] < slowFraction * interpolateDescending(levels, means, phi[c]);
-    area += f;
-    if (inPort) portArea += f;
-    if (!slow) continue;
-    mask[c] = 1;
-    slowArea += f;
-    if (inPort) {
-      portSlowArea += f;
-      port[c] = 1;
+  for (let j = 0; j < ny; j++) {
+    for (let i = 0; i < nx; i++) {
+      const c = i + j * nx;
+      const f = grid.cellFraction[c];
+      const u = speedRatio[c], p = phi[c];
+      if (!(f > 0) || !Number.isFinite(p) || !Number.isFinite(u)) continue;
+      if (deck !== null && pastDeck(deck, x0 + (i + 0.5) * h, y0 + (j + 0.5) * h) > 0) continue;
+      const inPort = valvePhi === null || p > valvePhi;
+      area += f;
+      if (inPort) portArea += f;
+      if (!(u < neverSlow) || !(u < slowFraction * interpolateDescending(levels, means, p))) continue;
+      mask[c] = 1;
+      slowArea += f;
+      if (inPort) {
+        portSlowArea += f;
+        port[c] = 1;
+      }
     }
   }
   return {
@@ -62,6 +73,12 @@ function largestPatch(grid: CutGrid, marked: Uint8Array): SlowZones['largest'] {
   const seen = new Uint8Array(marked.length);
   const stack: number[] = [];
   let best: { cells: number[]; area: number } | null = null;
+  const visit = (n: number): void => {
+    if (marked[n] && !seen[n]) {
+      seen[n] = 1;
+      stack.push(n);
+    }
+  };
   for (let start = 0; start < marked.length; start++) {
     if (!marked[start] || seen[start]) continue;
     const cells: number[] = [];
@@ -73,13 +90,11 @@ function largestPatch(grid: CutGrid, marked: Uint8Array): SlowZones['largest'] {
       cells.push(c);
       area += grid.cellFraction[c] * h * h;
       const i = c % nx, j = (c - i) / nx;
-      for (const [di, dj] of [[1, 0], [-1, 0], [0, 1], [0, -1]]) {
-        const a = i + di, b = j + dj, n = a + b * nx;
-        if (a >= 0 && b >= 0 && a < nx && b < ny && marked[n] && !seen[n]) {
-          seen[n] = 1;
-          stack.push(n);
-        }
-      }
+      // edge neighbours in the order right, left, up, down
+      if (i + 1 < nx) visit(c + 1);
+      if (i > 0) visit(c - 1);
+      if (j + 1 < ny) visit(c + nx);
+      if (j > 0) visit(c - nx);
     }
     if (best === null || area > best.area) best = { cells, area };
   }

@@ -3,8 +3,9 @@ import { MARK_INLET } from '../types.ts';
 import type { CutGrid, FlowDomain } from '../types.ts';
 import { clipToFluid, totalLength } from './clip.ts';
 import { levelLines } from './contour.ts';
+import { lengthPastDeck } from './deck.ts';
 import type { RingIndex } from './ring-index.ts';
-import type { Station, TightestStation } from './types.ts';
+import type { DeckLine, Station, TightestStation } from './types.ts';
 
 /** What a station needs from the solve. */
 export interface StationInputs {
@@ -21,9 +22,10 @@ export interface StationInputs {
 
 /**
  * Stations at the given potentials (normally falling from near 1 to near 0). A level that finds no line in the
- * fluid is left out. Distances run along the path inlet centre -> each station's centroid in turn.
+ * fluid is left out. Distances run along the path inlet centre -> each station's centroid in turn. A station with
+ * more than half its length past `deck` (in the test bore) is not judged; every station is without a deck.
  */
-export function buildStations(input: StationInputs, levels: readonly number[]): Station[] {
+export function buildStations(input: StationInputs, levels: readonly number[], deck: DeckLine | null = null): Station[] {
   const raw = levelLines(input.grid, input.phi, levels);
   const pieces = levels
     .map((phi, k) => {
@@ -40,7 +42,8 @@ export function buildStations(input: StationInputs, levels: readonly number[]): 
     py = midY;
     const [x1, y1, x2, y2] = farthestEnds(lines, midX, midY);
     const meanSpeedRatio = input.conductance / width / input.inletMeanSpeed;
-    return { phi, lines, width, meanSpeedRatio, midX, midY, distanceFromInlet: distance, x1, y1, x2, y2 };
+    const judged = deck === null || lengthPastDeck(deck, lines) <= 0.5 * width;
+    return { phi, lines, width, meanSpeedRatio, midX, midY, distanceFromInlet: distance, x1, y1, x2, y2, judged };
   });
 }
 
@@ -49,11 +52,11 @@ export function evenLevels(count: number): number[] {
   return Array.from({ length: count }, (_, k) => 1 - (k + 0.5) / count);
 }
 
-/** The narrowest station with potential above `valvePhi` (all stations when it is null); null when there is none. */
+/** The narrowest judged station with potential above `valvePhi` (any when it is null); null when there is none. */
 export function tightestStation(stations: readonly Station[], valvePhi: number | null): TightestStation | null {
   let best = -1;
   stations.forEach((s, k) => {
-    if ((valvePhi === null || s.phi > valvePhi) && (best < 0 || s.width < stations[best].width)) best = k;
+    if (s.judged && (valvePhi === null || s.phi > valvePhi) && (best < 0 || s.width < stations[best].width)) best = k;
   });
   if (best < 0) return null;
   const { width, x1, y1, x2, y2, distanceFromInlet } = stations[best];

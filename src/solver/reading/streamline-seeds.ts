@@ -28,11 +28,12 @@ interface InletPiece {
  */
 export function equalFluxSeeds(domain: FlowDomain, grid: CutGrid, phi: Float64Array, count: number): Seed[] {
   const pieces = inletPieces(domain, grid);
-  const lengthIn = new Float64Array(grid.nx * grid.ny);
-  for (const p of pieces) lengthIn[p.cell] += p.length;
+  // inlet length per cell, only for the few cells the inlet passes through
+  const lengthIn = new Map<number, number>();
+  for (const p of pieces) lengthIn.set(p.cell, (lengthIn.get(p.cell) ?? 0) + p.length);
   const fluxOf = pieces.map((p) => {
     const q = grid.inletCoupling[p.cell] * (1 - phi[p.cell]);
-    return Number.isFinite(q) && q > 0 ? (q * p.length) / lengthIn[p.cell] : 0;
+    return Number.isFinite(q) && q > 0 ? (q * p.length) / lengthIn.get(p.cell)! : 0;
   });
   const total = fluxOf.reduce((a, b) => a + b, 0);
   if (!(total > 0)) return [];

@@ -43,8 +43,19 @@ function traceOne(seed: Seed, grid: CutGrid, field: FaceVelocity, index: RingInd
       break;
     }
     // next to the outlet or a wall the midpoint can fall outside the solved cells: take the plain step there
-    if (!direction(field, x + 0.5 * ds * d1[0], y + 0.5 * ds * d1[1], d2)) d2.splice(0, 2, d1[0], d1[1]);
-    const moved = move(index, x, y, x + ds * d2[0], y + ds * d2[1], grid.h);
+    if (!direction(field, x + 0.5 * ds * d1[0], y + 0.5 * ds * d1[1], d2)) {
+      d2[0] = d1[0];
+      d2[1] = d1[1];
+    }
+    const bx = x + ds * d2[0], by = y + ds * d2[1];
+    // away from the boundary the step is taken as it is (move would find no crossing)
+    if (index.clearBox(x, y, bx, by)) {
+      xy.push(bx, by);
+      x = bx;
+      y = by;
+      continue;
+    }
+    const moved = move(index, x, y, bx, by, grid.h);
     xy.push(moved.x, moved.y);
     x = moved.x;
     y = moved.y;

@@ -5,7 +5,7 @@ import type { DetachmentMethod, FlowReading } from './types.ts';
 export interface ReadingSummary {
   readonly stations: { phi: number; width: number; meanSpeedRatio: number; distanceFromInlet: number }[];
   readonly tightest: { width: number; x1: number; y1: number; x2: number; y2: number; distanceFromInlet: number } | null;
-  /** slow share of the whole section */
+  /** slow share of the judged section: all of it, or the part above the deck when the reading was given one */
   readonly slowShare: number;
   /** slow share of the port ahead of the valve */
   readonly portSlowShare: number;

@@ -32,6 +32,22 @@ export interface ReadingOptions {
   readonly shapeFactorLimit?: number;
   /** Number of streamlines, seeded at equal flux along the inlet; default 24. */
   readonly streamlineCount?: number;
+  /**
+   * The deck, where the flow bench's test bore meets the head. Past it lies the bore, which is no part of the port:
+   * its cells and stations are read and drawn but not judged (no slow zone, over-wide or tightest station, finding).
+   * Default none: the whole section is judged. Wall speeds and the wall march are the same either way.
+   */
+  readonly deck?: DeckLine;
+}
+
+/** A line and the side of it that is not judged: the half-plane (p - point) . normal > 0, document units. */
+export interface DeckLine {
+  /** A point on the line. */
+  readonly x: number;
+  readonly y: number;
+  /** Normal pointing into the part not judged (the test bore); need not be of unit length. */
+  readonly normalX: number;
+  readonly normalY: number;
 }
 
 /** One equipotential cross-section. */
@@ -54,6 +70,11 @@ export interface Station {
   readonly y1: number;
   readonly x2: number;
   readonly y2: number;
+  /**
+   * False when more than half of the station's length lies past the deck (in the test bore): such a station is
+   * drawn and read but not judged (never tightest or over-wide). True when there is no deck.
+   */
+  readonly judged: boolean;
 }
 
 /** The narrowest station upstream of the valve: its width, span ends and distance from the inlet (see Station). */
@@ -63,11 +84,14 @@ export interface TightestStation extends Pick<Station, 'width' | 'x1' | 'y1' | '
 }
 
 export interface SlowZones {
-  /** 1 where a solved cell moves below slowFraction of its station's mean speed, else 0; row-major i + j * nx. */
+  /**
+   * 1 where a solved cell moves below slowFraction of its station's mean speed, else 0; row-major i + j * nx.
+   * Cells whose centre lies past the deck (see ReadingOptions.deck) are never marked.
+   */
   readonly mask: Uint8Array;
-  /** Slow fluid area / solved fluid area over the whole section (cell fraction weighted), 0..1. */
+  /** Slow fluid area / solved fluid area over the judged section (all of it without a deck; cell fraction weighted), 0..1. */
   readonly share: number;
-  /** The same share over the port only (cells upstream of the valve; the whole section when there is no valve). */
+  /** The same share over the port only (judged cells upstream of the valve; all judged cells when there is no valve). */
   readonly portShare: number;
   /** Centre and radius (document units) of the largest joined slow patch in the port, or null when there is none. */
   readonly largest: { readonly x: number; readonly y: number; readonly radius: number; readonly area: number } | null;

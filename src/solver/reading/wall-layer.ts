@@ -44,8 +44,13 @@ export interface MarchedStretch {
  * thickness (a layer that starts where the flow divides on an island); 'carried' = the layer handed on from upstream.
  */
 export function marchStretch(wall: WallColumns, from: number, start: LayerStart, settings: ReadingSettings): MarchedStretch {
-  const sM = wall.s.slice(from).map((s) => s * settings.metresPerUnit);
-  const speedMs = wall.ratio.slice(from).map((u) => u * settings.inletMeanSpeedMs);
+  const n = wall.s.length - from;
+  const sM = new Float64Array(n);
+  const speedMs = new Float64Array(n);
+  for (let q = 0; q < n; q++) {
+    sM[q] = wall.s[from + q] * settings.metresPerUnit;
+    speedMs[q] = wall.ratio[from + q] * settings.inletMeanSpeedMs;
+  }
   const state = start.kind === 'born' ? 'laminar' : start.kind === 'carried' ? (start.turbulent ? 'turbulent' : 'laminar') : settings.start;
   const march = marchWall({
     sM, speedMs, nuM2s: settings.kinematicViscosityM2s, start: state, shapeFactorLimit: settings.shapeFactorLimit,
@@ -87,8 +92,9 @@ export function usableSamples(samples: Float64Array): WallColumns {
     if (keep.length > 0 && !(samples[4 * q + 2] > samples[4 * keep[keep.length - 1] + 2])) continue;
     keep.push(q);
   }
-  const column = (offset: number) => Float64Array.from(keep, (q) => samples[4 * q + offset]);
-  return { x: column(0), y: column(1), s: column(2), ratio: column(3) };
+  const columns = [0, 1, 2, 3].map(() => new Float64Array(keep.length));
+  for (let k = 0; k < keep.length; k++) for (let offset = 0; offset < 4; offset++) columns[offset][k] = samples[4 * keep[k] + offset];
+  return { x: columns[0], y: columns[1], s: columns[2], ratio: columns[3] };
 }
 
 /** The point at arc length s along the samples (linear between them, clamped to the ends). */

@@ -28,7 +28,8 @@ export function downstreamWalls(walls: readonly WallSpeeds[], grid: CutGrid, phi
   for (const wall of walls) {
     const count = wall.samples.length / 4;
     if (count < 2) continue;
-    const potential = Float64Array.from({ length: count }, (_, q) => sampleCells(grid, phi, wall.samples[4 * q], wall.samples[4 * q + 1]));
+    const potential = new Float64Array(count);
+    for (let q = 0; q < count; q++) potential[q] = sampleCells(grid, phi, wall.samples[4 * q], wall.samples[4 * q + 1]);
     if (isClosed(wall.samples) && count >= 4) out.push(...splitClosed(wall, potential));
     else {
       const flip = potential[count - 1] > potential[0];

@@ -11,7 +11,7 @@ describe('reading settings', () => {
     expect(s).toMatchObject({
       stationCount: 40, valveIslandName: 'valve head', slowFraction: 0.35, overWideThreshold: 0.1, overWideWindow: 5,
       units: 'mm', metresPerUnit: 0.001, inletMeanSpeedMs: 60, kinematicViscosityM2s: 1.5e-5, start: 'turbulent',
-      shapeFactorLimit: 2.4, streamlineCount: 24,
+      shapeFactorLimit: 2.4, streamlineCount: 24, deck: null,
     });
     // 1 in = 25.4 mm exactly [pub: NIST SP 811, appendix B]
     expect(readingSettings({ units: 'inch' }).metresPerUnit).toBe(0.0254);
@@ -25,6 +25,8 @@ describe('reading settings', () => {
     [{ units: 'cm' as 'mm' }, 'units', /'mm' or 'inch', not 'cm'/],
     [{ start: 'calm' as 'laminar' }, 'start', /'turbulent' or 'laminar', not 'calm'/],
     [{ inletMeanSpeedMs: Number.NaN }, 'inletMeanSpeedMs', /mean inlet speed \(m\/s\) is NaN/],
+    [{ deck: { x: 0, y: Number.NaN, normalX: 0, normalY: -1 } }, 'deck', /deck line needs a point and a direction into the bore/],
+    [{ deck: { x: 0, y: 0, normalX: 0, normalY: 0 } }, 'deck', /towards \(0, 0\)/],
   ])('rejects %o with a message naming the setting', (options, setting, message) => {
     try {
       readingSettings(options);
