@@ -34,7 +34,8 @@ export const solveCommand: Command = {
 function solveVariant(options: SolveArgs, io: CliIO): SolvedVariant {
   const { document } = readSectionFile(options.file);
   const cells = options.cells ?? fileCells(document);
-  const setup = setUp(() => caseSetup(document, { variant: options.variant, targetCells: cells }), options.file);
+  const named = `${options.file}, variant "${options.variant ?? document.activeVariant}"`;
+  const setup = setUp(() => caseSetup(document, { variant: options.variant, targetCells: cells }), options.file, named);
   const { variant, domain } = setup;
   const where = `${options.file}, variant "${variant.name}"`;
   if (cells >= PROGRESS_CELLS) {
@@ -50,13 +51,14 @@ function solveVariant(options: SolveArgs, io: CliIO): SolvedVariant {
   return { title: document.title, variant: variant.name, units: document.units, domain, result, summary, converged, breathing, notes };
 }
 
-/** The case set up, or the porter's problem with it as a UserError naming the file. */
-function setUp(build: () => CaseSetup, file: string): CaseSetup {
+/** The case set up, or the porter's problem with it as a UserError naming the file (and the variant, for its geometry). */
+function setUp(build: () => CaseSetup, file: string, named: string): CaseSetup {
   try {
     return build();
   } catch (error) {
-    if (!(error instanceof GeometryError) && !(error instanceof PartsError) && !(error instanceof StudyError)) throw error;
-    throw new UserError(`${file}: ${error.message}`);
+    if (error instanceof StudyError) throw new UserError(`${file}: ${error.message}`);
+    if (!(error instanceof GeometryError) && !(error instanceof PartsError)) throw error;
+    throw new UserError(`${named}: ${error.message}`);
   }
 }
 

@@ -96,8 +96,10 @@ function sampleRun(run: WallRun, fitter: WallFitter, speedScale: number, spacing
     const tx = (xy[2 * m] - xy[2 * k]) / len;
     const ty = (xy[2 * m + 1] - xy[2 * k + 1]) / len;
     const along = Math.min(Math.max(s - segStart, 0), len);
-    const x = xy[2 * k] + tx * along;
-    const y = xy[2 * k + 1] + ty * along;
+    // A closed run ends exactly where it began (summed lengths would miss it by rounding), so readers can tell it is closed.
+    const end = run.closed && q === count && count > 0;
+    const x = end ? out[0] : xy[2 * k] + tx * along;
+    const y = end ? out[1] : xy[2 * k + 1] + ty * along;
     out[4 * q] = x;
     out[4 * q + 1] = y;
     out[4 * q + 2] = s;

@@ -14,7 +14,12 @@ afterAll(() => files.cleanup());
 interface SolvedJson {
   readonly grid: { readonly spacing: number };
   readonly conductance: number;
-  readonly walls: readonly { readonly name: string; readonly samples: readonly (readonly number[])[] }[];
+  readonly walls: readonly {
+    readonly name: string;
+    readonly samples: readonly (readonly number[])[];
+    /** A closed island's two paths from where the flow divides. */
+    readonly sides?: readonly { readonly side: string }[];
+  }[];
 }
 
 async function solveJson(path: string, cells: number): Promise<SolvedJson> {
@@ -84,4 +89,16 @@ describe('cylinder between parallel walls drawn as an arc island (REFERENCES.md 
       expect(Math.abs(errors[1])).toBeLessThan(Math.abs(errors[0]));
     });
   }
+});
+
+describe('a closed island drawn with arcs', () => {
+  it('is read as one closed wall split where the flow divides, on every grid (its last sample is exactly its first)', async () => {
+    const path = files.write('cylinder-closed.json', drawnCylinder(10, 0.3, 2));
+    for (const cells of [20_000, 40_000, 90_000]) {
+      const json = await solveJson(path, cells);
+      const samples = samplesOf(json, 'cylinder');
+      expect(samples.at(-1)!.slice(0, 2), `${cells} cells`).toEqual(samples[0].slice(0, 2));
+      expect(json.walls.find((w) => w.name === 'cylinder')!.sides?.map((s) => s.side), `${cells} cells`).toEqual(['left of the flow', 'right of the flow']);
+    }
+  });
 });
