@@ -24,7 +24,7 @@ export class ReadingsPanel {
       if (wall.inPort) rows.push([`${wall.name}, fastest wall flow`, `${wall.peak.speedRatio.toFixed(3)}`, `${slug(wall.name)}-peak`]);
     }
     if (reading?.tightest) rows.push(['tightest section', `${reading.tightest.width.toFixed(digits)} ${units} wide`, 'tightest']);
-    if (reading) rows.push(['slow share', `${(100 * reading.slow.share).toFixed(1)}% of the section`, 'slow-share']);
+    if (reading) rows.push(['slow share', `${(100 * reading.slow.share).toFixed(1)}% of the port and bowl`, 'slow-share']);
     rows.push(['conductance', `${reply.conductance.toFixed(4)} (per unit depth)`]);
     this.host.replaceChildren(heading('Readings'), readingTable(rows), ...this.findings(reading?.findings ?? []));
   }

@@ -28,7 +28,7 @@ export function solveReportLines(report: SolveReport): string[] {
     `  flux imbalance: ${report.fluxImbalance.toExponential(1)} (worst station against the total)`,
     `  peak speed ratio: ${peakText(report.peak, f)}`,
     `  tightest section ahead of the valve: ${tightestText(report, f)}`,
-    `  slow share: ${percent(report.slowShare)} of the section, ${percent(report.portSlowShare)} of the port`,
+    `  slow share: ${percent(report.slowShare)} of the port and bowl, ${percent(report.portSlowShare)} ahead of the valve (the test bore is not judged)`,
     ...report.thinWalls.map((wall) => `  warning: ${wall.note}`),
     '',
     'walls (fastest wall flow, as a speed ratio; where the flow likely leaves the wall, measured from its upstream end):',

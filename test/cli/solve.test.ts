@@ -113,7 +113,7 @@ describe('solve, readable summary', () => {
     expect(out).toMatch(/conductance: 0\.\d+ per unit depth/);
     expect(out).toMatch(/peak speed ratio: \d\.\d\d at \(\d+\.\d, -?\d+\.\d\) mm/);
     expect(out).toMatch(/tightest section ahead of the valve: \d+\.\d mm wide/);
-    expect(out).toMatch(/slow share: [\d.]+% of the section/);
+    expect(out).toMatch(/slow share: [\d.]+% of the port and bowl, [\d.]+% ahead of the valve \(the test bore is not judged\)/);
     expect(out).toMatch(/\n {2}short side +\d\.\d\d {2}(stays on|leaves at)/);
     expect(out).toMatch(/\n {4}left of the flow: fastest \d\.\d\d/);
     expect(out).toMatch(/\(20\.0, 51\.0\) mm: potential 0\.\d{4}, speed ratio \d\.\d\d/);

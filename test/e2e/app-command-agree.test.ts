@@ -52,7 +52,7 @@ describe('app and command on the same file', () => {
     const conductanceRow = rows.find((r) => r.startsWith('conductance'));
     expect(conductanceRow, rows.join('\n')).toContain(json.conductance.toFixed(4));
     expect(await cell('tightest')).toBe(`${json.tightest!.width.toFixed(1)} mm wide`);
-    expect(await cell('slow-share')).toBe(`${(100 * json.slowShare).toFixed(1)}% of the section`);
+    expect(await cell('slow-share')).toBe(`${(100 * json.slowShare).toFixed(1)}% of the port and bowl`);
     for (const wall of ['short side', 'long side']) {
       const inJson = json.walls.find((w) => w.name === wall)!;
       expect(await cell(`${slug(wall)}-peak`), wall).toBe(inJson.peakSpeedRatio.toFixed(3));
