@@ -1,5 +1,6 @@
 /** Which cells the solve covers: flood fill over open faces from inlet and outlet, and where a blocked passage closes. */
 import { FlowSetupError, formatLength } from './errors.ts';
+import { uint8Of, type ScratchArrays } from './scratch.ts';
 import type { CutGrid } from './types.ts';
 
 const FROM_INLET = 1;
@@ -13,16 +14,17 @@ const FROM_OUTLET = 2;
  * two sides come closest (where the passage closes), and 'no-inlet' / 'no-outlet' when no fluid cell
  * lies beside them at all.
  * A passage that pinches shut inside a single cell is not seen: the cell joins both sides.
+ * With `scratch`, the mask is taken from there (valid until the next call with the same scratch).
  */
-export function connectedCells(grid: CutGrid): Uint8Array {
+export function connectedCells(grid: CutGrid, scratch: ScratchArrays | null = null): Uint8Array {
   const size = grid.nx * grid.ny;
-  const reached = new Uint8Array(size);
+  const reached = uint8Of(scratch, 'connect.reached', size);
   const fill = new ScanlineFill(grid, reached);
   const fromInlet = fill.flood(grid.inletCoupling, FROM_INLET, null);
   if (fromInlet === 0) {
     throw new FlowSetupError('no-inlet', 'No open space lies beside the inlet: the inlet edge runs along solid metal.');
   }
-  const mask = new Uint8Array(size);
+  const mask = uint8Of(scratch, 'connect.mask', size);
   const fromOutlet = fill.flood(grid.outletCoupling, FROM_OUTLET, mask);
   if (fromOutlet === 0) {
     throw new FlowSetupError('no-outlet', 'No open space lies beside the outlet: the outlet edge runs along solid metal.');
