@@ -74,13 +74,15 @@ export function assemble(grid: CutGrid, mask: Uint8Array): Stencil {
   const cells: number[] = [];
   const coupling: number[] = [];
   const { inletCoupling, outletCoupling } = grid;
-  for (let k = 0; k < nx * ny; k++) {
+  const consider = (k: number) => {
     const c = inletCoupling[k] + outletCoupling[k];
     if (c > 0 && mask[k] === 1) {
       cells.push(k);
       coupling.push(c);
     }
-  }
+  };
+  if (grid.coupledCells) grid.coupledCells.forEach(consider);
+  else for (let k = 0; k < nx * ny; k++) consider(k);
   return { nx, ny, dirichlet: dirichletList(cells, coupling, nx, ny), faceX, faceY, active: mask, ...rowSpans(mask, nx, ny) };
 }
 
@@ -98,6 +100,15 @@ export function diagonalOf(s: Stencil, k: number, coupling: number): number {
 export function writeRhs(grid: CutGrid, mask: Uint8Array, b: Float64Array): number {
   const inlet = grid.inletCoupling;
   let sum = 0;
+  if (grid.coupledCells) {
+    b.fill(0);
+    for (const k of grid.coupledCells) {
+      const v = mask[k] === 1 ? inlet[k] : 0;
+      b[k] = v;
+      sum += v * v;
+    }
+    return Math.sqrt(sum);
+  }
   for (let k = 0; k < b.length; k++) {
     const v = mask[k] === 1 ? inlet[k] : 0;
     b[k] = v;

@@ -61,9 +61,13 @@ class ScanlineFill {
    * (i + j * nx), also sets 1 there in every newly marked cell that carries both bits.
    */
   flood(seed: Float64Array, bit: number, mask: Uint8Array | null): number {
-    const { nx, openX } = this.grid;
+    const { nx, openX, coupledCells } = this.grid;
     const reached = this.reached;
-    for (let c = 0; c < seed.length; c++) if (seed[c] > 0 && (reached[c] & bit) === 0) this.push(c);
+    if (coupledCells) {
+      for (const c of coupledCells) if (seed[c] > 0 && (reached[c] & bit) === 0) this.push(c);
+    } else {
+      for (let c = 0; c < seed.length; c++) if (seed[c] > 0 && (reached[c] & bit) === 0) this.push(c);
+    }
     let count = 0;
     while (this.top > 0) {
       const c = this.stack[--this.top];
