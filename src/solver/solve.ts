@@ -20,7 +20,8 @@ export const DEFAULT_MAX_ITERATIONS = 200;
 
 /**
  * The work arrays of solveFlow and solveOnGrid (mask, multigrid levels, conjugate-gradient vectors), kept for the
- * next solve of the same size; none of them is part of a result.
+ * next solve of the same size; none of them is part of a result. A solve must not start another from its callbacks
+ * (shouldStop, onIteration): the two would share these arrays.
  */
 const SCRATCH = new ScratchArrays();
 
