@@ -22,8 +22,9 @@ import { float32Of, type ScratchArrays } from '../scratch.ts';
 const FULL_STRENGTH_DIAGONAL = 2;
 
 /**
- * Per coarse cell: min(1, diagonal / FULL_STRENGTH_DIAGONAL), 0 in excluded cells; I + J * ncx. Interpolation
- * weights only (used identically by prolongation and restriction), so single precision is enough.
+ * Per coarse cell: min(1, diagonal / FULL_STRENGTH_DIAGONAL), 0 in excluded cells; I + J * ncx (taken from `scratch`,
+ * slot named by the coarse level's `depth`, when given). Interpolation weights only (used identically by
+ * prolongation and restriction), so single precision is enough.
  */
 export function interpolationStrength(c: Stencil, scratch: ScratchArrays | null = null, depth = 1): Float32Array {
   const { nx, ny, active, dirichlet } = c;
