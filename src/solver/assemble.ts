@@ -42,17 +42,11 @@ export function rowSpans(active: Uint8Array, nx: number, ny: number): { rowStart
   const rowStart = new Int32Array(ny);
   const rowEnd = new Int32Array(ny);
   for (let j = 0; j < ny; j++) {
-    const row = j * nx;
-    let first = -1;
-    let last = -1;
-    for (let i = 0; i < nx; i++) {
-      if (active[row + i] !== 1) continue;
-      if (first < 0) first = i;
-      last = i;
-    }
+    const row = active.subarray(j * nx, (j + 1) * nx);
+    const first = row.indexOf(1);
     if (first >= 0) {
       rowStart[j] = first;
-      rowEnd[j] = last + 1;
+      rowEnd[j] = row.lastIndexOf(1) + 1;
     }
   }
   return { rowStart, rowEnd };
@@ -74,13 +68,15 @@ export function assemble(grid: CutGrid, mask: Uint8Array): Stencil {
   const cells: number[] = [];
   const coupling: number[] = [];
   const { inletCoupling, outletCoupling } = grid;
-  for (let k = 0; k < nx * ny; k++) {
+  const consider = (k: number) => {
     const c = inletCoupling[k] + outletCoupling[k];
     if (c > 0 && mask[k] === 1) {
       cells.push(k);
       coupling.push(c);
     }
-  }
+  };
+  if (grid.coupledCells) grid.coupledCells.forEach(consider);
+  else for (let k = 0; k < nx * ny; k++) consider(k);
   return { nx, ny, dirichlet: dirichletList(cells, coupling, nx, ny), faceX, faceY, active: mask, ...rowSpans(mask, nx, ny) };
 }
 
@@ -98,6 +94,15 @@ export function diagonalOf(s: Stencil, k: number, coupling: number): number {
 export function writeRhs(grid: CutGrid, mask: Uint8Array, b: Float64Array): number {
   const inlet = grid.inletCoupling;
   let sum = 0;
+  if (grid.coupledCells) {
+    b.fill(0);
+    for (const k of grid.coupledCells) {
+      const v = mask[k] === 1 ? inlet[k] : 0;
+      b[k] = v;
+      sum += v * v;
+    }
+    return Math.sqrt(sum);
+  }
   for (let k = 0; k < b.length; k++) {
     const v = mask[k] === 1 ? inlet[k] : 0;
     b[k] = v;
@@ -111,18 +116,15 @@ function facesSealed(grid: CutGrid, mask: Uint8Array): boolean {
   const { nx, ny, openX, openY } = grid;
   for (let j = 0; j < ny; j++) {
     const rowX = j * (nx + 1);
-    for (let i = 0; i <= nx; i++) {
-      const west = i > 0 ? mask[i - 1 + j * nx] : 0;
-      const east = i < nx ? mask[i + j * nx] : 0;
-      if (openX[rowX + i] !== 0 && (west === 0 || east === 0)) return false;
+    const rowK = j * nx;
+    if (openX[rowX] !== 0 || openX[rowX + nx] !== 0) return false; // the grid's left and right edges
+    for (let i = 1; i < nx; i++) {
+      if (openX[rowX + i] !== 0 && (mask[rowK + i - 1] & mask[rowK + i]) === 0) return false;
     }
   }
-  for (let j = 0; j <= ny; j++) {
-    for (let i = 0; i < nx; i++) {
-      const south = j > 0 ? mask[i + (j - 1) * nx] : 0;
-      const north = j < ny ? mask[i + j * nx] : 0;
-      if (openY[i + j * nx] !== 0 && (south === 0 || north === 0)) return false;
-    }
+  for (let i = 0; i < nx; i++) if (openY[i] !== 0 || openY[ny * nx + i] !== 0) return false; // bottom and top edges
+  for (let k = nx; k < ny * nx; k++) {
+    if (openY[k] !== 0 && (mask[k - nx] & mask[k]) === 0) return false;
   }
   return true;
 }

@@ -1,5 +1,6 @@
 /** Which cells the solve covers: flood fill over open faces from inlet and outlet, and where a blocked passage closes. */
 import { FlowSetupError, formatLength } from './errors.ts';
+import { uint8Of, type ScratchArrays } from './scratch.ts';
 import type { CutGrid } from './types.ts';
 
 const FROM_INLET = 1;
@@ -13,28 +14,22 @@ const FROM_OUTLET = 2;
  * two sides come closest (where the passage closes), and 'no-inlet' / 'no-outlet' when no fluid cell
  * lies beside them at all.
  * A passage that pinches shut inside a single cell is not seen: the cell joins both sides.
+ * With `scratch`, the mask is taken from there (valid until the next call with the same scratch).
  */
-export function connectedCells(grid: CutGrid): Uint8Array {
+export function connectedCells(grid: CutGrid, scratch: ScratchArrays | null = null): Uint8Array {
   const size = grid.nx * grid.ny;
-  const reached = new Uint8Array(size);
-  const stack = new Int32Array(size);
-  const fromInlet = flood(grid, grid.inletCoupling, FROM_INLET, reached, stack);
+  const reached = uint8Of(scratch, 'connect.reached', size);
+  const fill = new ScanlineFill(grid, reached);
+  const fromInlet = fill.flood(grid.inletCoupling, FROM_INLET, null);
   if (fromInlet === 0) {
     throw new FlowSetupError('no-inlet', 'No open space lies beside the inlet: the inlet edge runs along solid metal.');
   }
-  const fromOutlet = flood(grid, grid.outletCoupling, FROM_OUTLET, reached, stack);
+  const mask = uint8Of(scratch, 'connect.mask', size);
+  const fromOutlet = fill.flood(grid.outletCoupling, FROM_OUTLET, mask);
   if (fromOutlet === 0) {
     throw new FlowSetupError('no-outlet', 'No open space lies beside the outlet: the outlet edge runs along solid metal.');
   }
-  const mask = new Uint8Array(size);
-  let joined = 0;
-  for (let c = 0; c < size; c++) {
-    if (reached[c] === (FROM_INLET | FROM_OUTLET)) {
-      mask[c] = 1;
-      joined++;
-    }
-  }
-  if (joined === 0) {
+  if (fill.joined === 0) {
     const [x, y] = closingPoint(grid, reached);
     throw new FlowSetupError(
       'blocked',
@@ -46,33 +41,81 @@ export function connectedCells(grid: CutGrid): Uint8Array {
   return mask;
 }
 
-/** Marks `bit` on every cell reachable through open faces from a cell whose `seed` is positive; returns the count. */
-function flood(grid: CutGrid, seed: Float64Array, bit: number, reached: Uint8Array, stack: Int32Array): number {
-  const { nx, openX, openY } = grid;
-  let top = 0;
-  for (let c = 0; c < seed.length; c++) {
-    if (seed[c] > 0 && (reached[c] & bit) === 0) {
-      reached[c] |= bit;
-      stack[top++] = c;
+/**
+ * Scanline flood over open faces: a popped cell is widened to its whole run along the row (cells joined by open
+ * x-faces), the run is marked at once, and the rows above and below are searched under the run for unreached cells
+ * behind open y-faces (one push per run found there). Work is proportional to the fluid cells reached, not the grid.
+ * Rasterise guarantees a face is open only between two fluid cells, and never on the grid border.
+ */
+class ScanlineFill {
+  /** Cells to widen, i + j * nx; grows when full. */
+  private stack = new Int32Array(1024);
+  private top = 0;
+  /** Cells marked with both bits by the last flood that was given a mask. */
+  joined = 0;
+
+  constructor(private readonly grid: CutGrid, private readonly reached: Uint8Array) {}
+
+  /**
+   * Marks `bit` on every cell reachable from a cell whose `seed` is positive; returns the count. With `mask`
+   * (i + j * nx), also sets 1 there in every newly marked cell that carries both bits.
+   */
+  flood(seed: Float64Array, bit: number, mask: Uint8Array | null): number {
+    const { nx, openX, coupledCells } = this.grid;
+    const reached = this.reached;
+    if (coupledCells) {
+      for (const c of coupledCells) if (seed[c] > 0 && (reached[c] & bit) === 0) this.push(c);
+    } else {
+      for (let c = 0; c < seed.length; c++) if (seed[c] > 0 && (reached[c] & bit) === 0) this.push(c);
+    }
+    let count = 0;
+    while (this.top > 0) {
+      const c = this.stack[--this.top];
+      if ((reached[c] & bit) !== 0) continue;
+      const j = (c / nx) | 0; // the x-face left of cell k in row j is k + j
+      let a = c;
+      while (openX[a + j] > 0 && (reached[a - 1] & bit) === 0) a--;
+      let b = c;
+      while (openX[b + 1 + j] > 0 && (reached[b + 1] & bit) === 0) b++;
+      for (let k = a; k <= b; k++) {
+        const both = (reached[k] |= bit) === (FROM_INLET | FROM_OUTLET);
+        if (mask !== null && both) {
+          mask[k] = 1;
+          this.joined++;
+        }
+      }
+      count += b - a + 1;
+      if (j > 0) this.pushBeside(a, b, j - 1, bit);
+      if (j + 1 < this.grid.ny) this.pushBeside(a, b, j + 1, bit);
+    }
+    return count;
+  }
+
+  /**
+   * Pushes one cell of each unreached run of row jn (the row above or below) that touches cells a..b of the
+   * popped run through an open y-face.
+   */
+  private pushBeside(a: number, b: number, jn: number, bit: number): void {
+    const { nx, openX, openY } = this.grid;
+    const step = jn * nx - (a - (a % nx)); // from a cell of the run to the cell across
+    const face = step > 0 ? step : 0; // y-face of cell k: k (south) or k + nx (north)
+    let inRun = false;
+    for (let k = a; k <= b; k++) {
+      const n = k + step;
+      const open = openY[k + face] > 0 && (this.reached[n] & bit) === 0;
+      if (open && !(inRun && openX[n + jn] > 0)) this.push(n);
+      inRun = open;
     }
   }
-  let count = top;
-  while (top > 0) {
-    const c = stack[--top];
-    const j = Math.floor(c / nx);
-    const xFace = c + j; // x-face on the left of cell c: i + j * (nx + 1)
-    // Rasterise guarantees a face is open only between two fluid cells, and never on the grid border.
-    for (let side = 0; side < 4; side++) {
-      const open = side === 0 ? openX[xFace] : side === 1 ? openX[xFace + 1] : side === 2 ? openY[c] : openY[c + nx];
-      if (!(open > 0)) continue;
-      const next = side === 0 ? c - 1 : side === 1 ? c + 1 : side === 2 ? c - nx : c + nx;
-      if ((reached[next] & bit) !== 0) continue;
-      reached[next] |= bit;
-      stack[top++] = next;
-      count++;
+
+  private push(c: number): void {
+    if (this.top === this.stack.length) {
+      const grown = new Int32Array(2 * this.stack.length);
+      grown.set(this.stack);
+      this.stack = grown;
     }
+    this.stack[this.top++] = c;
   }
-  return count;
 }
 
 /**

@@ -4,7 +4,7 @@ import { connectedCells } from './connectivity.ts';
 import { buildMultigrid } from './multigrid/multigrid.ts';
 import { fullMultigridStart } from './multigrid/full-multigrid.ts';
 import { pcg } from './pcg/pcg.ts';
-import { paddedVector, residual } from './pcg/operator.ts';
+import { residual } from './pcg/operator.ts';
 import { rasterise } from './rasterise/rasterise.ts';
 import { STATION_COUNT, stationFluxes, worstImbalance } from './stations-flux.ts';
 import { MARK_INLET, type CutGrid, type FlowDomain, type SolveOptions, type SolveResult } from './types.ts';
@@ -13,9 +13,17 @@ import { markedLength } from './rasterise/checks.ts';
 import { peakSpeed, sharpConvexCorners } from './velocity-peak.ts';
 import { wallSpeeds } from './wall-speeds.ts';
 import { warmStartGuess } from './warm-start.ts';
+import { ScratchArrays } from './scratch.ts';
 
 export const DEFAULT_TOLERANCE = 1e-8;
 export const DEFAULT_MAX_ITERATIONS = 200;
+
+/**
+ * The work arrays of solveFlow and solveOnGrid (mask, multigrid levels, conjugate-gradient vectors), kept for the
+ * next solve of the same size; none of them is part of a result. A solve must not start another from its callbacks
+ * (shouldStop, onIteration): the two would share these arrays.
+ */
+const SCRATCH = new ScratchArrays();
 
 /** Thrown when shouldStop ended the solve: a newer request replaced this one. */
 export class SolveSupersededError extends Error {
@@ -55,7 +63,7 @@ export type GridSolution = Omit<SolveResult, 'walls' | 'thinWalls'> & {
 export function solveFlow(domain: FlowDomain, options: SolveOptions): SolveResult {
   const grid = rasterise(domain, options.targetCells);
   stopIfSuperseded(options.shouldStop);
-  const mask = connectedCells(grid);
+  const mask = connectedCells(grid, SCRATCH);
   const solution = solveOnGrid(grid, {
     inletLength: markedLength(domain, MARK_INLET),
     tolerance: options.tolerance,
@@ -80,13 +88,14 @@ function stopIfSuperseded(shouldStop: (() => boolean) | undefined, iterations = 
 export function solveOnGrid(grid: CutGrid, options: GridSolveOptions): GridSolution {
   if (!(options.inletLength > 0)) throw new RangeError(`inletLength must be positive, got ${options.inletLength}`);
   const { nx, ny } = grid;
-  const mask = options.mask ?? connectedCells(grid);
+  const mask = options.mask ?? connectedCells(grid, SCRATCH);
   const stencil = assemble(grid, mask);
   const phi = new Float64Array(nx * ny);
   const r = new Float64Array(nx * ny);
   const bNorm = writeRhs(grid, mask, r);
-  const work = { p: paddedVector(nx, ny), z: paddedVector(nx, ny) };
-  const mg = buildMultigrid(stencil);
+  const padded = nx * (ny + 2); // cell k at k + nx (paddedVector)
+  const work = { p: SCRATCH.float64('pcg.p', padded), z: SCRATCH.float64('pcg.z', padded) };
+  const mg = buildMultigrid(stencil, { scratch: SCRATCH });
   // From an earlier field when given (the refine-after-drag path), else from the coarse levels' own solution.
   if (options.warmStart) warmStartGuess(options.warmStart, grid, mask, phi);
   else fullMultigridStart(mg, r, phi, work.z);

@@ -4,6 +4,9 @@ import { assemble, writeRhs } from '../../src/solver/assemble.ts';
 import { paddedVector, residual } from '../../src/solver/pcg/operator.ts';
 import type { CutGrid } from '../../src/solver/types.ts';
 import { channelGrid, fluidMask } from './hand-grids.ts';
+import { connectedCells } from '../../src/solver/connectivity.ts';
+import { rasterise } from '../../src/solver/rasterise/rasterise.ts';
+import { bend } from './rasterise/shapes.ts';
 
 /** The dense matrix of the stencil, by applying the solver's own residual b - A x with b = 0 to unit vectors. */
 function denseOf(grid: CutGrid, mask: Uint8Array): number[][] {
@@ -70,5 +73,24 @@ describe('assemble', () => {
     const s = assemble(grid, fluidMask(grid));
     expect(s.faceX).toBe(grid.openX);
     expect(s.faceY).toBe(grid.openY);
+  });
+});
+
+describe('assemble and writeRhs with the list of coupled cells', () => {
+  it('give the same Dirichlet list and right-hand side as a scan of the whole coupling arrays', () => {
+    const grid = rasterise(bend(1, 2, 64), 4096);
+    expect(grid.coupledCells?.length).toBeGreaterThan(0);
+    const scanned: CutGrid = { ...grid, coupledCells: undefined };
+    const mask = connectedCells(grid);
+    const listed = assemble(grid, mask);
+    const whole = assemble(scanned, mask);
+    expect(Array.from(listed.dirichlet.cells)).toEqual(Array.from(whole.dirichlet.cells));
+    expect(Array.from(listed.dirichlet.coupling)).toEqual(Array.from(whole.dirichlet.coupling));
+    const b1 = new Float64Array(grid.nx * grid.ny).fill(7); // writeRhs must clear what was there
+    const b2 = new Float64Array(grid.nx * grid.ny);
+    expect(writeRhs(grid, mask, b1)).toBe(writeRhs(scanned, mask, b2));
+    expect(Array.from(b1)).toEqual(Array.from(b2));
+    const each = new Set(grid.coupledCells);
+    grid.inletCoupling.forEach((c, k) => { if (c + grid.outletCoupling[k] > 0) expect(each.has(k)).toBe(true); });
   });
 });

@@ -1,10 +1,12 @@
 /** Connectivity: blocked passages and where they close, dead pockets, baffles and a port with its valve. */
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { connectedCells } from '../../src/solver/connectivity.ts';
 import { FlowSetupError } from '../../src/solver/errors.ts';
 import { rasterise } from '../../src/solver/rasterise/rasterise.ts';
 import { MARK_INLET, MARK_OUTLET, MARK_WALL } from '../../src/solver/types.ts';
 import type { CutGrid } from '../../src/solver/types.ts';
+import { channelGrid } from './hand-grids.ts';
 import { domainOf, portSection, ringOf } from './rasterise/shapes.ts';
 import type { Pt } from './rasterise/shapes.ts';
 
@@ -122,5 +124,57 @@ describe('connectedCells: a port with its valve', () => {
       solved += mask[c];
     }
     expect(solved).toBe(fluid);
+  });
+});
+
+/** Plain cell-by-cell flood over open faces: the definition connectedCells' scanline fill must agree with. */
+function referenceMask(grid: CutGrid): Uint8Array {
+  const { nx, ny, openX, openY } = grid;
+  const reach = (seed: Float64Array): Uint8Array => {
+    const seen = new Uint8Array(nx * ny);
+    const stack: number[] = [];
+    seed.forEach((v, c) => { if (v > 0) { seen[c] = 1; stack.push(c); } });
+    while (stack.length > 0) {
+      const c = stack.pop()!;
+      const i = c % nx;
+      const j = (c - i) / nx;
+      const steps: [boolean, number][] = [
+        [i > 0 && openX[c + j] > 0, c - 1], [i < nx - 1 && openX[c + j + 1] > 0, c + 1],
+        [j > 0 && openY[c] > 0, c - nx], [j < ny - 1 && openY[c + nx] > 0, c + nx],
+      ];
+      for (const [open, next] of steps) if (open && seen[next] === 0) { seen[next] = 1; stack.push(next); }
+    }
+    return seen;
+  };
+  const a = reach(grid.inletCoupling);
+  const b = reach(grid.outletCoupling);
+  return a.map((v, c) => v & b[c]);
+}
+
+describe('connectedCells: the scanline fill', () => {
+  it('marks the same cells as a cell-by-cell flood on random mazes, or both find no passage', () => {
+    // Mazes: a random share of solid cells and of closed faces (baffles) in a channel; many have dead pockets,
+    // forks and blocked passages.
+    const maze = fc.record({
+      nx: fc.integer({ min: 2, max: 24 }), ny: fc.integer({ min: 1, max: 24 }),
+      solidShare: fc.double({ min: 0, max: 0.5, noNaN: true }), closedShare: fc.double({ min: 0, max: 0.7, noNaN: true }), seed: fc.integer({ min: 1, max: 2 ** 30 }),
+    });
+    fc.assert(
+      fc.property(maze, ({ nx, ny, solidShare, closedShare, seed }) => {
+        let state = seed;
+        const random = () => ((state = (state * 1103515245 + 12345) % 2 ** 31) / 2 ** 31);
+        const solid = Array.from({ length: nx * ny }, () => random() < solidShare);
+        const grid = channelGrid(nx, ny, 1, (i, j) => solid[i + j * nx]);
+        grid.openX.forEach((_, f) => { if (random() < closedShare) grid.openX[f] = 0; });
+        grid.openY.forEach((_, f) => { if (random() < closedShare / 4) grid.openY[f] = 0; });
+        const expected = referenceMask(grid);
+        if (expected.every((v) => v === 0)) {
+          expect(() => connectedCells(grid)).toThrow(FlowSetupError);
+        } else {
+          expect(Array.from(connectedCells(grid))).toEqual(Array.from(expected));
+        }
+      }),
+      { seed: 20261205, numRuns: 300 },
+    );
   });
 });

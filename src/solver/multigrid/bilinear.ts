@@ -16,17 +16,19 @@
  * against about 0.3 at every size with these (test/solver/multigrid.test.ts).
  */
 import { diagonalOf, type Stencil } from '../assemble.ts';
+import { float32Of, type ScratchArrays } from '../scratch.ts';
 
 /** Coarse cells whose diagonal (face sum + coupling) reaches this take full weight; 2 keeps wall and corner cells full. */
 const FULL_STRENGTH_DIAGONAL = 2;
 
 /**
- * Per coarse cell: min(1, diagonal / FULL_STRENGTH_DIAGONAL), 0 in excluded cells; I + J * ncx. Interpolation
- * weights only (used identically by prolongation and restriction), so single precision is enough.
+ * Per coarse cell: min(1, diagonal / FULL_STRENGTH_DIAGONAL), 0 in excluded cells; I + J * ncx (taken from `scratch`,
+ * slot named by the coarse level's `depth`, when given). Interpolation weights only (used identically by
+ * prolongation and restriction), so single precision is enough.
  */
-export function interpolationStrength(c: Stencil): Float32Array {
+export function interpolationStrength(c: Stencil, scratch: ScratchArrays | null = null, depth = 1): Float32Array {
   const { nx, ny, active, dirichlet } = c;
-  const out = new Float32Array(nx * ny);
+  const out = float32Of(scratch, `mg${depth}.strength`, nx * ny);
   const scale = 1 / FULL_STRENGTH_DIAGONAL;
   for (let j = 0; j < ny; j++) {
     for (let i = c.rowStart[j], k = i + j * nx, end = c.rowEnd[j]; i < end; i++, k++) {

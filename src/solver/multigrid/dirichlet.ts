@@ -10,6 +10,7 @@
 import { diagonalOf, type Stencil } from '../assemble.ts';
 import { bilinearWeights, interpolationStrength } from './bilinear.ts';
 import { cellResidual } from '../pcg/operator.ts';
+import type { ScratchArrays } from '../scratch.ts';
 
 /** Transfer context of one fine level and its coarse level. */
 export interface TransferPair {
@@ -28,8 +29,9 @@ export interface TransferPair {
   readonly opWeights: Float64Array;
 }
 
-export function transferPair(fine: Stencil, coarse: Stencil, rowN: Int32Array): TransferPair {
-  const strength = interpolationStrength(coarse);
+/** Builds the transfers; the strength array comes from `scratch` (slot named by the coarse level's `depth`) when given. */
+export function transferPair(fine: Stencil, coarse: Stencil, rowN: Int32Array, scratch: ScratchArrays | null = null, depth = 1): TransferPair {
+  const strength = interpolationStrength(coarse, scratch, depth);
   const count = fine.dirichlet.cells.length;
   const selfCells = new Int32Array(4 * count);
   const selfWeights = new Float64Array(4 * count);

@@ -1,6 +1,7 @@
 /** Full-multigrid starting guess: the problem solved on the coarsest level, then carried up one level at a time. */
 import type { Stencil } from '../assemble.ts';
-import { paddedVector, residual } from '../pcg/operator.ts';
+import { residual } from '../pcg/operator.ts';
+import { float64Of } from '../scratch.ts';
 import { prolongRow } from './bilinear.ts';
 import { solveCoarsest } from './coarsest.ts';
 import { applyMultigridAt, type Multigrid } from './multigrid.ts';
@@ -19,17 +20,21 @@ export function fullMultigridStart(mg: Multigrid, b: Float64Array, x: Float64Arr
   if (mg.coarsest === null || depth === 0) return false;
   const rhs = restrictedRhs(mg, b);
   const coarsest = mg.levels[depth].stencil;
-  let below = paddedVector(coarsest.nx, coarsest.ny);
+  // Padded guesses and corrections (cell k at k + nx), residuals i + j * nx, one of each per level.
+  const padded = (slot: string, s: Stencil) => float64Of(mg.scratch, `fmg${slot}`, s.nx * (s.ny + 2));
+  let below = padded(`${depth}.guess`, coarsest);
   solveCoarsest(mg.coarsest, coarsest.nx, rhs[depth], below);
   for (let l = depth - 1; l >= 1; l--) {
     const s = mg.levels[l].stencil;
-    const guess = paddedVector(s.nx, s.ny);
+    const guess = padded(`${l}.guess`, s);
     prolongLevel(mg, l, below, guess);
-    const r = new Float64Array(s.nx * s.ny);
+    const r = float64Of(mg.scratch, `fmg${l}.r`, s.nx * s.ny);
     residual(s, guess, rhs[l], r);
-    const e = paddedVector(s.nx, s.ny);
+    const e = padded(`${l}.e`, s);
     applyMultigridAt(mg, l, r, e);
-    for (let k = s.nx, end = s.nx * (s.ny + 1); k < end; k++) guess[k] += e[k];
+    for (let j = 0; j < s.ny; j++) {
+      for (let k = (j + 1) * s.nx + s.rowStart[j], end = (j + 1) * s.nx + s.rowEnd[j]; k < end; k++) guess[k] += e[k];
+    }
     below = guess;
   }
   const fine = mg.levels[0].stencil;
@@ -45,7 +50,7 @@ function restrictedRhs(mg: Multigrid, b: Float64Array): Float64Array[] {
   for (let l = 0; l + 1 < mg.levels.length; l++) {
     const fine = mg.levels[l].stencil;
     const coarse = mg.levels[l + 1].stencil;
-    const out = new Float64Array(coarse.nx * coarse.ny);
+    const out = float64Of(mg.scratch, `fmg${l + 1}.rhs`, coarse.nx * coarse.ny);
     const { cells } = fine.dirichlet;
     for (let m = 0; m < cells.length; m++) {
       const k = cells[m];

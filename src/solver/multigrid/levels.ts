@@ -1,6 +1,7 @@
 /** Coarse levels by 2x2 cell agglomeration: face conductances and Dirichlet couplings summed, then scaled. */
 import { rowSpans, type Stencil } from '../assemble.ts';
 import { dirichletList } from '../assemble-dirichlet.ts';
+import { float64Of, uint8Of, type ScratchArrays } from '../scratch.ts';
 
 /**
  * Scale applied to the summed couplings of a coarse level.
@@ -16,16 +17,21 @@ import { dirichletList } from '../assemble-dirichlet.ts';
  */
 export const COARSE_SCALE = 0.5;
 
-/** Builds the coarse stencil of `fine` (ncx = ceil(nx / 2), ncy = ceil(ny / 2); odd sizes leave one-child rows). */
-export function coarsen(fine: Stencil, scale: number = COARSE_SCALE): Stencil {
+/**
+ * Builds the coarse stencil of `fine` (ncx = ceil(nx / 2), ncy = ceil(ny / 2); odd sizes leave one-child rows).
+ * Its arrays come from `scratch` (slots named by `depth`, the coarse level's number) when given.
+ */
+export function coarsen(fine: Stencil, scale: number = COARSE_SCALE, scratch: ScratchArrays | null = null, depth = 1): Stencil {
   const { nx, ny } = fine;
   const ncx = (nx + 1) >> 1;
   const ncy = (ny + 1) >> 1;
-  const faceX = coarseFacesX(fine, ncx, ncy, scale);
-  const faceY = coarseFacesY(fine, ncx, ncy, scale);
-  const active = new Uint8Array(ncx * ncy);
+  const faceX = coarseFacesX(fine, float64Of(scratch, `mg${depth}.faceX`, (ncx + 1) * ncy), scale);
+  const faceY = coarseFacesY(fine, float64Of(scratch, `mg${depth}.faceY`, ncx * (ncy + 1)), scale);
+  const active = uint8Of(scratch, `mg${depth}.active`, ncx * ncy);
   for (let j = 0; j < ny; j++) {
-    for (let i = 0; i < nx; i++) if (fine.active[i + j * nx] === 1) active[(i >> 1) + (j >> 1) * ncx] = 1;
+    const row = j * nx;
+    const rowC = (j >> 1) * ncx;
+    for (let i = fine.rowStart[j], end = fine.rowEnd[j]; i < end; i++) if (fine.active[row + i] === 1) active[(i >> 1) + rowC] = 1;
   }
   return { nx: ncx, ny: ncy, dirichlet: coarseDirichlet(fine, ncx, ncy, scale), faceX, faceY, active, ...rowSpans(active, ncx, ncy) };
 }
@@ -43,10 +49,14 @@ function coarseDirichlet(fine: Stencil, ncx: number, ncy: number, scale: number)
   return dirichletList([...sums.keys()], [...sums.values()], ncx, ncy);
 }
 
-/** Coarse x-face I between coarse cells I - 1 and I covers fine x-face 2I in fine rows 2J and 2J + 1. */
-function coarseFacesX(fine: Stencil, ncx: number, ncy: number, scale: number): Float64Array {
+/**
+ * Coarse x-face I between coarse cells I - 1 and I covers fine x-face 2I in fine rows 2J and 2J + 1.
+ * @param out zeroed, (ncx + 1) * ncy, I + J * (ncx + 1).
+ */
+function coarseFacesX(fine: Stencil, out: Float64Array, scale: number): Float64Array {
   const { nx, ny, faceX } = fine;
-  const out = new Float64Array((ncx + 1) * ncy);
+  const ncx = (nx + 1) >> 1;
+  const ncy = (ny + 1) >> 1;
   for (let J = 0; J < ncy; J++) {
     for (let I = 1; I < ncx; I++) {
       const i = 2 * I;
@@ -58,10 +68,14 @@ function coarseFacesX(fine: Stencil, ncx: number, ncy: number, scale: number): F
   return out;
 }
 
-/** Coarse y-face J between coarse rows J - 1 and J covers fine y-face row 2J in fine columns 2I and 2I + 1. */
-function coarseFacesY(fine: Stencil, ncx: number, ncy: number, scale: number): Float64Array {
-  const { nx, faceY } = fine;
-  const out = new Float64Array(ncx * (ncy + 1));
+/**
+ * Coarse y-face J between coarse rows J - 1 and J covers fine y-face row 2J in fine columns 2I and 2I + 1.
+ * @param out zeroed, ncx * (ncy + 1), I + J * ncx.
+ */
+function coarseFacesY(fine: Stencil, out: Float64Array, scale: number): Float64Array {
+  const { nx, ny, faceY } = fine;
+  const ncx = (nx + 1) >> 1;
+  const ncy = (ny + 1) >> 1;
   for (let J = 1; J < ncy; J++) {
     const row = 2 * J * nx;
     for (let I = 0; I < ncx; I++) {

@@ -6,7 +6,8 @@ import { COARSEST_MAX_CELLS, factorCoarsest, solveCoarsest, type CoarsestSolver 
 import { correctProlongCell, correctRestrictCell, transferPair, type TransferPair } from './dirichlet.ts';
 import { COARSE_SCALE, coarsen } from './levels.ts';
 import { rowDot, smoothColour, smoothRedFromZeroRow, smoothRow } from './smooth.ts';
-import { paddedVector } from '../pcg/operator.ts';
+import type { ScratchArrays } from '../scratch.ts';
+import { float64Of } from '../scratch.ts';
 
 interface Level {
   readonly stencil: Stencil;
@@ -27,6 +28,8 @@ export interface Multigrid {
   readonly sweeps: number;
   /** Scale of the coarse couplings (MultigridOptions.coarseScale), for restricting a right-hand side. */
   readonly coarseScale: number;
+  /** Where the hierarchy's arrays came from (MultigridOptions.scratch); the full-multigrid start takes its own there too. */
+  readonly scratch: ScratchArrays | null;
 }
 
 export interface MultigridOptions {
@@ -34,6 +37,11 @@ export interface MultigridOptions {
   readonly sweeps?: number;
   /** Coarse coupling scale; default COARSE_SCALE. */
   readonly coarseScale?: number;
+  /**
+   * Take the coarse levels' arrays from here instead of allocating them; the hierarchy is then valid only until the
+   * next one is built from the same scratch. Default none.
+   */
+  readonly scratch?: ScratchArrays;
 }
 
 /** Sweep pairs on the coarsest level when its direct factor is unavailable. */
@@ -42,19 +50,21 @@ const COARSEST_RELAX_PAIRS = 40;
 /** Builds the hierarchy: halve until the level has at most COARSEST_MAX_CELLS cells, then factor it. */
 export function buildMultigrid(fine: Stencil, options: MultigridOptions = {}): Multigrid {
   const scale = options.coarseScale ?? COARSE_SCALE;
+  const scratch = options.scratch ?? null;
   const levels: Level[] = [];
   let s = fine;
   let x: Float64Array = new Float64Array(0);
   let b: Float64Array = new Float64Array(0);
   while (s.nx * s.ny > COARSEST_MAX_CELLS && (s.nx > 1 || s.ny > 1)) {
-    const c = coarsen(s, scale);
-    levels.push({ stencil: s, x, b, down: transferPair(s, c, neighbourIndex(s.ny, c.ny)) });
+    const depth = levels.length + 1;
+    const c = coarsen(s, scale, scratch, depth);
+    levels.push({ stencil: s, x, b, down: transferPair(s, c, neighbourIndex(s.ny, c.ny), scratch, depth) });
     s = c;
-    x = paddedVector(s.nx, s.ny);
-    b = new Float64Array(s.nx * s.ny);
+    x = float64Of(scratch, `mg${depth}.x`, s.nx * (s.ny + 2)); // padded
+    b = float64Of(scratch, `mg${depth}.b`, s.nx * s.ny);
   }
   levels.push({ stencil: s, x, b, down: null });
-  return { levels, coarsest: factorCoarsest(s), sweeps: Math.max(1, options.sweeps ?? 1), coarseScale: scale };
+  return { levels, coarsest: factorCoarsest(s), sweeps: Math.max(1, options.sweeps ?? 1), coarseScale: scale, scratch };
 }
 
 /**

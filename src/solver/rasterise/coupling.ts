@@ -21,6 +21,8 @@ export interface Couplings {
   readonly inletCoupling: Float64Array;
   /** Conductance to phi = 0 per cell, same layout. */
   readonly outletCoupling: Float64Array;
+  /** Every cell given a coupling (i + j * nx), in no order, with repeats. */
+  readonly touched: readonly number[];
 }
 
 /**
@@ -33,6 +35,7 @@ export interface Couplings {
 export function couplings(rings: readonly GridRing[], fraction: Float64Array, nx: number, ny: number): Couplings {
   const inletCoupling = new Float64Array(nx * ny);
   const outletCoupling = new Float64Array(nx * ny);
+  const touched: number[] = [];
   for (const { uv, ring, sense } of rings) {
     const n = uv.length >> 1;
     for (let k = 0; k < n; k++) {
@@ -54,10 +57,11 @@ export function couplings(rings: readonly GridRing[], fraction: Float64Array, nx
         // A cell whose area rounded to 0 holds no fluid to couple (a sliver below rounding level).
         if (fraction[i + j * nx] === 0) return;
         target[i + j * nx] += pieceCoupling(ua, va, ub, vb, nu, nv, i, j);
+        touched.push(i + j * nx);
       });
     }
   }
-  return { inletCoupling, outletCoupling };
+  return { inletCoupling, outletCoupling, touched };
 }
 
 /**

@@ -35,9 +35,11 @@ export function rasterise(domain: FlowDomain, targetCells: number): RasterGrid {
   const rings = toGridRings(domain, frame);
   const cellFraction = cellFractions(rings, nx, ny);
   const { openX, openY } = faceFractions(rings, cellFraction, nx, ny);
-  const { inletCoupling, outletCoupling } = couplings(rings, cellFraction, nx, ny);
+  const { inletCoupling, outletCoupling, touched } = couplings(rings, cellFraction, nx, ny);
   const split = findSplitCells(rings, cellFraction, nx, ny);
   const thinWalls = thinWallsOf(split, rings, domain.wallNames, frame, (box[2] - box[0]) * (box[3] - box[1]));
   keepLargestPieces(split, rings, { cellFraction, openX, openY, inletCoupling, outletCoupling }, nx);
-  return { ...frame, cellFraction, openX, openY, inletCoupling, outletCoupling, thinWalls };
+  // A split cell keeps a share of its own couplings, so no cell outside `touched` gains one.
+  const coupledCells = Int32Array.from(new Set(touched)).sort().filter((k) => inletCoupling[k] + outletCoupling[k] > 0);
+  return { ...frame, cellFraction, openX, openY, inletCoupling, outletCoupling, coupledCells, thinWalls };
 }
