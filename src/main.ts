@@ -3,6 +3,9 @@ import sampleText from '../samples/short-side-compare.json?raw';
 import { acceptDrops, downloadDocument, pickFile, type FileHandlers } from './app/files.ts';
 import { autosaver, restoreAutosave } from './app/autosave.ts';
 import { DocumentStore, type ChangeCause } from './app/document-store.ts';
+import { checkDocument, documentProblem, plainMessage } from './app/document-check.ts';
+import { clampEdit } from './app/edit-clamp.ts';
+import { mountHistoryControls } from './app/history-controls.ts';
 import { EditorController } from './app/editor-controller.ts';
 import { FlowPicture } from './app/flow-picture.ts';
 import { caseSetup, CELLS_BY_DETAIL, DRAG_CELLS, type CaseSetup } from './study/index.ts';
@@ -20,7 +23,7 @@ import { buildSettingsPanel, type SettingsGroup } from './app/settings-panel.ts'
 import { StatusLine } from './app/status.ts';
 import { loadDocument } from './document/load.ts';
 import type { PortDocument } from './document/types.ts';
-import { activeSection, applyEdit, type CommandName } from './editor/index.ts';
+import { activeSection, applyEdit, EDITS, isEditName, type CommandName } from './editor/index.ts';
 import { sectionBounds } from './geometry/index.ts';
 import { thinWallNote } from './solver/thin-wall-note.ts';
 import type { FlowDomain } from './solver/types.ts';
@@ -37,7 +40,12 @@ const variantSelect = byId<HTMLSelectElement>('variant-select');
 
 const settings = defaultSettings();
 const restored = restoreAutosave();
-const store = new DocumentStore(restored ?? loadDocument(sampleText), applyEdit);
+/** Why the work kept from the last visit was not taken up (it does not build), or null. */
+const restoredProblem = restored === null ? null : documentProblem(restored);
+const store = new DocumentStore(restored !== null && restoredProblem === null ? restored : loadDocument(sampleText), applyEdit, {
+  guard: { check: checkDocument, clamp: clampEdit },
+  label: (name) => (isEditName(name) ? EDITS[name].label : name),
+});
 settings.units = store.doc.units;
 settings.gridDetail = store.doc.settings.gridDetail;
 
@@ -123,9 +131,13 @@ function showDocument(doc: PortDocument): void {
 }
 
 const autosave = autosaver();
+/** The active variant shown before the latest change (an undo that switches variants forgets the selection). */
+let shownVariant = store.doc.activeVariant;
 store.subscribe((doc, cause) => {
-  // An opened file brings its own units and grid detail, and is solved on its own grid as the command solves it.
-  if (cause === 'open') {
+  // An opened file brings its own units and grid detail, and is solved on its own grid as the command solves it;
+  // an undo or redo may bring back other units or another grid detail.
+  const unitsChanged = settings.units !== doc.units || settings.gridDetail !== doc.settings.gridDetail;
+  if (cause === 'open' || (cause === 'history' && unitsChanged)) {
     settings.units = doc.units;
     settings.gridDetail = doc.settings.gridDetail;
   }
@@ -133,10 +145,18 @@ store.subscribe((doc, cause) => {
   autosave(doc);
   // Mid-drag only the field and the handles follow the pointer; panels catch up when the drag ends.
   if (cause === 'drag') return;
+  undoControls.refresh();
+  if (cause === 'history') editor.keepValidSelection(doc.activeVariant !== shownVariant);
+  shownVariant = doc.activeVariant;
   showDocument(doc);
   selectionPanel.show(doc, editor.selection);
   partsPanel.update(doc);
   showPartsNumbers(byId('breathing'), bench, doc);
+  if (cause === 'history' && unitsChanged) {
+    refreshSettingsPanel();
+    view.setUnits(doc.units);
+    view.fitToView(sectionBounds(activeSection(doc)));
+  }
   if (cause === 'open') {
     editor.reset();
     // The settings panel shows the opened file's units and grid detail (it said the old ones before).
@@ -147,8 +167,9 @@ store.subscribe((doc, cause) => {
 });
 
 const fileHandlers: FileHandlers = {
+  // A file with a variant that does not build is refused (the store throws, files.ts reports it by variant).
   onOpened: (doc, name) => {
-    store.replace(doc);
+    store.replace(doc, `Open "${name}"`);
     status.show(`Opened "${name}".`);
   },
   onRejected: (message) => status.show(`${message} Your current work is unchanged.`, 'error'),
@@ -166,9 +187,12 @@ function runCommand(name: CommandName): void {
     case 'open': return pickFile(byId('file-input'), fileHandlers);
     case 'cancel': helpOverlay.hidden = true; return;
     case 'toggleInsertMode': return;
+    case 'undo': return undoControls.undo();
+    case 'redo': return undoControls.redo();
   }
 }
 
+const undoControls = mountHistoryControls(byId('undo-button'), byId('redo-button'), store, (message) => status.show(message));
 const selectionPanel = new SelectionPanel(byId('selection'), (name, args) => tryEdit(name, args, false));
 const editor = new EditorController(viewHost, view, store, {
   onCommand: runCommand,
@@ -241,7 +265,7 @@ function tryEdit(name: string, args: unknown, resetSelection = true): boolean {
     if (resetSelection) editor.reset();
     return true;
   } catch (error) {
-    status.show(error instanceof Error ? error.message : String(error), 'error');
+    status.show(plainMessage(error), 'error');
     return false;
   }
 }
@@ -250,7 +274,8 @@ showDocument(store.doc);
 showPartsNumbers(byId('breathing'), bench, store.doc);
 view.fitToView(sectionBounds(activeSection(store.doc)));
 solve(store.doc, 'open');
-if (restored) status.show('Restored the work from your last visit. Open a sample or a file to start afresh.');
+if (restoredProblem !== null) status.show(`The work kept from your last visit was not opened: ${restoredProblem} The sample is shown instead.`, 'error');
+else if (restored) status.show('Restored the work from your last visit. Open a sample or a file to start afresh.');
 
 // For browser tests and the interaction benchmark: read-only handles on the running app.
 Object.assign(window, { portwright: { store, view, timings, get lastReply() { return lastReply; } } });
