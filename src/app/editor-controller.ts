@@ -165,7 +165,8 @@ export class EditorController {
       const note = this.store.edit(name, args, cause);
       if (note !== undefined) this.hooks.onMessage(note, 'info');
     } catch (error) {
-      this.hooks.onMessage(plainMessage(error), 'error');
+      // A refused drag step is the porter's cue, not a fault: it stays in the status line after the full solve.
+      this.hooks.onMessage(plainMessage(error), cause === 'drag' ? 'info' : 'error');
     }
   }
 
