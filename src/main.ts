@@ -216,8 +216,11 @@ function applySettings(group: SettingsGroup): void {
   if (group === 'reference' && lastReply) picture.field(lastReply);
   if (group === 'solve' || group === 'reading') solve(store.doc, 'edit');
   if (group === 'units' && settings.units !== store.doc.units) {
-    store.edit('setUnits', { units: settings.units }, 'open');
-    status.show(`The drawing is now in ${settings.units === 'mm' ? 'millimetres' : 'inches'}.`);
+    const units = settings.units;
+    // Refused (the converted drawing would not build): the setting goes back to the drawing's units.
+    settings.units = store.doc.units;
+    if (tryEdit('setUnits', { units }, false, 'open')) status.show(`The drawing is now in ${units === 'mm' ? 'millimetres' : 'inches'}.`);
+    else refreshSettingsPanel();
   }
 }
 const gui = buildSettingsPanel(byId('settings-host'), settings, applySettings);
@@ -259,9 +262,9 @@ byId('delete-variant').addEventListener('click', () => {
  * An edit from a button or a typed field; a refused one is said in the status line and the document stays.
  * `resetSelection` when indices may no longer mean the same thing (another variant). True when it was applied.
  */
-function tryEdit(name: string, args: unknown, resetSelection = true): boolean {
+function tryEdit(name: string, args: unknown, resetSelection = true, cause: ChangeCause = 'edit'): boolean {
   try {
-    store.edit(name, args);
+    store.edit(name, args, cause);
     if (resetSelection) editor.reset();
     return true;
   } catch (error) {
