@@ -1,11 +1,12 @@
 /** Portwright in the browser: the one file that wires document, editor, workers and view together. */
 import sampleText from '../samples/short-side-compare.json?raw';
 import { acceptDrops, downloadDocument, pickFile, type FileHandlers } from './app/files.ts';
-import { autosaver, restoreAutosave } from './app/autosave.ts';
-import { DocumentStore, type ChangeCause } from './app/document-store.ts';
-import { checkDocument, documentProblem, plainMessage } from './app/document-check.ts';
-import { clampEdit } from './app/edit-clamp.ts';
+import { autosaver } from './app/autosave.ts';
+import type { ChangeCause } from './app/document-store.ts';
+import { plainMessage } from './app/document-check.ts';
 import { mountHistoryControls } from './app/history-controls.ts';
+import { startStore } from './app/start-document.ts';
+import { wireVariantButtons } from './app/variant-buttons.ts';
 import { EditorController } from './app/editor-controller.ts';
 import { FlowPicture } from './app/flow-picture.ts';
 import { caseSetup, CELLS_BY_DETAIL, DRAG_CELLS, type CaseSetup } from './study/index.ts';
@@ -21,9 +22,8 @@ import { ReadingsPanel } from './app/readings-panel.ts';
 import { defaultSettings, parseLevels } from './app/settings.ts';
 import { buildSettingsPanel, type SettingsGroup } from './app/settings-panel.ts';
 import { StatusLine } from './app/status.ts';
-import { loadDocument } from './document/load.ts';
 import type { PortDocument } from './document/types.ts';
-import { activeSection, applyEdit, EDITS, isEditName, type CommandName } from './editor/index.ts';
+import { activeSection, type CommandName } from './editor/index.ts';
 import { sectionBounds } from './geometry/index.ts';
 import { thinWallNote } from './solver/thin-wall-note.ts';
 import type { FlowDomain } from './solver/types.ts';
@@ -39,13 +39,7 @@ const helpOverlay = byId<HTMLElement>('help-overlay');
 const variantSelect = byId<HTMLSelectElement>('variant-select');
 
 const settings = defaultSettings();
-const restored = restoreAutosave();
-/** Why the work kept from the last visit was not taken up (it does not build), or null. */
-const restoredProblem = restored === null ? null : documentProblem(restored);
-const store = new DocumentStore(restored !== null && restoredProblem === null ? restored : loadDocument(sampleText), applyEdit, {
-  guard: { check: checkDocument, clamp: clampEdit },
-  label: (name) => (isEditName(name) ? EDITS[name].label : name),
-});
+const { store, greeting } = startStore(sampleText);
 settings.units = store.doc.units;
 settings.gridDetail = store.doc.settings.gridDetail;
 
@@ -247,16 +241,8 @@ helpOverlay.addEventListener('click', () => (helpOverlay.hidden = true));
 byId('help-button').addEventListener('click', () => runCommand('toggleHelp'));
 byId('open-button').addEventListener('click', () => runCommand('open'));
 byId('save-button').addEventListener('click', () => runCommand('save'));
-variantSelect.addEventListener('change', () => tryEdit('setActiveVariant', { name: variantSelect.value }));
 acceptDrops(document.body, fileHandlers);
-byId('copy-variant').addEventListener('click', () => tryEdit('addVariant', {}));
-byId('rename-variant').addEventListener('click', () => {
-  const to = prompt('New name for this variant', store.doc.activeVariant);
-  if (to !== null) tryEdit('renameVariant', { from: store.doc.activeVariant, to: to.trim() });
-});
-byId('delete-variant').addEventListener('click', () => {
-  if (confirm(`Delete the variant "${store.doc.activeVariant}"?`)) tryEdit('deleteVariant', { name: store.doc.activeVariant });
-});
+wireVariantButtons(byId, store, (name, args) => tryEdit(name, args));
 
 /**
  * An edit from a button or a typed field; a refused one is said in the status line and the document stays.
@@ -277,8 +263,7 @@ showDocument(store.doc);
 showPartsNumbers(byId('breathing'), bench, store.doc);
 view.fitToView(sectionBounds(activeSection(store.doc)));
 solve(store.doc, 'open');
-if (restoredProblem !== null) status.show(`The work kept from your last visit was not opened: ${restoredProblem} The sample is shown instead.`, 'error');
-else if (restored) status.show('Restored the work from your last visit. Open a sample or a file to start afresh.');
+if (greeting) status.show(greeting.text, greeting.level);
 
 // For browser tests and the interaction benchmark: read-only handles on the running app.
 Object.assign(window, { portwright: { store, view, timings, get lastReply() { return lastReply; } } });
