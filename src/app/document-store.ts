@@ -6,8 +6,8 @@ import type { PortDocument } from '../document/types.ts';
 import { emptyHistory, recordStep, redoLabels, redoStep, undoLabels, undoStep, HISTORY_CAP, type History } from './history.ts';
 
 /**
- * Why the document changed: a drag in progress wants a coarse solve; 'history' is an undo or redo; 'open' a
- * file (or a change of units) that brings its own view; anything else is an 'edit'.
+ * Why the document changed: a drag in progress wants a coarse solve; 'open' is a file (or a change of units) that
+ * brings its own view, or the undo or redo of one; 'history' any other undo or redo; anything else is an 'edit'.
  */
 export type ChangeCause = 'drag' | 'edit' | 'open' | 'history';
 
@@ -70,8 +70,9 @@ export class DocumentStore {
       checked = this.clamped(name, args, error);
       if (checked.doc === before) return checked.note;
     }
+    // Recorded before listeners hear of it, so they see the history that includes it.
+    if (cause !== 'drag') this.record(before, checked.doc, label, cause === 'open');
     this.set(checked.doc, cause);
-    if (cause !== 'drag') this.record(before, checked.doc, label);
     return checked.note;
   }
 
@@ -80,8 +81,8 @@ export class DocumentStore {
     if (this.drag) this.cancelDrag();
     this.options.guard?.check(doc);
     const before = this.current;
+    this.record(before, doc, label, true);
     this.set(doc, cause);
-    this.record(before, doc, label);
   }
 
   /** The drag was let go: its steps become one undo step, and listeners hear an 'edit' (the full grid follows). */
@@ -104,7 +105,7 @@ export class DocumentStore {
     const undone = this.drag ? null : undoStep(this.history);
     if (undone === null) return null;
     this.history = undone.history;
-    this.set(undone.step.before, 'history');
+    this.set(undone.step.before, undone.step.wholeDocument ? 'open' : 'history');
     return undone.step.label;
   }
 
@@ -113,7 +114,7 @@ export class DocumentStore {
     const redone = this.drag ? null : redoStep(this.history);
     if (redone === null) return null;
     this.history = redone.history;
-    this.set(redone.step.after, 'history');
+    this.set(redone.step.after, redone.step.wholeDocument ? 'open' : 'history');
     return redone.step.label;
   }
 
@@ -144,8 +145,8 @@ export class DocumentStore {
     throw error;
   }
 
-  private record(before: PortDocument, after: PortDocument, label: string): void {
-    this.history = recordStep(this.history, { before, after, label }, this.options.cap ?? HISTORY_CAP);
+  private record(before: PortDocument, after: PortDocument, label: string, wholeDocument = false): void {
+    this.history = recordStep(this.history, { before, after, label, wholeDocument }, this.options.cap ?? HISTORY_CAP);
   }
 
   private set(doc: PortDocument, cause: ChangeCause): void {

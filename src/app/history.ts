@@ -9,6 +9,8 @@ export interface HistoryStep<D> {
   readonly after: D;
   /** Plain words, e.g. "Set fillet radius", "Open \"tight.json\"". */
   readonly label: string;
+  /** The step brought in a whole other document (a file, other units): undone or redone, it is shown afresh. */
+  readonly wholeDocument?: boolean;
 }
 
 /** Steps that can be undone (oldest first, the last is undone next) and redone (the last is redone next). */

@@ -110,7 +110,7 @@ describe('undo and redo', () => {
 });
 
 describe('opening a file', () => {
-  it('a file with a variant that does not build is refused naming the variant, and the work, title and picture stay', async () => {
+  it('a file with a variant that does not build is refused naming the variant, and the work, title and picture stay; a good one opens and undoes', async () => {
     await withApp(session, async ({ page, problems }) => {
       const before = await appDocument(page);
       const title = await page.locator('#doc-title').innerText();
@@ -133,6 +133,14 @@ describe('opening a file', () => {
       expect(await statusText(page)).toMatch(/^"port-photo\.png" was not opened: it is not a text file \(it looks like a picture/);
       expect(await appDocument(page)).toEqual(before);
       expect(await solveCount(page, 'full'), 'no new solve: the picture still belongs to the kept work').toBe(full);
+
+      // A good file opens, and opening it is a step Ctrl+Z takes back: the work and its title return.
+      await openThroughPicker(page, 'other.json', Buffer.from(JSON.stringify({ ...before, title: 'Other port' })));
+      await expect.poll(() => page.locator('#doc-title').innerText()).toBe('Other port');
+      expect(await page.locator('#undo-button').getAttribute('title')).toMatch(/^Undo Open "other\.json"/);
+      await page.keyboard.press('Control+z');
+      await expect.poll(() => page.locator('#doc-title').innerText()).toBe(title);
+      expect(await appDocument(page)).toEqual(before);
       expect(problems).toEqual([]);
     });
   }, CHECK_MS);
