@@ -57,7 +57,8 @@ export function documentProblem(doc: PortDocument): string | null {
     checkDocument(doc);
     return null;
   } catch (error) {
-    if (!(error instanceof DocumentCheckError)) throw error;
-    return `${error.message.charAt(0).toUpperCase()}${error.message.slice(1)}`;
+    // Any other failure (a fault of ours on a document from an older Portwright) also keeps it out.
+    const message = error instanceof Error ? error.message : String(error);
+    return `${message.charAt(0).toUpperCase()}${message.slice(1)}`;
   }
 }

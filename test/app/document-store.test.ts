@@ -1,7 +1,7 @@
 /** The store checks every change before it lands, clamps a too-big fillet drag, and keeps a drag as one undo step. */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { checkDocument, DocumentCheckError, plainMessage } from '../../src/app/document-check.ts';
+import { checkDocument, DocumentCheckError, documentProblem, plainMessage } from '../../src/app/document-check.ts';
 import { DocumentStore } from '../../src/app/document-store.ts';
 import { clampEdit } from '../../src/app/edit-clamp.ts';
 import { summariseVariant } from '../../src/cli/section-summary.ts';
@@ -138,5 +138,35 @@ describe('undo and redo in the store', () => {
     // Undoing an opened file or a change of units brings back a whole document, shown afresh as an opened one is.
     expect(causes).toEqual(['edit', 'open', 'open', 'open', 'open', 'history']);
     expect(heard).toEqual(['Set lift', 'Change units', 'Open "sample.json"', 'Change units', 'Set lift', '']);
+  });
+});
+
+describe('the nearest valid value of a refused step', () => {
+  const vertex = shortSideCorner(activeSection(SAMPLE));
+  const refusal = (doc: PortDocument): unknown => {
+    try {
+      checkDocument(doc);
+    } catch (error) {
+      return error;
+    }
+    throw new Error('expected the document to be refused');
+  };
+
+  it('exists only for the fillet radius of the very corner that does not fit', () => {
+    const tooBig = applyEdit(SAMPLE, 'setFilletRadius', { vertex, radius: 40.8 });
+    const error = refusal(tooBig);
+    const clamped = clampEdit(SAMPLE, 'setFilletRadius', { vertex, radius: 40.8 }, error);
+    expect(clamped).not.toBeNull();
+    expect((clamped!.args as { radius: number }).radius).toBeLessThan(40.8);
+    // Another corner's radius, a moved point or another kind of problem has no nearest value: refused outright.
+    expect(clampEdit(SAMPLE, 'setFilletRadius', { vertex: vertex + 1, radius: 40.8 }, error)).toBeNull();
+    expect(clampEdit(SAMPLE, 'movePoint', { point: { kind: 'vertex', vertex }, to: [0, 0] }, error)).toBeNull();
+    expect(clampEdit(SAMPLE, 'setFilletRadius', { vertex, radius: 40.8 }, new Error('other'))).toBeNull();
+  });
+
+  it('a whole document that does not build is named by variant for the status line', () => {
+    expect(documentProblem(SAMPLE)).toBeNull();
+    const broken = applyEdit(SAMPLE, 'setFilletRadius', { vertex, radius: 40.8 });
+    expect(documentProblem(broken)).toMatch(new RegExp(`^The variant "${SAMPLE.activeVariant}" cannot be solved\\. The fillet at corner ${vertex + 1} `));
   });
 });
