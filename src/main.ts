@@ -1,8 +1,12 @@
 /** Portwright in the browser: the one file that wires document, editor, workers and view together. */
 import sampleText from '../samples/short-side-compare.json?raw';
 import { acceptDrops, downloadDocument, pickFile, type FileHandlers } from './app/files.ts';
-import { autosaver, restoreAutosave } from './app/autosave.ts';
-import { DocumentStore, type ChangeCause } from './app/document-store.ts';
+import { autosaver } from './app/autosave.ts';
+import type { ChangeCause } from './app/document-store.ts';
+import { plainMessage } from './app/document-check.ts';
+import { mountHistoryControls } from './app/history-controls.ts';
+import { startStore } from './app/start-document.ts';
+import { wireVariantButtons } from './app/variant-buttons.ts';
 import { EditorController } from './app/editor-controller.ts';
 import { FlowPicture } from './app/flow-picture.ts';
 import { caseSetup, CELLS_BY_DETAIL, DRAG_CELLS, type CaseSetup } from './study/index.ts';
@@ -18,9 +22,8 @@ import { ReadingsPanel } from './app/readings-panel.ts';
 import { defaultSettings, parseLevels } from './app/settings.ts';
 import { buildSettingsPanel, type SettingsGroup } from './app/settings-panel.ts';
 import { StatusLine } from './app/status.ts';
-import { loadDocument } from './document/load.ts';
 import type { PortDocument } from './document/types.ts';
-import { activeSection, applyEdit, type CommandName } from './editor/index.ts';
+import { activeSection, type CommandName } from './editor/index.ts';
 import { sectionBounds } from './geometry/index.ts';
 import { thinWallNote } from './solver/thin-wall-note.ts';
 import type { FlowDomain } from './solver/types.ts';
@@ -36,8 +39,7 @@ const helpOverlay = byId<HTMLElement>('help-overlay');
 const variantSelect = byId<HTMLSelectElement>('variant-select');
 
 const settings = defaultSettings();
-const restored = restoreAutosave();
-const store = new DocumentStore(restored ?? loadDocument(sampleText), applyEdit);
+const { store, greeting } = startStore(sampleText);
 settings.units = store.doc.units;
 settings.gridDetail = store.doc.settings.gridDetail;
 
@@ -123,9 +125,13 @@ function showDocument(doc: PortDocument): void {
 }
 
 const autosave = autosaver();
+/** The active variant shown before the latest change (an undo that switches variants forgets the selection). */
+let shownVariant = store.doc.activeVariant;
 store.subscribe((doc, cause) => {
-  // An opened file brings its own units and grid detail, and is solved on its own grid as the command solves it.
-  if (cause === 'open') {
+  // An opened file brings its own units and grid detail, and is solved on its own grid as the command solves it;
+  // an undo or redo may bring back other units or another grid detail.
+  const unitsChanged = settings.units !== doc.units || settings.gridDetail !== doc.settings.gridDetail;
+  if (cause === 'open' || (cause === 'history' && unitsChanged)) {
     settings.units = doc.units;
     settings.gridDetail = doc.settings.gridDetail;
   }
@@ -133,10 +139,18 @@ store.subscribe((doc, cause) => {
   autosave(doc);
   // Mid-drag only the field and the handles follow the pointer; panels catch up when the drag ends.
   if (cause === 'drag') return;
+  undoControls.refresh();
+  if (cause === 'history') editor.keepValidSelection(doc.activeVariant !== shownVariant);
+  shownVariant = doc.activeVariant;
   showDocument(doc);
   selectionPanel.show(doc, editor.selection);
   partsPanel.update(doc);
   showPartsNumbers(byId('breathing'), bench, doc);
+  if (cause === 'history' && unitsChanged) {
+    refreshSettingsPanel();
+    view.setUnits(doc.units);
+    view.fitToView(sectionBounds(activeSection(doc)));
+  }
   if (cause === 'open') {
     editor.reset();
     // The settings panel shows the opened file's units and grid detail (it said the old ones before).
@@ -147,8 +161,9 @@ store.subscribe((doc, cause) => {
 });
 
 const fileHandlers: FileHandlers = {
+  // A file with a variant that does not build is refused (the store throws, files.ts reports it by variant).
   onOpened: (doc, name) => {
-    store.replace(doc);
+    store.replace(doc, `Open "${name}"`);
     status.show(`Opened "${name}".`);
   },
   onRejected: (message) => status.show(`${message} Your current work is unchanged.`, 'error'),
@@ -166,9 +181,12 @@ function runCommand(name: CommandName): void {
     case 'open': return pickFile(byId('file-input'), fileHandlers);
     case 'cancel': helpOverlay.hidden = true; return;
     case 'toggleInsertMode': return;
+    case 'undo': return undoControls.undo();
+    case 'redo': return undoControls.redo();
   }
 }
 
+const undoControls = mountHistoryControls(byId('undo-button'), byId('redo-button'), store, (message) => status.show(message));
 const selectionPanel = new SelectionPanel(byId('selection'), (name, args) => tryEdit(name, args, false));
 const editor = new EditorController(viewHost, view, store, {
   onCommand: runCommand,
@@ -192,8 +210,11 @@ function applySettings(group: SettingsGroup): void {
   if (group === 'reference' && lastReply) picture.field(lastReply);
   if (group === 'solve' || group === 'reading') solve(store.doc, 'edit');
   if (group === 'units' && settings.units !== store.doc.units) {
-    store.edit('setUnits', { units: settings.units }, 'open');
-    status.show(`The drawing is now in ${settings.units === 'mm' ? 'millimetres' : 'inches'}.`);
+    const units = settings.units;
+    // Refused (the converted drawing would not build): the setting goes back to the drawing's units.
+    settings.units = store.doc.units;
+    if (tryEdit('setUnits', { units }, false, 'open')) status.show(`The drawing is now in ${units === 'mm' ? 'millimetres' : 'inches'}.`);
+    else refreshSettingsPanel();
   }
 }
 const gui = buildSettingsPanel(byId('settings-host'), settings, applySettings);
@@ -220,28 +241,20 @@ helpOverlay.addEventListener('click', () => (helpOverlay.hidden = true));
 byId('help-button').addEventListener('click', () => runCommand('toggleHelp'));
 byId('open-button').addEventListener('click', () => runCommand('open'));
 byId('save-button').addEventListener('click', () => runCommand('save'));
-variantSelect.addEventListener('change', () => tryEdit('setActiveVariant', { name: variantSelect.value }));
 acceptDrops(document.body, fileHandlers);
-byId('copy-variant').addEventListener('click', () => tryEdit('addVariant', {}));
-byId('rename-variant').addEventListener('click', () => {
-  const to = prompt('New name for this variant', store.doc.activeVariant);
-  if (to !== null) tryEdit('renameVariant', { from: store.doc.activeVariant, to: to.trim() });
-});
-byId('delete-variant').addEventListener('click', () => {
-  if (confirm(`Delete the variant "${store.doc.activeVariant}"?`)) tryEdit('deleteVariant', { name: store.doc.activeVariant });
-});
+wireVariantButtons(byId, store, (name, args) => tryEdit(name, args));
 
 /**
  * An edit from a button or a typed field; a refused one is said in the status line and the document stays.
  * `resetSelection` when indices may no longer mean the same thing (another variant). True when it was applied.
  */
-function tryEdit(name: string, args: unknown, resetSelection = true): boolean {
+function tryEdit(name: string, args: unknown, resetSelection = true, cause: ChangeCause = 'edit'): boolean {
   try {
-    store.edit(name, args);
+    store.edit(name, args, cause);
     if (resetSelection) editor.reset();
     return true;
   } catch (error) {
-    status.show(error instanceof Error ? error.message : String(error), 'error');
+    status.show(plainMessage(error), 'error');
     return false;
   }
 }
@@ -250,7 +263,7 @@ showDocument(store.doc);
 showPartsNumbers(byId('breathing'), bench, store.doc);
 view.fitToView(sectionBounds(activeSection(store.doc)));
 solve(store.doc, 'open');
-if (restored) status.show('Restored the work from your last visit. Open a sample or a file to start afresh.');
+if (greeting) status.show(greeting.text, greeting.level);
 
 // For browser tests and the interaction benchmark: read-only handles on the running app.
 Object.assign(window, { portwright: { store, view, timings, get lastReply() { return lastReply; } } });

@@ -1,12 +1,15 @@
 /** Wires pointer and keyboard events to the pure drag tool and sends its edits to the document store. */
 import type { PortDocument, Point } from '../document/types.ts';
 import {
-  activeSection, activeVariant, DEFAULT_GRID_STEP, hitTest, IDLE, listHandles, sameHandle, stepTool,
+  activeSection, activeVariant, DEFAULT_GRID_STEP, findShortcut, hitTest, IDLE, listHandles, sameHandle, stepTool,
   type CommandName, type HandleRef, type ToolAction, type ToolEvent, type ToolState,
 } from '../editor/index.ts';
 import type { FlowView } from '../view/flow-view.ts';
 import { HandleOverlay, type HandleMark } from '../view/handle-overlay.ts';
 import type { DocumentStore } from './document-store.ts';
+import { plainMessage } from './document-check.ts';
+import { newestOnly } from './newest-only.ts';
+import { isTextBox, TypedBoxes } from './typed-boxes.ts';
 
 /** Pick slop around a handle, CSS pixels. */
 const PICK_PX = 9;
@@ -21,7 +24,8 @@ export interface EditorHooks {
 
 export class EditorController {
   private state: ToolState = IDLE;
-  private beforeDrag: PortDocument | null = null;
+  /** Text boxes typed in since their last commit: they keep the browser's own undo. */
+  private readonly boxes = new TypedBoxes();
   private readonly overlay: HandleOverlay;
   /** Whether the tool did something with the last event (then a key press is not passed on to the page). */
   private lastHandled = false;
@@ -47,7 +51,6 @@ export class EditorController {
   /** Forget the selection (a file was opened or the variant changed: indices no longer mean the same thing). */
   reset(): void {
     this.state = IDLE;
-    this.beforeDrag = null;
     this.drawHandles();
     this.hooks.onSelection?.(null);
   }
@@ -112,7 +115,11 @@ export class EditorController {
 
   private readonly onKey = (ev: KeyboardEvent): void => {
     const target = ev.target as HTMLElement | null;
-    if (target && (target.isContentEditable || ['INPUT', 'SELECT', 'TEXTAREA'].includes(target.tagName))) return;
+    if (target && isTextBox(target)) {
+      // A box being typed in keeps the browser's own undo; once committed, undo and redo are the document's.
+      if (this.boxes.typing(target) || !isHistoryKey(ev)) return;
+      target.blur();
+    }
     const before = this.state;
     this.dispatch({ type: 'key', press: { key: ev.key, ctrlKey: ev.ctrlKey, metaKey: ev.metaKey, altKey: ev.altKey, shiftKey: ev.shiftKey } });
     if (this.state !== before || this.lastHandled) ev.preventDefault();
@@ -133,17 +140,11 @@ export class EditorController {
     switch (action.type) {
       case 'select': return;
       case 'drag-start':
-        this.beforeDrag = this.store.doc;
-        return this.tryEdit(action.edit.name, action.edit.args, 'drag');
       case 'drag-move': return this.tryEdit(action.edit.name, action.edit.args, 'drag');
       case 'drag-end':
-        this.beforeDrag = null;
         this.tryEdit(action.edit.name, action.edit.args, 'drag');
-        return this.store.touch('edit');
-      case 'drag-cancel':
-        if (this.beforeDrag) this.store.replace(this.beforeDrag, 'edit');
-        this.beforeDrag = null;
-        return;
+        return this.store.endDrag();
+      case 'drag-cancel': return this.store.cancelDrag();
       case 'edit': return this.tryEdit(action.edit.name, action.edit.args, 'edit');
       case 'command':
         if (action.name === 'toggleInsertMode') {
@@ -155,13 +156,25 @@ export class EditorController {
     }
   }
 
-  /** An edit that fails (e.g. a corner dropped on its neighbour) leaves the document as it was and says why. */
+  /**
+   * An edit that fails (e.g. a corner dropped on its neighbour, a fillet that no longer fits) leaves the document as
+   * it was and says why; a drag step held at its nearest valid value says so too.
+   */
   private tryEdit(name: string, args: unknown, cause: 'drag' | 'edit'): void {
     try {
-      this.store.edit(name, args, cause);
+      const note = this.store.edit(name, args, cause);
+      if (note !== undefined) this.hooks.onMessage(note, 'info');
     } catch (error) {
-      this.hooks.onMessage(error instanceof Error ? error.message : String(error), 'error');
+      // A refused drag step is the porter's cue, not a fault: it stays in the status line after the full solve.
+      this.hooks.onMessage(plainMessage(error), cause === 'drag' ? 'info' : 'error');
     }
+  }
+
+  /** After an undo or redo: keep the selection while it still names something in the active variant. */
+  keepValidSelection(variantChanged: boolean): void {
+    const selection = this.state.selection;
+    if (selection === null) return;
+    if (variantChanged || !selectionExists(this.store.doc, selection)) this.reset();
   }
 
   private context() {
@@ -201,8 +214,24 @@ export class EditorController {
 
   dispose(): void {
     window.removeEventListener('keydown', this.onKey);
+    this.boxes.dispose();
     this.overlay.dispose();
   }
+}
+
+function isHistoryKey(ev: KeyboardEvent): boolean {
+  const run = findShortcut(ev)?.run;
+  return run !== undefined && 'command' in run && (run.command === 'undo' || run.command === 'redo');
+}
+
+/** Whether `ref` still names an edge or a handle of the document's active variant. */
+function selectionExists(doc: PortDocument, ref: HandleRef): boolean {
+  const section = activeSection(doc);
+  if (ref.kind === 'edge') {
+    const outline = ref.island === undefined ? section.outline : section.islands[ref.island]?.outline;
+    return outline?.edges[ref.edge] !== undefined;
+  }
+  return listHandles(section, activeVariant(doc).parts).some((h) => sameHandle(h.ref, ref));
 }
 
 const STYLE_BY_KIND: Partial<Record<HandleRef['kind'], HandleMark['style']>> = {
@@ -212,29 +241,4 @@ const STYLE_BY_KIND: Partial<Record<HandleRef['kind'], HandleMark['style']>> = {
 function filletRadiusOf(section: ReturnType<typeof activeSection>, ref: Extract<HandleRef, { kind: 'fillet' }>): number {
   const outline = ref.island === undefined ? section.outline : section.islands[ref.island].outline;
   return outline.vertices[ref.vertex]?.filletRadius ?? 0;
-}
-
-/**
- * Handles only the newest of events that arrive faster than the page takes them: each one replaces the one
- * waiting, and the waiting one is handled in a task of its own right after the events queued before it.
- */
-function newestOnly<E>(handle: (event: E) => void): { handle: (event: E) => void; cancel: () => void } {
-  let waiting: E | null = null;
-  let timer: ReturnType<typeof setTimeout> | undefined;
-  return {
-    handle: (event) => {
-      if (waiting === null) {
-        timer = setTimeout(() => {
-          const newest = waiting as E;
-          waiting = null;
-          handle(newest);
-        }, 0);
-      }
-      waiting = event;
-    },
-    cancel: () => {
-      clearTimeout(timer);
-      waiting = null;
-    },
-  };
 }

@@ -24,12 +24,32 @@ async function openFile(file: File, handlers: FileHandlers): Promise<void> {
     handlers.onRejected(`"${file.name}" could not be read.`, file.name);
     return;
   }
+  const notSection = notJsonText(text);
+  if (notSection !== null) {
+    handlers.onRejected(`"${file.name}" was not opened: ${notSection}`, file.name);
+    return;
+  }
   try {
     handlers.onOpened(loadDocument(text), file.name);
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
     handlers.onRejected(`"${file.name}" was not opened: ${message}`, file.name);
   }
+}
+
+/**
+ * Why `text` cannot be a section file at all, in plain words, or null when it may be one (the loader then says
+ * what is wrong inside). Bytes that are not text decode to U+FFFD; a NUL never appears in a text file.
+ */
+export function notJsonText(text: string): string | null {
+  if (/[\u0000\uFFFD]/.test(text.slice(0, 4096))) {
+    return 'it is not a text file (it looks like a picture, a PDF or another program\'s file); a section file is JSON text saved by Portwright.';
+  }
+  const first = text.trimStart().charAt(0);
+  if (first !== '{') {
+    return 'it is not a Portwright section file: a section file is JSON text that starts with "{".';
+  }
+  return null;
 }
 
 /** Ask for a file with the browser's picker. */

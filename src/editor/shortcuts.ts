@@ -3,7 +3,8 @@
 import { EDIT_LIST, type EditName, type EditShortcut } from './edits.ts';
 
 /** Things keys do that are not document edits; the app carries them out. */
-export type CommandName = 'fitView' | 'toggleInsertMode' | 'toggleSnapping' | 'toggleHelp' | 'save' | 'open' | 'cancel';
+export type CommandName =
+  | 'fitView' | 'toggleInsertMode' | 'toggleSnapping' | 'toggleHelp' | 'save' | 'open' | 'cancel' | 'undo' | 'redo';
 
 /** What a key runs: an edit on the current selection, or a command. */
 export type ShortcutRun =
@@ -23,6 +24,9 @@ const COMMANDS: readonly Shortcut[] = [
   { key: 'i', description: 'Insert mode on/off: a click on an edge adds a corner there', group: 'Edit', run: { command: 'toggleInsertMode' } },
   { key: 's', description: 'Snapping on/off (grid, and lining up with neighbouring points)', group: 'Edit', run: { command: 'toggleSnapping' } },
   { key: 'Escape', description: 'Cancel the drag, or clear the selection', group: 'Edit', run: { command: 'cancel' } },
+  { key: 'Ctrl+Z', description: 'Undo the last change to the document (a whole drag is one change)', group: 'Edit', run: { command: 'undo' } },
+  { key: 'Ctrl+Shift+Z', description: 'Redo what was undone', group: 'Edit', run: { command: 'redo' } },
+  { key: 'Ctrl+Y', description: 'Redo what was undone', group: 'Edit', run: { command: 'redo' } },
   { key: 'f', description: 'Fit the section in the view', group: 'View', run: { command: 'fitView' } },
   { key: '?', description: 'Show or hide this list of keys', group: 'View', run: { command: 'toggleHelp' } },
   { key: 'Ctrl+S', description: 'Save the section file', group: 'File', run: { command: 'save' } },
@@ -61,14 +65,14 @@ export interface KeyPress {
 }
 
 /**
- * The press written as a chord, e.g. "Ctrl+S", "f", "Delete". Cmd counts as Ctrl. Shift is written only with
- * named keys: on a character it is already in the character ("?" is Shift+/ on many layouts).
+ * The press written as a chord, e.g. "Ctrl+S", "f", "Delete", "Ctrl+Shift+Z". Cmd counts as Ctrl. Shift is written
+ * with named keys and with Ctrl; on a plain character it is already in the character ("?" is Shift+/ on many layouts).
  */
 export function chordOf(press: KeyPress): string {
   const parts: string[] = [];
   if (press.ctrlKey || press.metaKey) parts.push('Ctrl');
   if (press.altKey) parts.push('Alt');
-  if (press.shiftKey && press.key.length > 1) parts.push('Shift');
+  if (press.shiftKey && (press.key.length > 1 || parts.includes('Ctrl'))) parts.push('Shift');
   parts.push(press.key.length === 1 && parts.length > 0 ? press.key.toUpperCase() : press.key);
   return parts.join('+');
 }

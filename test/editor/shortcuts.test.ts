@@ -9,6 +9,18 @@ describe('shortcuts', () => {
     expect(chordOf({ key: '?', shiftKey: true })).toBe('?');
     expect(chordOf({ key: 'Delete', shiftKey: true })).toBe('Shift+Delete');
     expect(chordOf({ key: 'f' })).toBe('f');
+    // With Ctrl (or Cmd) Shift is written even on a letter: Ctrl+Shift+Z is redo, not Ctrl+Z.
+    expect(chordOf({ key: 'Z', ctrlKey: true, shiftKey: true })).toBe('Ctrl+Shift+Z');
+    expect(chordOf({ key: 'z', metaKey: true, shiftKey: true })).toBe('Ctrl+Shift+Z');
+  });
+
+  it('undo is Ctrl/Cmd+Z, redo Ctrl/Cmd+Shift+Z or Ctrl+Y', () => {
+    expect(findShortcut({ key: 'z', ctrlKey: true })?.run).toEqual({ command: 'undo' });
+    expect(findShortcut({ key: 'z', metaKey: true })?.run).toEqual({ command: 'undo' });
+    expect(findShortcut({ key: 'Z', ctrlKey: true, shiftKey: true })?.run).toEqual({ command: 'redo' });
+    expect(findShortcut({ key: 'z', metaKey: true, shiftKey: true })?.run).toEqual({ command: 'redo' });
+    expect(findShortcut({ key: 'y', ctrlKey: true })?.run).toEqual({ command: 'redo' });
+    expect(findShortcut({ key: 'z' })).toBeUndefined();
   });
 
   it('finds the shortcut for a press, either letter case', () => {
@@ -28,7 +40,7 @@ describe('shortcuts', () => {
       if ('edit' in s.run) expect(isEditName(s.run.edit)).toBe(true);
     }
     expect(SHORTCUTS.map((s) => s.key).sort()).toEqual(
-      ['?', 'Backspace', 'Ctrl+O', 'Ctrl+S', 'Delete', 'Escape', 'a', 'c', 'f', 'i', 'l', 'n', 'o', 's', 'w'].sort(),
+      ['?', 'Backspace', 'Ctrl+O', 'Ctrl+S', 'Ctrl+Shift+Z', 'Ctrl+Y', 'Ctrl+Z', 'Delete', 'Escape', 'a', 'c', 'f', 'i', 'l', 'n', 'o', 's', 'w'].sort(),
     );
   });
 });

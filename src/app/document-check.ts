@@ -1,0 +1,64 @@
+/** Whether a document may be committed: every variant builds as `portwright check` and `solve` build it. */
+import type { PortDocument, Variant } from '../document/types.ts';
+import { GeometryError } from '../geometry/index.ts';
+import { PartsError } from '../parts/index.ts';
+import { caseSetup, CELLS_BY_DETAIL, StudyError } from '../study/index.ts';
+
+/** A variant that cannot be solved; `problem` is the plain sentence(s) saying why. */
+export class DocumentCheckError extends Error {
+  constructor(readonly variantName: string, readonly problem: string, readonly fault?: Error) {
+    super(`the variant "${variantName}" cannot be solved. ${problem}`);
+    this.name = 'DocumentCheckError';
+  }
+}
+
+/**
+ * Throws DocumentCheckError for the first variant of `doc` that `check` would refuse: no inlet or no outlet edge,
+ * or a case that does not set up on the file's own grid detail (a fillet too big, a crossing, a part that does not
+ * fit). Variants that are the very objects `before` held, under the same units and grid detail, were checked when
+ * they were committed and are not built again, so a drag step builds only the variant it changes.
+ */
+export function checkDocument(doc: PortDocument, before?: PortDocument): void {
+  if (!doc.variants.some((v) => v.name === doc.activeVariant)) {
+    throw new DocumentCheckError(doc.activeVariant, 'The file names it as the active variant, but holds no variant of that name.');
+  }
+  const same = before !== undefined && before.units === doc.units && before.settings.gridDetail === doc.settings.gridDetail;
+  const known = new Set<Variant>(same ? before.variants : []);
+  for (const variant of doc.variants) {
+    if (known.has(variant)) continue;
+    const problem = variantProblem(doc, variant);
+    if (problem !== null) throw new DocumentCheckError(variant.name, problem.message, problem.fault);
+  }
+}
+
+/** What keeps one variant from being solved (the wording `check` uses), or null when it builds. */
+function variantProblem(doc: PortDocument, variant: Variant): { message: string; fault?: Error } | null {
+  const roles = variant.section.outline.edges.map((edge) => edge.role);
+  if (!roles.includes('inlet')) return { message: 'The outline has no inlet edge (the manifold face): the flow has nowhere to enter.' };
+  if (!roles.includes('outlet')) return { message: 'The outline has no outlet edge (the far end of the bore): the flow has nowhere to leave.' };
+  try {
+    caseSetup(doc, { variant: variant.name, targetCells: CELLS_BY_DETAIL[doc.settings.gridDetail] });
+    return null;
+  } catch (error) {
+    if (error instanceof GeometryError || error instanceof PartsError || error instanceof StudyError) return { message: error.message, fault: error };
+    throw error;
+  }
+}
+
+/** An error's message for the status line: for a refused edit the problem alone (the variant is the one in view). */
+export function plainMessage(error: unknown): string {
+  if (error instanceof DocumentCheckError) return `${error.problem} The change was not made.`;
+  return error instanceof Error ? error.message : String(error);
+}
+
+/** Why `doc` cannot be committed (a sentence naming the variant), or null when every variant builds. */
+export function documentProblem(doc: PortDocument): string | null {
+  try {
+    checkDocument(doc);
+    return null;
+  } catch (error) {
+    // Any other failure (a fault of ours on a document from an older Portwright) also keeps it out.
+    const message = error instanceof Error ? error.message : String(error);
+    return `${message.charAt(0).toUpperCase()}${message.slice(1)}`;
+  }
+}
