@@ -2,7 +2,7 @@
 import type { PortDocument, Variant } from '../document/types.ts';
 import { GeometryError } from '../geometry/index.ts';
 import { PartsError } from '../parts/index.ts';
-import { caseSetup, CELLS_BY_DETAIL, StudyError } from '../study/index.ts';
+import { caseSetup, CELLS_BY_DETAIL, missingEnds, StudyError } from '../study/index.ts';
 
 /** A variant that cannot be solved; `problem` is the plain sentence(s) saying why. */
 export class DocumentCheckError extends Error {
@@ -33,9 +33,8 @@ export function checkDocument(doc: PortDocument, before?: PortDocument): void {
 
 /** What keeps one variant from being solved (the wording `check` uses), or null when it builds. */
 function variantProblem(doc: PortDocument, variant: Variant): { message: string; fault?: Error } | null {
-  const roles = variant.section.outline.edges.map((edge) => edge.role);
-  if (!roles.includes('inlet')) return { message: 'The outline has no inlet edge (the manifold face): the flow has nowhere to enter.' };
-  if (!roles.includes('outlet')) return { message: 'The outline has no outlet edge (the far end of the bore): the flow has nowhere to leave.' };
+  const ends = missingEnds(variant);
+  if (ends.length > 0) return { message: ends[0] };
   try {
     caseSetup(doc, { variant: variant.name, targetCells: CELLS_BY_DETAIL[doc.settings.gridDetail] });
     return null;

@@ -3,6 +3,7 @@
 import type { PortDocument, Variant } from '../document/types.ts';
 import { GeometryError, regionArea } from '../geometry/index.ts';
 import { PartsError } from '../parts/index.ts';
+import { missingEnds } from '../study/index.ts';
 import { variantDomain } from './variant-domain.ts';
 
 export interface SectionSummary {
@@ -29,9 +30,7 @@ export function summariseVariant(variant: Variant, document: PortDocument): Sect
   const roles = section.outline.edges.map((edge) => edge.role);
   const inletEdges = roles.filter((role) => role === 'inlet').length;
   const outletEdges = roles.filter((role) => role === 'outlet').length;
-  const problems: string[] = [];
-  if (inletEdges === 0) problems.push('the outline has no inlet edge (role "inlet", the manifold face): the flow has nowhere to enter');
-  if (outletEdges === 0) problems.push('the outline has no outlet edge (role "outlet", the far end of the bore): the flow has nowhere to leave');
+  const problems = missingEnds(variant);
   let wallNames: readonly string[] = [];
   let fluidArea: number | undefined;
   try {

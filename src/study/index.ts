@@ -3,3 +3,4 @@ export { caseSetup, solveFlattenTolerance, type CaseSetup, type CaseSpec } from 
 export { solveCase, type SolvedCase } from './solve-case.ts';
 export { CELLS_BY_DETAIL, DRAG_CELLS } from './grid-detail.ts';
 export { StudyError, type StudyErrorCode } from './errors.ts';
+export { missingEnds } from './open-ends.ts';

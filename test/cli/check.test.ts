@@ -55,7 +55,7 @@ describe('check (in process)', () => {
     doc.variants[0].section.outline.edges[11] = { kind: 'line', role: 'wall' };
     const { code, out } = await check(tmp.write('no-outlet.json', JSON.stringify(doc)));
     expect(code).toBe(1);
-    expect(out).toContain('problem: the outline has no outlet edge');
+    expect(out).toContain('problem: The outline has no outlet edge (role "outlet", the far end of the bore): the flow has nowhere to leave.');
   });
 
   it('names the position of a JSON syntax error', async () => {
