@@ -3,6 +3,12 @@
 import { pathToFileURL } from 'node:url';
 import { bundlePath, ensureBundle } from './cli-build.js';
 
+// A reader that stops early (`portwright solve FILE | head`) closes the pipe: end quietly, as other commands do.
+process.stdout.on('error', (error) => {
+  if (error.code === 'EPIPE') process.exit(0);
+  throw error;
+});
+
 try {
   await rebuildIfNeeded();
   const cli = await import(pathToFileURL(bundlePath()).href);

@@ -1,7 +1,8 @@
+import { spawnSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { REPO, STACK_LINE, runBin, tempDir } from './helpers.ts';
+import { BIN, REPO, STACK_LINE, runBin, tempDir } from './helpers.ts';
 
 const tmp = tempDir();
 afterAll(() => tmp.cleanup());
@@ -17,6 +18,15 @@ describe('portwright solve (the real bin, in a child process)', () => {
     expect(report.variant).toBe('generous short side');
     expect(report.probes[0].potential).toBeGreaterThan(0);
     expect(report.probes[0].potential).toBeLessThan(1);
+  });
+
+  it('ends quietly with exit 0 when its reader closes the pipe early (solve FILE | true)', () => {
+    // `true` exits without reading, so the pipe is closed before the solve's first line is written.
+    const ran = spawnSync('bash', ['-c', `"${process.execPath}" "${BIN}" solve samples/street-tight-short-side.json --cells 20000 | true; echo "exit $\{PIPESTATUS[0]}"`], {
+      cwd: REPO, encoding: 'utf8', timeout: 60_000,
+    });
+    expect(ran.stderr).toBe('');
+    expect(ran.stdout.trim()).toBe('exit 0');
   });
 
   it('prints the readable summary by default, the caution last', () => {
