@@ -4,12 +4,12 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { loadDocument } from '../../src/document/load.ts';
 import { defaultTolerance, sectionToDomain } from '../../src/geometry/index.ts';
 import type { FlowDomain } from '../../src/solver/types.ts';
-import type { SolveReply, SolverWorkerApi } from '../../src/workers/protocol.ts';
+import type { SolverWorkerApi } from '../../src/workers/protocol.ts';
 import { createSolverApi } from '../../src/workers/solver-api.ts';
 import { SolverClient, type WorkerRestart } from '../../src/workers/solver-client.ts';
 import { silenceLimitMs } from '../../src/workers/watchdog.ts';
 import type { WorkerHandle } from '../../src/workers/worker-handle.ts';
-import { portWorker, threadWorker } from './worker-handles.ts';
+import { portWorker, stallableApi, threadWorker } from './worker-handles.ts';
 
 function sampleDomain(): FlowDomain {
   const doc = loadDocument(readFileSync('samples/street-tight-short-side.json', 'utf8'));
@@ -20,22 +20,6 @@ function sampleDomain(): FlowDomain {
 const FAULTY = new URL('./faulty-worker.mjs', import.meta.url);
 /** Short limits, so a hang is found in a fraction of a second. */
 const QUICK = { minSilenceMs: 300, idleCheckMs: 100 } as const;
-const never = <T>() => new Promise<T>(() => undefined);
-
-/** An API that answers nothing once `hung` is set (a worker stuck in a loop, or ended from outside). */
-function stallable(): { api: SolverWorkerApi; hang: () => void } {
-  const real = createSolverApi();
-  let hung = false;
-  return {
-    api: {
-      init: (shared) => real.init(shared),
-      solve: (request) => (hung ? never<SolveReply>() : real.solve(request)),
-      ping: () => (hung ? (never<true>() as unknown as true) : true),
-    },
-    hang: () => (hung = true),
-  };
-}
-
 /** A client over workers made in turn by `makers` (the last one for every later worker), and what it was told. */
 function clientOver(makers: Array<() => WorkerHandle>, options = {}) {
   let made = 0;
@@ -93,7 +77,7 @@ describe('a worker that dies', () => {
   });
 
   it('while idle is found by the idle check, replaced, and said to be idle; the next job solves', async () => {
-    const stuck = stallable();
+    const stuck = stallableApi();
     const { client, restarts } = clientOver([() => portWorker(stuck.api), () => portWorker()], QUICK);
     const domain = sampleDomain();
     expect((await client.solveLatest({ domain, targetCells: 5_000 }))?.ok).toBe(true);

@@ -2,7 +2,7 @@
 import { Worker } from 'node:worker_threads';
 import * as Comlink from 'comlink';
 import nodeEndpoint from 'comlink/dist/esm/node-adapter.mjs';
-import type { SolverWorkerApi } from '../../src/workers/protocol.ts';
+import type { SolveReply, SolverWorkerApi } from '../../src/workers/protocol.ts';
 import { createSolverApi } from '../../src/workers/solver-api.ts';
 import type { WorkerHandle } from '../../src/workers/worker-handle.ts';
 
@@ -32,5 +32,20 @@ export function threadWorker(script = new URL('./node-solver-worker.mjs', import
       thread.on('exit', (code) => listener(`the worker exited with code ${code}`));
     },
     terminate: () => void thread.terminate(),
+  };
+}
+
+/** The real API until `hang()`, then silent for good (a worker stuck in a loop, or ended from outside). */
+export function stallableApi(): { api: SolverWorkerApi; hang: () => void } {
+  const real = createSolverApi();
+  const never = <T>() => new Promise<T>(() => undefined);
+  let hung = false;
+  return {
+    api: {
+      init: (shared) => real.init(shared),
+      solve: (request) => (hung ? never<SolveReply>() : real.solve(request)),
+      ping: () => (hung ? (never<true>() as unknown as true) : true),
+    },
+    hang: () => void (hung = true),
   };
 }
