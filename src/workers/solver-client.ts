@@ -60,6 +60,8 @@ export class SolverClient {
   /** Generation of the worker an idle check is waiting on, if any. */
   private pingOut: number | null = null;
   private restartListener: ((restart: WorkerRestart) => void) | null = null;
+  /** Workers lost since one last answered. */
+  private faultsInARow = 0;
 
   /** `createWorker` starts a Worker in the browser, or a port or thread in tests; called again for each replacement. */
   constructor(createWorker: () => WorkerHandle, options: ClientOptions = {}) {
@@ -121,6 +123,7 @@ export class SolverClient {
       // The worker was replaced meanwhile: a late reply from the old one is dropped.
       if (this.inFlight?.id !== id) return;
       this.watchdog.answered();
+      this.faultsInARow = 0;
       this.inFlight = null;
       const next = this.pending;
       const replaced = next !== null && !(call.preview && next.preview);
@@ -142,30 +145,38 @@ export class SolverClient {
     }
   }
 
-  /** The current worker died or went silent: replace it, then run its job again, once, unless a newer one waits. */
+  /**
+   * The current worker died or went silent: replace it and run its job again, once, unless a newer one waits.
+   * Workers that fail one after another answering nothing (one that cannot even load) are not started again until
+   * a job needs one, so they never restart each other for ever.
+   */
   private fault(cause: WorkerRestart['cause']): void {
     this.watchdog.answered();
     this.pingOut = null;
-    this.slot.replace();
     const call = this.inFlight;
     this.inFlight = null;
+    const failing = ++this.faultsInARow > 2;
+    const rerun = call !== null && this.pending === null && call.reruns < 1;
+    if (failing && !rerun && this.pending === null) this.slot.stop();
+    else this.slot.replace();
+    if (call === null && failing) return;
     this.restartListener?.({ cause, whileIdle: call === null, message: restartMessage(cause, call !== null) });
     if (call === null) return;
-    if (this.pending) call.resolve(null);
-    else if (call.reruns >= 1) call.resolve(givenUp(call.id));
-    else this.run({ ...call, reruns: call.reruns + 1 });
+    if (rerun) this.run({ ...call, reruns: call.reruns + 1 });
+    else call.resolve(this.pending ? null : givenUp(call.id));
     this.pump();
   }
 
   /** An idle worker is asked whether it is there; one that was ended from outside never answers. */
   private checkIdle(): void {
-    if (this.inFlight || this.pingOut !== null) return;
+    if (this.inFlight || this.pingOut !== null || !this.slot.running) return;
     const generation = this.slot.generation;
     this.pingOut = generation;
     this.watchdog.expect(this.minSilenceMs);
     this.slot.ready.then(() => this.slot.api.ping()).then(() => {
       if (this.pingOut !== generation) return;
       this.pingOut = null;
+      this.faultsInARow = 0;
       if (!this.inFlight) this.watchdog.answered();
     }, () => undefined);
   }

@@ -6,7 +6,7 @@ import type { WorkerHandle } from './worker-handle.ts';
 export class WorkerSlot {
   /** Counts the workers started; a message or fault from an older one is ignored. */
   generation = 0;
-  private handle!: WorkerHandle;
+  private handle: WorkerHandle | null = null;
   private remote!: Comlink.Remote<SolverWorkerApi>;
   private started!: Promise<void>;
 
@@ -22,25 +22,39 @@ export class WorkerSlot {
     this.start();
   }
 
+  /** The current worker's API; a stopped slot starts a worker first. */
   get api(): Comlink.Remote<SolverWorkerApi> {
+    if (!this.handle) this.start();
     return this.remote;
   }
 
-  /** Resolves when the current worker has taken the shared cells. */
+  /** Resolves when the current worker has taken the shared cells; a stopped slot starts a worker first. */
   get ready(): Promise<void> {
+    if (!this.handle) this.start();
     return this.started;
+  }
+
+  /** False after stop(), until a job asks for a worker again. */
+  get running(): boolean {
+    return this.handle !== null;
   }
 
   /** Ends the current worker (dead, hung or not) and starts a fresh one. */
   replace(): void {
-    this.handle.terminate();
+    this.stop();
     this.start();
   }
 
-  dispose(): void {
+  /** Ends the current worker and starts none: the next use of `api` or `ready` starts one. */
+  stop(): void {
     this.generation++;
-    this.remote[Comlink.releaseProxy]();
-    this.handle.terminate();
+    this.handle?.terminate();
+    this.handle = null;
+  }
+
+  dispose(): void {
+    if (this.handle) this.remote[Comlink.releaseProxy]();
+    this.stop();
   }
 
   private start(): void {

@@ -86,6 +86,19 @@ describe('a worker that dies', () => {
     expect(restarts[0]).toEqual({ cause: 'silent', whileIdle: true, message: 'The solver stopped answering and was restarted.' });
     expect((await client.solveLatest({ domain, targetCells: 5_000 }))?.ok).toBe(true);
   });
+
+  it('that can never start is not restarted for ever: the next job starts one, and gives up after two', async () => {
+    const { client, restarts, made } = clientOver([() => threadWorker(FAULTY, 'broken')]);
+    await expect.poll(made, { timeout: 5_000 }).toBe(3);
+    await new Promise((r) => setTimeout(r, 500));
+    // Two idle restarts were said; the third worker lost is not replaced until a job needs one.
+    expect(made()).toBe(3);
+    expect(restarts.map((r) => r.whileIdle)).toEqual([true, true]);
+    const failed = await client.solveLatest({ domain: sampleDomain(), targetCells: 5_000 });
+    expect(failed?.ok === false && failed.code).toBe('solver-stopped');
+    await new Promise((r) => setTimeout(r, 500));
+    expect(made()).toBe(5);
+  });
 });
 
 describe('a worker that never answers', () => {

@@ -21,7 +21,10 @@ export function portWorker(api: SolverWorkerApi = createSolverApi()): WorkerHand
 }
 
 /** A worker thread running `script` (by default the real solver worker); an uncaught error or an exit is death. */
-export function threadWorker(script = new URL('./node-solver-worker.mjs', import.meta.url), workerData?: unknown): WorkerHandle & { readonly thread: Worker } {
+export function threadWorker(
+  script = new URL('./node-solver-worker.mjs', import.meta.url),
+  workerData?: unknown,
+): WorkerHandle & { readonly thread: Worker } {
   const thread = new Worker(script, { workerData });
   return {
     thread,
