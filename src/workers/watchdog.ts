@@ -48,10 +48,6 @@ export class Watchdog {
     this.timer = undefined;
   }
 
-  get waiting(): boolean {
-    return this.timer !== undefined;
-  }
-
   private tick(): void {
     const now = performance.now();
     const gap = now - this.lastTick;
