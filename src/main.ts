@@ -29,6 +29,7 @@ import { thinWallNote } from './solver/thin-wall-note.ts';
 import type { FlowDomain } from './solver/types.ts';
 import { FlowView } from './view/flow-view.ts';
 import { SolverPool } from './workers/pool.ts';
+import { browserWorker } from './workers/worker-handle.ts';
 import type { FieldReply } from './workers/protocol.ts';
 
 const byId = <T extends HTMLElement>(id: string) => document.getElementById(id) as T;
@@ -44,7 +45,12 @@ settings.units = store.doc.units;
 settings.gridDetail = store.doc.settings.gridDetail;
 
 const view = new FlowView(viewHost, { units: store.doc.units, contourLevels: parseLevels(settings.contourLevels) });
-const pool = new SolverPool(() => new Worker(new URL('./workers/solver.worker.ts', import.meta.url), { type: 'module' }));
+/** The newest solver worker started (the live one; a replacement when one has failed). */
+let newestWorker: Worker | null = null;
+const pool = new SolverPool(() => {
+  newestWorker = new Worker(new URL('./workers/solver.worker.ts', import.meta.url), { type: 'module' });
+  return browserWorker(newestWorker);
+});
 const readings = new ReadingsPanel(byId('readings'), {
   onFinding: (f) => view.fitToView({ minX: f.x - f.radius, minY: f.y - f.radius, maxX: f.x + f.radius, maxY: f.y + f.radius }),
 });
@@ -78,6 +84,7 @@ const live = new LiveSolve(pool.live, {
     status.show(failure.message, 'error');
     readings.showStale('This reading belongs to the last shape that solved.');
   },
+  onWorkerNote: (message, level) => status.show(message, level),
 });
 
 /** A wall thinner than a cell is solved as a wall one cell thick: say so after each full solve (previews may not resolve what the full grid does). */
@@ -266,4 +273,7 @@ solve(store.doc, 'open');
 if (greeting) status.show(greeting.text, greeting.level);
 
 // For browser tests and the interaction benchmark: read-only handles on the running app.
-Object.assign(window, { portwright: { store, view, timings, get lastReply() { return lastReply; } } });
+// `stopSolverWorker` ends the live solver worker as a crash would, for the check that it is replaced.
+Object.assign(window, {
+  portwright: { store, view, timings, get lastReply() { return lastReply; }, stopSolverWorker: () => newestWorker?.terminate() },
+});

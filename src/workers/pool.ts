@@ -1,7 +1,7 @@
 /** A pool of solver workers (one per spare core): one serves live edits, the others are started for sweeps. */
-import type * as Comlink from 'comlink';
 import type { SolveReply } from './protocol.ts';
-import { SolverClient, type SolveJob } from './solver-client.ts';
+import { SolverClient, type ClientOptions, type SolveJob } from './solver-client.ts';
+import type { WorkerHandle } from './worker-handle.ts';
 
 export class SolverPool {
   /** The worker that serves live editing, started with the pool. */
@@ -9,16 +9,21 @@ export class SolverPool {
   /** Workers for sweeps, started by the first sweep: live editing alone never pays for them. */
   private sweepers: readonly SolverClient[] | null = null;
 
-  /** `createEndpoint` makes one worker (or a port in tests); `size` defaults to one per spare core. */
-  constructor(private readonly createEndpoint: () => Comlink.Endpoint, private readonly size = defaultPoolSize()) {
-    this.live = new SolverClient(createEndpoint());
+  /** `createWorker` makes one worker (or a port in tests), again for each one replaced; `size` defaults to one per
+   * spare core. */
+  constructor(
+    private readonly createWorker: () => WorkerHandle,
+    private readonly size = defaultPoolSize(),
+    private readonly options: ClientOptions = {},
+  ) {
+    this.live = new SolverClient(createWorker, options);
   }
 
   /** Solve independent jobs (lifts, variants) across the pool, on the live worker when it is the only one;
    * results in job order. */
   async sweep(jobs: readonly SolveJob[], onProgress?: (done: number, total: number) => void): Promise<SolveReply[]> {
     this.sweepers ??= this.size > 1
-      ? Array.from({ length: this.size - 1 }, () => new SolverClient(this.createEndpoint()))
+      ? Array.from({ length: this.size - 1 }, () => new SolverClient(this.createWorker, this.options))
       : [this.live];
     const replies: SolveReply[] = new Array(jobs.length);
     let next = 0;

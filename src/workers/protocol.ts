@@ -54,7 +54,7 @@ export interface FieldReply {
 export interface FailureReply {
   readonly ok: false;
   readonly id: number;
-  /** 'superseded' when a newer request stopped this one. */
+  /** 'superseded' when a newer request stopped this one; 'solver-stopped' when the worker died twice on it. */
   readonly code: string;
   readonly message: string;
   readonly where?: readonly [number, number];
@@ -64,7 +64,13 @@ export type SolveReply = FieldReply | FailureReply;
 
 /** The API one solver worker exposes over comlink. */
 export interface SolverWorkerApi {
-  /** Give the worker the shared cell holding the newest request id (null where SharedArrayBuffer is unavailable). */
-  init(latestId: SharedArrayBuffer | null): void;
+  /**
+   * Give the worker the shared cells (null where SharedArrayBuffer is unavailable), Int32 [newest request id,
+   * heartbeat]: the worker stops a solve whose id is older than the first, and adds one to the second at every
+   * solver iteration, so the client can tell a long solve from a hung worker.
+   */
+  init(shared: SharedArrayBuffer | null): void;
   solve(request: SolveRequest): Promise<SolveReply>;
+  /** Answers at once: an idle worker is asked now and then whether it is still there. */
+  ping(): true;
 }

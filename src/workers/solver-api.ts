@@ -12,8 +12,14 @@ export function createSolverApi(): SolverWorkerApi {
     init(shared) {
       latest = shared ? new Int32Array(shared) : null;
     },
+    ping: () => true,
     async solve(request) {
       const superseded = () => latest !== null && Atomics.load(latest, 0) > request.id;
+      // Asked at every solver iteration: each call is also a heartbeat the client's watchdog reads.
+      const beatAndCheck = () => {
+        if (latest) Atomics.add(latest, 1, 1);
+        return superseded();
+      };
       if (superseded()) return failure(request.id, 'superseded', 'A newer request replaced this one.');
       const started = performance.now();
       try {
@@ -21,7 +27,7 @@ export function createSolverApi(): SolverWorkerApi {
           targetCells: request.targetCells,
           tolerance: request.tolerance,
           warmStart: request.warmStart && lastPotential ? lastPotential : undefined,
-          shouldStop: superseded,
+          shouldStop: beatAndCheck,
           wallSpeeds: request.wallSpeeds,
         }, request.reading ?? null);
         if (superseded()) return failure(request.id, 'superseded', 'A newer request replaced this one.');

@@ -1,15 +1,13 @@
 /** The worker API in Node over a MessageChannel: replies, transfers, newest-request-wins, typed failures. */
 import { readFileSync } from 'node:fs';
-import { Worker } from 'node:worker_threads';
-import * as Comlink from 'comlink';
-import nodeEndpoint from 'comlink/dist/esm/node-adapter.mjs';
 import { afterEach, describe, expect, it } from 'vitest';
 import { loadDocument } from '../../src/document/load.ts';
 import { defaultTolerance, sectionToDomain } from '../../src/geometry/index.ts';
 import type { FlowDomain } from '../../src/solver/types.ts';
 import { SolverPool } from '../../src/workers/pool.ts';
-import { createSolverApi } from '../../src/workers/solver-api.ts';
 import { SolverClient } from '../../src/workers/solver-client.ts';
+import type { WorkerHandle } from '../../src/workers/worker-handle.ts';
+import { portWorker, threadWorker } from './worker-handles.ts';
 
 function sampleDomain(): FlowDomain {
   const doc = loadDocument(readFileSync('samples/street-tight-short-side.json', 'utf8'));
@@ -19,10 +17,8 @@ function sampleDomain(): FlowDomain {
 
 /** A client whose worker is the API exposed on the other end of a MessageChannel. */
 function channelClient(): { client: SolverClient; close: () => void } {
-  const { port1, port2 } = new MessageChannel();
-  Comlink.expose(createSolverApi(), port1 as unknown as Comlink.Endpoint);
-  const client = new SolverClient(port2 as unknown as Comlink.Endpoint);
-  return { client, close: () => { client.dispose(); port1.close(); port2.close(); } };
+  const client = new SolverClient(() => portWorker());
+  return { client, close: () => client.dispose() };
 }
 
 const open: Array<() => void> = [];
@@ -90,9 +86,8 @@ describe('solver worker API over a MessageChannel', () => {
 
   it('stops a solve in flight at its next iteration when superseded (shared cancel flag)', async () => {
     // A real second thread: in one thread the first solve would finish before the second request is even sent.
-    const worker = new Worker(new URL('./node-solver-worker.mjs', import.meta.url));
-    const client = new SolverClient(nodeEndpoint(worker));
-    open.push(() => { client.dispose(); void worker.terminate(); });
+    const client = new SolverClient(() => threadWorker());
+    open.push(() => client.dispose());
     expect(client.canInterrupt).toBe(true);
     const domain = sampleDomain();
     // A tolerance no solve reaches keeps the first request iterating until it is superseded.
@@ -132,9 +127,8 @@ describe('solver worker API over a MessageChannel', () => {
   });
 
   it('keeps a preview running in a real worker thread while a newer preview waits (no stop flag raised)', async () => {
-    const worker = new Worker(new URL('./node-solver-worker.mjs', import.meta.url));
-    const client = new SolverClient(nodeEndpoint(worker));
-    open.push(() => { client.dispose(); void worker.terminate(); });
+    const client = new SolverClient(() => threadWorker());
+    open.push(() => client.dispose());
     const domain = sampleDomain();
     await client.ready;
     const long = client.solveLatest({ domain, targetCells: 300_000 }, { preview: true });
@@ -159,14 +153,13 @@ describe('solver worker API over a MessageChannel', () => {
   });
 
   it('sweeps jobs across a pool and keeps their order', async () => {
-    const channels: Array<{ port1: MessagePort; port2: MessagePort }> = [];
+    const channels: WorkerHandle[] = [];
     const pool = new SolverPool(() => {
-      const ch = new MessageChannel();
-      channels.push(ch);
-      Comlink.expose(createSolverApi(), ch.port1 as unknown as Comlink.Endpoint);
-      return ch.port2 as unknown as Comlink.Endpoint;
+      const worker = portWorker();
+      channels.push(worker);
+      return worker;
     }, 3);
-    open.push(() => { pool.dispose(); channels.forEach((c) => { c.port1.close(); c.port2.close(); }); });
+    open.push(() => pool.dispose());
     const domain = sampleDomain();
     const sizes = [4_000, 8_000, 12_000, 16_000];
     const progress: number[] = [];
