@@ -1,6 +1,6 @@
 /** Reads a section file from disk for a command, turning every file-system or file-format failure into a plain UserError. */
 
-import { readFileSync, statSync } from 'node:fs';
+import { closeSync, openSync, readSync, statSync } from 'node:fs';
 import { DocumentError } from '../document/errors.ts';
 import { readDocument, type ReadResult } from '../document/load.ts';
 import { MAX_FILE_BYTES, formatMegabytes } from '../document/limits.ts';
@@ -17,19 +17,38 @@ export function readSectionFile(path: string): ReadResult {
   }
 }
 
-/** The text of `path` (UTF-8). Refuses folders and files too big to be a section before reading them. */
+/**
+ * The text of `path` (UTF-8). Refuses folders and files too big to be a section: by their size before reading, and
+ * by what arrives while reading (a device, a pipe or a file still growing says nothing true in its size).
+ */
 function readSectionText(path: string): string {
   try {
     const stat = statSync(path);
     if (stat.isDirectory()) throw new UserError(`${path} is a folder, not a section file`);
-    if (stat.size > MAX_FILE_BYTES) {
-      throw new UserError(`${path} is too big (${formatMegabytes(stat.size)}); a section file is at most ${formatMegabytes(MAX_FILE_BYTES)}`);
-    }
-    return readFileSync(path, 'utf8');
+    if (stat.size > MAX_FILE_BYTES) throw tooBig(path, formatMegabytes(stat.size));
+    return readCapped(path);
   } catch (error) {
     if (error instanceof UserError) throw error;
     throw new UserError(`cannot read ${path}: ${fileProblem(error)}`);
   }
+}
+
+/** Reads at most MAX_FILE_BYTES; one byte more and the file is refused. */
+function readCapped(path: string): string {
+  const buffer = Buffer.alloc(MAX_FILE_BYTES + 1);
+  const fd = openSync(path, 'r');
+  try {
+    let length = 0;
+    for (let got = 1; got > 0 && length < buffer.length; length += got) got = readSync(fd, buffer, length, buffer.length - length, null);
+    if (length > MAX_FILE_BYTES) throw tooBig(path, `more than ${formatMegabytes(MAX_FILE_BYTES)}`);
+    return buffer.toString('utf8', 0, length);
+  } finally {
+    closeSync(fd);
+  }
+}
+
+function tooBig(path: string, size: string): UserError {
+  return new UserError(`${path} is too big (${size}); a section file is at most ${formatMegabytes(MAX_FILE_BYTES)}`);
 }
 
 function fileProblem(error: unknown): string {

@@ -79,6 +79,12 @@ describe('check (in process)', () => {
     expect(err).toMatch(/huge\.json is too big \(5\.1 MB\); a section file is at most 5\.0 MB$/);
   });
 
+  it('refuses an endless input (a device whose size says 0) once it has read more than a section may hold', async () => {
+    const { code, err } = await check('/dev/zero');
+    expect(code).toBe(1);
+    expect(err).toMatch(/\/dev\/zero is too big \(more than 5\.0 MB\); a section file is at most 5\.0 MB$/);
+  });
+
   it('says a newer file needs a newer Portwright', async () => {
     const { code, err } = await check(tmp.write('newer.json', JSON.stringify({ ...sample(), version: 7 })));
     expect(code).toBe(1);
