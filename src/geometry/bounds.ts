@@ -62,12 +62,10 @@ function addEdgeBulge(start: Point, edge: Edge, end: Point, add: (x: number, y: 
 }
 
 /**
- * Default chordal tolerance, length units: 2e-4 of the bounding-box diagonal.
- * Why this figure: the flattened wall should not be what limits the answer. A fine cut-cell grid of up to about
- * a million cells has some 700-1000 cells across a port section, so a cell is about 1e-3 of the diagonal; 2e-4
- * keeps the chordal error to a fifth of a cell or less. A chord on a fillet of 1/20 of the diagonal then turns
- * about 10 degrees, whose corner is far too mild to show in the wall speeds at that grid size.
- * The chord count grows only as 1/sqrt(tolerance), so a port section stays at a few hundred segments.
+ * Default chordal tolerance, length units: 2e-4 of the bounding-box diagonal, for drawing and for checking a
+ * section's geometry, never for solving it. A solve flattens for its own grid (src/study, solveFlattenTolerance):
+ * at this tolerance every chord corner is a real corner to the solver, whose speed spike a finer grid resolves
+ * better, so the wall speeds would get worse as the grid is refined.
  * Falls back to 1 length unit for an empty or single-point section (which the tracing then rejects).
  */
 export function defaultTolerance(section: Section): number {

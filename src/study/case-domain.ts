@@ -8,7 +8,6 @@ import { gridFrame } from '../solver/rasterise/frame.ts';
 import type { FlowDomain } from '../solver/types.ts';
 import { StudyError } from './errors.ts';
 
-
 /** What to solve. */
 export interface CaseSpec {
   /** Variant name; default the document's active variant. */
