@@ -1,21 +1,14 @@
 /** The app during and after drags: let go on a shape that cannot be solved, a second finger on a handle, the speed reference mid-drag. */
 
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import type { PortDocument } from '../../src/document/types.ts';
 import { activeSection, activeVariant, liftHandlePosition } from '../../src/editor/index.ts';
 import { appDocument, between, pressAndMove, toPage, zoomedShortSideGrip } from './app-fillet.ts';
-import { CHECK_MS, solveCount, startApp, waitForFullSolves, withApp, type AppSession } from './app-session.ts';
+import { CHECK_MS, solveCount, waitForFullSolves } from './app-session.ts';
+import { appSuite } from './app-suite.ts';
 
-let session: AppSession;
-
-beforeAll(async () => {
-  session = await startApp();
-}, CHECK_MS);
-
-afterAll(async () => {
-  await session?.close();
-});
+const withApp = appSuite();
 
 /** Device px widths of the WebGL picture and of the label layer over it (the same unless drawing mid-drag). */
 function layerWidths(page: Page): Promise<{ picture: number; labels: number }> {
@@ -30,7 +23,7 @@ const liftOf = (doc: PortDocument) => activeVariant(doc).parts?.valve?.lift;
 
 describe('drags: unusual ends and the picture mid-drag', () => {
   it('dragging the valve shut on its seat (a shape that cannot be solved) stops at the last lift that builds, says why, and ends the drag drawing', async () => {
-    await withApp(session, async ({ page, problems }) => {
+    await withApp(async ({ page, problems }) => {
       const valve = activeVariant(await appDocument(page)).parts?.valve;
       if (!valve) throw new Error('the sample has no valve');
       // The lift handle dragged 4 mm past the seat: the tool asks for lift 0, where the valve head touches the seat,
@@ -55,7 +48,7 @@ describe('drags: unusual ends and the picture mid-drag', () => {
   }, CHECK_MS);
 
   it('a second finger put down on a handle mid-drag does not move the point held by the first', async () => {
-    await withApp(session, async ({ context, page, problems }) => {
+    await withApp(async ({ context, page, problems }) => {
       const grip = await zoomedShortSideGrip(page, 4);
       const radiusOf = async () => activeSection(await appDocument(page)).outline.vertices[grip.vertex].filletRadius ?? 0;
       // Another handle in sight: the corner next to the held one.
@@ -86,7 +79,7 @@ describe('drags: unusual ends and the picture mid-drag', () => {
   }, CHECK_MS);
 
   it('with speeds against the tightest station, drag previews are scaled as the full solve was (the colour bar holds)', async () => {
-    await withApp(session, async ({ page, problems }) => {
+    await withApp(async ({ page, problems }) => {
       const choose = page.locator('.lil-controller', { has: page.locator('.lil-name', { hasText: 'ratio of speed to' }) }).locator('select');
       // The setting sits in a folded group of the settings panel.
       await choose.selectOption('tightest station', { force: true });

@@ -1,21 +1,14 @@
 /** Typed values in the app: an exact short-side radius typed after clicking its handle; a wall named from the panel. */
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { activeSection } from '../../src/editor/index.ts';
 import { appDocument, zoomedShortSideGrip } from './app-fillet.ts';
-import { CHECK_MS, startApp, waitForFullSolves, withApp, type AppSession } from './app-session.ts';
-let session: AppSession;
-
-beforeAll(async () => {
-  session = await startApp();
-}, CHECK_MS);
-
-afterAll(async () => {
-  await session?.close();
-});
+import { CHECK_MS, waitForFullSolves } from './app-session.ts';
+import { appSuite } from './app-suite.ts';
+const withApp = appSuite();
 
 describe('typed values for the selection', () => {
   it('clicking the short-side fillet handle offers its radius; typing 9.5 sets exactly 9.5 and re-solves', async () => {
-    await withApp(session, async ({ page, problems }) => {
+    await withApp(async ({ page, problems }) => {
       const grip = await zoomedShortSideGrip(page, 4);
       await page.mouse.click(grip.handle[0], grip.handle[1]);
       const field = page.locator('[data-field="fillet-radius"]');

@@ -4,22 +4,15 @@
  * document and in its box, and a file with a broken variant is refused by name while the work stays.
  */
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { PortDocument } from '../../src/document/types.ts';
 import { activeSection, applyEdit } from '../../src/editor/index.ts';
 import { runBin } from '../cli/helpers.ts';
 import { appDocument, dragFillet, shortSideCorner, zoomedShortSideGrip } from './app-fillet.ts';
-import { CHECK_MS, solveCount, startApp, waitForFullSolves, withApp, type AppSession } from './app-session.ts';
+import { CHECK_MS, solveCount, waitForFullSolves } from './app-session.ts';
+import { appSuite } from './app-suite.ts';
 
-let session: AppSession;
-
-beforeAll(async () => {
-  session = await startApp();
-}, CHECK_MS);
-
-afterAll(async () => {
-  await session?.close();
-});
+const withApp = appSuite();
 
 const statusText = (page: Page) => page.locator('#status').innerText();
 
@@ -36,7 +29,7 @@ async function openThroughPicker(page: Page, name: string, buffer: Buffer): Prom
 
 describe('a fillet dragged past what fits', () => {
   it('is held at the largest radius that fits, says so, solves, and the saved file passes check', async () => {
-    await withApp(session, async ({ page, problems }) => {
+    await withApp(async ({ page, problems }) => {
       const grip = await zoomedShortSideGrip(page, 4);
       const full = await solveCount(page, 'full');
       // 40.8 mm was where such a drag used to land; about 25.9 mm is the most that fits on this corner.
@@ -58,7 +51,7 @@ describe('a fillet dragged past what fits', () => {
 
 describe('undo and redo', () => {
   it('undoing a drag restores the document exactly, redo re-applies it, from keys and buttons', async () => {
-    await withApp(session, async ({ page, problems }) => {
+    await withApp(async ({ page, problems }) => {
       const before = await appDocument(page);
       expect(await page.locator('#undo-button').isDisabled()).toBe(true);
       const grip = await zoomedShortSideGrip(page, 4);
@@ -82,7 +75,7 @@ describe('undo and redo', () => {
   }, CHECK_MS);
 
   it('Ctrl+Z after a typed lift restores the lift in the document and in the box; uncommitted typing is the box\'s own', async () => {
-    await withApp(session, async ({ page, problems }) => {
+    await withApp(async ({ page, problems }) => {
       const liftOf = async () => {
         const doc = await appDocument(page);
         return doc.variants.find((v) => v.name === doc.activeVariant)!.parts!.valve!.lift;
@@ -111,7 +104,7 @@ describe('undo and redo', () => {
 
 describe('opening a file', () => {
   it('a file with a variant that does not build is refused naming the variant, and the work, title and picture stay; a good one opens and undoes', async () => {
-    await withApp(session, async ({ page, problems }) => {
+    await withApp(async ({ page, problems }) => {
       const before = await appDocument(page);
       const title = await page.locator('#doc-title').innerText();
       const full = await solveCount(page, 'full');

@@ -3,18 +3,11 @@
  * the status line, draws a new full solve, and a later edit solves.
  */
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { CHECK_MS, solveCount, startApp, waitForFullSolves, withApp, type AppSession } from './app-session.ts';
+import { describe, expect, it } from 'vitest';
+import { CHECK_MS, solveCount, waitForFullSolves } from './app-session.ts';
+import { appSuite } from './app-suite.ts';
 
-let session: AppSession;
-
-beforeAll(async () => {
-  session = await startApp();
-}, CHECK_MS);
-
-afterAll(async () => {
-  await session?.close();
-});
+const withApp = appSuite();
 
 const RESTARTED = /^The solver stopped (unexpectedly|answering) and was restarted; solving again\.$/;
 const SOLVED_AGAIN = 'The solver was restarted after it stopped, and the picture is solved again.';
@@ -43,7 +36,7 @@ async function laterEditSolves(page: Page): Promise<void> {
 
 describe('a solver worker that stops', () => {
   it('while idle is replaced, the status line says so, the picture is solved again and a later edit solves', async () => {
-    await withApp(session, async ({ page, problems }) => {
+    await withApp(async ({ page, problems }) => {
       await page.selectOption('#variant-select', 'generous short side');
       await waitForFullSolves(page, 2);
       const full = await solveCount(page, 'full');
@@ -57,7 +50,7 @@ describe('a solver worker that stops', () => {
   }, CHECK_MS);
 
   it('mid-solve is replaced, the job is run again and drawn, and a later edit solves', async () => {
-    await withApp(session, async ({ page, problems }) => {
+    await withApp(async ({ page, problems }) => {
       const full = await solveCount(page, 'full');
       await page.selectOption('#variant-select', 'generous short side');
       await stopSolverWorker(page);
