@@ -11,6 +11,5 @@ export function fileCells(document: PortDocument): number {
 
 /** Throws GeometryError or PartsError (both the porter's to fix); anything else is a fault. */
 export function variantDomain(variant: Variant, document: PortDocument): FlowDomain {
-  const doc = { ...document, variants: [variant], activeVariant: variant.name };
-  return caseSetup(doc, { targetCells: fileCells(document) }).domain;
+  return caseSetup(document, { variant: variant.name, targetCells: fileCells(document) }).domain;
 }
