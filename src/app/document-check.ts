@@ -1,4 +1,6 @@
 /** Whether a document may be committed: every variant builds as `portwright check` and `solve` build it. */
+import { checkDocumentShape } from '../document/load.ts';
+import { DocumentError } from '../document/errors.ts';
 import type { PortDocument, Variant } from '../document/types.ts';
 import { GeometryError } from '../geometry/index.ts';
 import { PartsError } from '../parts/index.ts';
@@ -12,13 +14,26 @@ export class DocumentCheckError extends Error {
   }
 }
 
+/** A change whose result Save would refuse (the file's own rules, e.g. an outline with one anchor corner). */
+export class DocumentShapeError extends Error {
+  constructor(readonly fault: DocumentError) {
+    super(`The result would not save as a valid section file (${fault.problems.map((p) => (p.path === '' ? p.problem : `${p.path} ${p.problem}`)).join('; ')}).`);
+    this.name = 'DocumentShapeError';
+  }
+}
+
 /**
- * Throws DocumentCheckError for the first variant of `doc` that `check` would refuse: no inlet or no outlet edge,
- * or a case that does not set up on the file's own grid detail (a fillet too big, a crossing, a part that does not
+ * Throws DocumentShapeError when Save would refuse `doc`, and DocumentCheckError for the first variant of `doc`
+ * that `check` would refuse: no inlet or no outlet edge, or a case that does not set up on the file's own grid detail (a fillet too big, a crossing, a part that does not
  * fit). Variants that are the very objects `before` held, under the same units and grid detail, were checked when
  * they were committed and are not built again, so a drag step builds only the variant it changes.
  */
 export function checkDocument(doc: PortDocument, before?: PortDocument): void {
+  try {
+    checkDocumentShape(doc);
+  } catch (error) {
+    throw error instanceof DocumentError ? new DocumentShapeError(error) : error;
+  }
   if (!doc.variants.some((v) => v.name === doc.activeVariant)) {
     throw new DocumentCheckError(doc.activeVariant, 'The file names it as the active variant, but holds no variant of that name.');
   }
@@ -47,6 +62,7 @@ function variantProblem(doc: PortDocument, variant: Variant): { message: string;
 /** An error's message for the status line: for a refused edit the problem alone (the variant is the one in view). */
 export function plainMessage(error: unknown): string {
   if (error instanceof DocumentCheckError) return `${error.problem} The change was not made.`;
+  if (error instanceof DocumentShapeError) return `${error.message} The change was not made.`;
   return error instanceof Error ? error.message : String(error);
 }
 

@@ -45,6 +45,11 @@ export function saveDocument(doc: PortDocument): string {
   return writeJson(validate(documentSchema, doc, ''));
 }
 
+/** Throws DocumentError when `doc` is not a valid current-version document (the check Save makes), without writing it. */
+export function checkDocumentShape(doc: PortDocument): void {
+  validate(documentSchema, doc, '');
+}
+
 function checkSize(text: string): void {
   // Characters never outnumber UTF-8 bytes, so the cheap length test settles most huge inputs at once.
   const bytes = text.length > MAX_FILE_BYTES ? text.length : utf8Length(text);

@@ -74,12 +74,18 @@ export function insertVertex(doc: PortDocument, { edge, island, at }: InsertVert
 export const deleteVertexArgs = z.strictObject(vertexArgs);
 export type DeleteVertexArgs = z.infer<typeof deleteVertexArgs>;
 
-/** Removes a corner and joins its two edges into one (see mergeEdges); the first edge's role and name stay. */
+/**
+ * Removes a corner and joins its two edges into one (see mergeEdges); the first edge's role and name stay.
+ * An anchor corner (where the generated seat and bore join the port) is refused: an outline has none or two.
+ */
 export function deleteVertex(doc: PortDocument, { vertex, island }: DeleteVertexArgs): PortDocument {
   const edit = 'deleteVertex';
   const section = activeSection(doc, edit);
   const outline = outlineOf(section, island, edit);
   const corner = requireVertex(section, outline, island, vertex, edit);
+  if (corner.anchor) {
+    throw new EditError(edit, 'This corner is an anchor, where the seat and test bore join the port; it cannot be deleted. Move it instead.');
+  }
   const n = outline.vertices.length;
   if (n <= 3) {
     throw new EditError(edit, `An outline needs at least 3 corners; ${outlineName(section, island)} has ${n}.`);

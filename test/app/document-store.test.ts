@@ -1,7 +1,7 @@
 /** The store checks every change before it lands, clamps a too-big fillet drag, and keeps a drag as one undo step. */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { checkDocument, DocumentCheckError, documentProblem, plainMessage } from '../../src/app/document-check.ts';
+import { checkDocument, DocumentCheckError, DocumentShapeError, documentProblem, plainMessage } from '../../src/app/document-check.ts';
 import { DocumentStore } from '../../src/app/document-store.ts';
 import { clampEdit } from '../../src/app/edit-clamp.ts';
 import { summariseVariant } from '../../src/cli/section-summary.ts';
@@ -87,6 +87,24 @@ describe('the store refuses what cannot be solved', () => {
     expect(() => store.replace(broken, 'Open "broken.json"')).toThrow(`the variant "${other}" cannot be solved. The fillet at corner`);
     expect(store.doc).toBe(work);
     expect(store.steps(5).undo).toEqual(['Set fillet radius']);
+  });
+
+  it('a document Save would refuse is never committed, even when every variant builds (one anchor corner left)', () => {
+    const store = newStore();
+    const section = activeSection(store.doc);
+    const k = section.outline.vertices.findIndex((v) => v.anchor);
+    const vertices = section.outline.vertices.map((v, i) => (i === k ? { at: v.at } : v));
+    const oneAnchor = { ...store.doc, variants: store.doc.variants.map((v) => (v.name === store.doc.activeVariant ? { ...v, parts: undefined, section: { ...v.section, outline: { ...v.section.outline, vertices } } } : v)) };
+    const work = store.doc;
+    let thrown: unknown;
+    try {
+      store.replace(oneAnchor as PortDocument, 'Open "one-anchor.json"');
+    } catch (error) {
+      thrown = error;
+    }
+    expect(thrown).toBeInstanceOf(DocumentShapeError);
+    expect(plainMessage(thrown)).toMatch(/^The result would not save as a valid section file \(variants\[\d\]\.section\.outline\.vertices\[\d+\]\.anchor is one of 1 anchor corners; .*\)\. The change was not made\.$/);
+    expect(store.doc).toBe(work);
   });
 });
 

@@ -48,6 +48,16 @@ describe('movePoint', () => {
 });
 
 describe('insertVertex and deleteVertex', () => {
+  it('refuses to delete an anchor corner (an outline has none or two), with or without parts', () => {
+    const doc = boxDocument();
+    const section = active(doc);
+    const anchored = { ...doc, variants: doc.variants.map((v) => (v.name === doc.activeVariant ? {
+      ...v, section: { ...section, outline: { ...section.outline, vertices: section.outline.vertices.map((c, i) => (i === 0 || i === 2 ? { ...c, anchor: true as const } : c)) } },
+    } : v)) };
+    expect(() => applyEdit(anchored, 'deleteVertex', { vertex: 2 })).toThrow(/This corner is an anchor, where the seat and test bore join the port; it cannot be deleted\. Move it instead\./);
+    expect(active(applyEdit(anchored, 'deleteVertex', { vertex: 1 })).outline.vertices.filter((c) => c.anchor)).toHaveLength(2);
+  });
+
   it('splits a line at the nearest point of the edge, both halves keeping role and name', () => {
     const doc = boxDocument();
     const next = applyEdit(doc, 'insertVertex', { edge: 0, at: [10, 0.4] });
