@@ -18,6 +18,8 @@ export function cspDirectives(mode: CspMode): CspDirectives {
     // lil-gui (the settings panel) adds its stylesheet as a <style> element, and in dev Vite adds imported CSS the
     // same way; both are refused without 'unsafe-inline'. Styles cannot run code.
     'style-src': ["'self'", "'unsafe-inline'"],
+    // lil-gui's stylesheet carries its icon font (the folder arrows) as a data: URI.
+    'font-src': ["'self'", 'data:'],
     // The favicon is a data: URI; a traced photo shown under the drawing will be a blob: URL.
     'img-src': ["'self'", 'data:', 'blob:'],
     // In dev, Vite's hot reload talks over a WebSocket; the built page needs none.

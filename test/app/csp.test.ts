@@ -5,7 +5,7 @@ import { contentSecurityPolicy, cspDirectives } from '../../src/app/csp.ts';
 describe('contentSecurityPolicy', () => {
   it('is the built page\'s policy, written out in full', () => {
     expect(contentSecurityPolicy('built')).toBe(
-      "default-src 'self'; script-src 'self'; worker-src 'self'; style-src 'self' 'unsafe-inline'; " +
+      "default-src 'self'; script-src 'self'; worker-src 'self'; style-src 'self' 'unsafe-inline'; font-src 'self' data:; " +
         "img-src 'self' data: blob:; connect-src 'self'; object-src 'none'; base-uri 'none'; form-action 'none'",
     );
   });
