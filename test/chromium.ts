@@ -118,7 +118,7 @@ export function prepareBrowser(
   const plan = planBrowser(machine);
   if (plan.kind === 'found') return plan.path;
   if (plan.kind === 'fail') throw new Error(plan.message);
-  say("Installing Debian's chromium for the browser tests with apt-get, which takes a minute or two.");
+  say("Installing Debian's chromium for the browser tests with apt-get (about 110 MB to download).");
   const failure = install();
   const path = findChromium(machine);
   if (failure === null && path !== null) {
