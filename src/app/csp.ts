@@ -15,8 +15,8 @@ export function cspDirectives(mode: CspMode): CspDirectives {
     'default-src': ["'self'"],
     'script-src': ["'self'"],
     'worker-src': ["'self'"],
-    // lil-gui (the settings panel) adds its stylesheet as a <style> element, and in dev Vite adds imported CSS the
-    // same way; both are refused without 'unsafe-inline'. Styles cannot run code.
+    // lil-gui (the settings panel) and the bench panel add their stylesheets as <style> elements, and in dev Vite
+    // adds any CSS a module imports the same way; all are refused without 'unsafe-inline'. Styles cannot run code.
     'style-src': ["'self'", "'unsafe-inline'"],
     // lil-gui's stylesheet carries its icon font (the folder arrows) as a data: URI.
     'font-src': ["'self'", 'data:'],
