@@ -2,7 +2,7 @@
  * Interaction benchmark in a real browser: drags the short-side fillet handle of the sample and reports how long
  * a pointer movement takes to come back as a repainted coarse field, on the page clock and on the screen, and how
  * long the full grid takes after release.
- * Run: npm run bench:browser (headless Debian chromium, software WebGL). Writes /tmp/app-after-drag.png.
+ * Run: npm run bench:browser (headless chromium: Debian's, or PORTWRIGHT_CHROMIUM; software WebGL). Writes /tmp/app-after-drag.png.
  *
  * Three drags, one after the other on the same page:
  *  1. out to the generous radius in STEPS mouse steps, each waiting for its repaint: page-clock times;

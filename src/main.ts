@@ -1,4 +1,5 @@
 /** Portwright in the browser: the one file that wires document, editor, workers and view together. */
+import './app/zod-jitless.ts'; // first: zod must be jitless before any schema is built (the CSP refuses eval)
 import sampleText from '../samples/short-side-compare.json?raw';
 import { acceptDrops, downloadDocument, pickFile, type FileHandlers } from './app/files.ts';
 import { autosaver } from './app/autosave.ts';

@@ -5,10 +5,11 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import { createServer, type ViteDevServer } from 'vite';
+import { chromiumPath } from '../chromium.ts';
 
 const ROOT = resolve(import.meta.dirname, '../..');
 
-/** Debian chromium, software WebGL (SwiftShader) so the check runs on machines without a GPU. */
+/** Chromium (Debian's, or PORTWRIGHT_CHROMIUM; see test/chromium.ts), software WebGL (SwiftShader) so the check runs on machines without a GPU. */
 export const CHROMIUM_ARGS = [
   '--headless',
   '--no-sandbox',
@@ -46,7 +47,7 @@ export async function startApp(extraArgs: readonly string[] = []): Promise<AppSe
     await server.listen();
     const url = server.resolvedUrls?.local[0];
     if (!url) throw new Error('Vite dev server reported no local address');
-    browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: [...CHROMIUM_ARGS, ...extraArgs] });
+    browser = await chromium.launch({ executablePath: chromiumPath(), args: [...CHROMIUM_ARGS, ...extraArgs] });
     const opened = browser;
     return {
       server,

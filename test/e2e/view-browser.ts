@@ -1,4 +1,4 @@
-/** Browser-check plumbing for the view: a Vite dev server on a free port and headless Debian chromium via playwright-core. */
+/** Browser-check plumbing for the view: a Vite dev server on a free port and headless chromium (test/chromium.ts) via playwright-core. */
 
 import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -6,6 +6,7 @@ import { join, resolve } from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { createServer, type ViteDevServer } from 'vite';
 
+import { chromiumPath } from '../chromium.ts';
 import { CHROMIUM_ARGS } from './app-session.ts';
 
 export { CHROMIUM_ARGS };
@@ -31,7 +32,7 @@ export async function startSession(): Promise<BrowserSession> {
   await server.listen();
   const address = server.httpServer?.address();
   if (!address || typeof address === 'string') throw new Error('Vite dev server has no port');
-  const browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: CHROMIUM_ARGS });
+  const browser = await chromium.launch({ executablePath: chromiumPath(), args: CHROMIUM_ARGS });
   return {
     server,
     browser,
