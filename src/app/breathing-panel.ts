@@ -1,5 +1,6 @@
 /** Valve and seat numbers at the current lift, the greatest restriction, and notes against usual practice. */
-import type { PortDocument } from '../document/types.ts';
+import { areaLabel, lengthLabel } from '../breathing/units.ts';
+import type { PortDocument, Units } from '../document/types.ts';
 import { activeVariant } from '../editor/index.ts';
 import { metresPerUnit, partsBreathing, partsNotes, type PartsBreathing } from '../parts/index.ts';
 import type { mountBenchPanel } from './bench-panel.ts';
@@ -26,9 +27,9 @@ export function showPartsNumbers(host: HTMLElement, bench: BenchPanel, doc: Port
   host.replaceChildren(heading('Breathing at this lift'), readingTable(breathingRows(b, doc.units)), ...notes);
 }
 
-function breathingRows(b: PartsBreathing, u: string): ReadingRow[] {
-  const len = (v: number) => `${v.toFixed(u === 'mm' ? 2 : 4)} ${u}`;
-  const area = (v: number) => `${v.toFixed(u === 'mm' ? 1 : 4)} ${u}²`;
+function breathingRows(b: PartsBreathing, u: Units): ReadingRow[] {
+  const len = (v: number) => `${v.toFixed(u === 'mm' ? 2 : 4)} ${lengthLabel(u)}`;
+  const area = (v: number) => `${v.toFixed(u === 'mm' ? 1 : 4)} ${areaLabel(u)}`;
   return [
     ['lift, L/D', `${len(b.lift)}, ${b.ld.toFixed(3)}`],
     ['valve head area', area(b.headArea)],
