@@ -5,6 +5,7 @@ import { activeVariant } from '../editor/index.ts';
 import { metresPerUnit, partsBreathing, partsNotes, type PartsBreathing } from '../parts/index.ts';
 import type { mountBenchPanel } from './bench-panel.ts';
 import { heading, readingTable, type ReadingRow } from './panel-table.ts';
+import { endSentence } from './status.ts';
 
 type BenchPanel = ReturnType<typeof mountBenchPanel>;
 
@@ -21,7 +22,7 @@ export function showPartsNumbers(host: HTMLElement, bench: BenchPanel, doc: Port
   const notes = partsNotes(parts, doc.units).map((n) => {
     const p = document.createElement('p');
     p.className = `part-note ${n.level}`;
-    p.textContent = `${n.level === 'warn' ? 'Check: ' : 'Note: '}${n.message}`;
+    p.textContent = endSentence(`${n.level === 'warn' ? 'Check: ' : 'Note: '}${n.message}`);
     return p;
   });
   host.replaceChildren(heading('Breathing at this lift'), readingTable(breathingRows(b, doc.units)), ...notes);
