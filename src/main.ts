@@ -6,6 +6,7 @@ import { autosaver } from './app/autosave.ts';
 import type { ChangeCause } from './app/document-store.ts';
 import { plainMessage } from './app/document-check.ts';
 import { mountHistoryControls } from './app/history-controls.ts';
+import { Overlays } from './app/overlays.ts';
 import { startStore } from './app/start-document.ts';
 import { wireVariantButtons } from './app/variant-buttons.ts';
 import { EditorController } from './app/editor-controller.ts';
@@ -22,7 +23,7 @@ import { SolveIndicator } from './app/solve-indicator.ts';
 import { ReadingsPanel } from './app/readings-panel.ts';
 import { defaultSettings, parseLevels } from './app/settings.ts';
 import { buildSettingsPanel, type SettingsGroup } from './app/settings-panel.ts';
-import { StatusLine } from './app/status.ts';
+import { sentences, StatusLine } from './app/status.ts';
 import type { PortDocument } from './document/types.ts';
 import { activeSection, type CommandName } from './editor/index.ts';
 import { sectionBounds } from './geometry/index.ts';
@@ -92,7 +93,7 @@ const live = new LiveSolve(pool.live, {
 function showThinWalls(reply: FieldReply): void {
   if (reply.thinWalls.length === 0) return;
   const choices = Object.entries(CELLS_BY_DETAIL).map(([label, cells]) => ({ label, cells }));
-  status.show(reply.thinWalls.map((wall) => thinWallNote(wall, { units: store.doc.units, spacing: reply.h, choices })).join(' '), 'warn');
+  status.show(sentences(...reply.thinWalls.map((wall) => thinWallNote(wall, { units: store.doc.units, spacing: reply.h, choices }))), 'warn');
 }
 
 /** The case the study pipeline sets up for this grid (the command's `solve` sets up the same one). */
@@ -174,7 +175,7 @@ const fileHandlers: FileHandlers = {
     store.replace(doc, `Open "${name}"`);
     status.show(`Opened "${name}".`);
   },
-  onRejected: (message) => status.show(`${message} Your current work is unchanged.`, 'error'),
+  onRejected: (message) => status.show(sentences(message, 'Your current work is unchanged.'), 'error'),
 };
 
 function runCommand(name: CommandName): void {
@@ -187,7 +188,7 @@ function runCommand(name: CommandName): void {
     case 'toggleHelp': helpOverlay.hidden = !helpOverlay.hidden; return;
     case 'save': return status.show(`Saved as ${downloadDocument(store.doc)}.`);
     case 'open': return pickFile(byId('file-input'), fileHandlers);
-    case 'cancel': helpOverlay.hidden = true; return;
+    case 'cancel': overlays.closeAll(); return;
     case 'toggleInsertMode': return;
     case 'undo': return undoControls.undo();
     case 'redo': return undoControls.redo();
@@ -212,7 +213,7 @@ function applySettings(group: SettingsGroup): void {
       view.setColourRange({ mode: settings.colourMode, min: settings.colourMin, max: settings.colourMax });
     } catch (error) {
       // A fixed range whose top is not above its bottom: said in plain words; the colours keep their last range.
-      status.show(`${error instanceof Error ? error.message : String(error)} The colours keep their last range.`, 'error');
+      status.show(sentences(error instanceof Error ? error.message : String(error), 'The colours keep their last range.'), 'error');
     }
   }
   if (group === 'reference' && lastReply) picture.field(lastReply);
@@ -245,7 +246,10 @@ const partsPanel = new PartsPanel(gui, (part, values) => {
 partsPanel.update(store.doc);
 
 fillHelp(helpOverlay);
-helpOverlay.addEventListener('click', () => (helpOverlay.hidden = true));
+// Escape or a click outside closes the keys list, the history list and any open dialog.
+const overlays = new Overlays();
+overlays.add({ element: helpOverlay, owners: [byId('help-button')] });
+overlays.add({ element: undoControls.list.popover, owners: [undoControls.list.button], onClose: undoControls.refresh });
 byId('help-button').addEventListener('click', () => runCommand('toggleHelp'));
 byId('open-button').addEventListener('click', () => runCommand('open'));
 byId('save-button').addEventListener('click', () => runCommand('save'));

@@ -1,9 +1,11 @@
 /** Valve and seat numbers at the current lift, the greatest restriction, and notes against usual practice. */
-import type { PortDocument } from '../document/types.ts';
+import { areaLabel, lengthLabel } from '../breathing/units.ts';
+import type { PortDocument, Units } from '../document/types.ts';
 import { activeVariant } from '../editor/index.ts';
 import { metresPerUnit, partsBreathing, partsNotes, type PartsBreathing } from '../parts/index.ts';
 import type { mountBenchPanel } from './bench-panel.ts';
 import { heading, readingTable, type ReadingRow } from './panel-table.ts';
+import { endSentence } from './status.ts';
 
 type BenchPanel = ReturnType<typeof mountBenchPanel>;
 
@@ -20,15 +22,15 @@ export function showPartsNumbers(host: HTMLElement, bench: BenchPanel, doc: Port
   const notes = partsNotes(parts, doc.units).map((n) => {
     const p = document.createElement('p');
     p.className = `part-note ${n.level}`;
-    p.textContent = `${n.level === 'warn' ? 'Check: ' : 'Note: '}${n.message}`;
+    p.textContent = endSentence(`${n.level === 'warn' ? 'Check: ' : 'Note: '}${n.message}`);
     return p;
   });
   host.replaceChildren(heading('Breathing at this lift'), readingTable(breathingRows(b, doc.units)), ...notes);
 }
 
-function breathingRows(b: PartsBreathing, u: string): ReadingRow[] {
-  const len = (v: number) => `${v.toFixed(u === 'mm' ? 2 : 4)} ${u}`;
-  const area = (v: number) => `${v.toFixed(u === 'mm' ? 1 : 4)} ${u}²`;
+function breathingRows(b: PartsBreathing, u: Units): ReadingRow[] {
+  const len = (v: number) => `${v.toFixed(u === 'mm' ? 2 : 4)} ${lengthLabel(u)}`;
+  const area = (v: number) => `${v.toFixed(u === 'mm' ? 1 : 4)} ${areaLabel(u)}`;
   return [
     ['lift, L/D', `${len(b.lift)}, ${b.ld.toFixed(3)}`],
     ['valve head area', area(b.headArea)],

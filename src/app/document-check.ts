@@ -4,7 +4,9 @@ import { DocumentError } from '../document/errors.ts';
 import type { PortDocument, Variant } from '../document/types.ts';
 import { GeometryError } from '../geometry/index.ts';
 import { PartsError } from '../parts/index.ts';
+import { EditError } from '../editor/errors.ts';
 import { caseSetup, CELLS_BY_DETAIL, missingEnds, StudyError } from '../study/index.ts';
+import { sentences } from './status.ts';
 
 /** A variant that cannot be solved; `problem` is the plain sentence(s) saying why. */
 export class DocumentCheckError extends Error {
@@ -61,9 +63,24 @@ function variantProblem(doc: PortDocument, variant: Variant): { message: string;
 
 /** An error's message for the status line: for a refused edit the problem alone (the variant is the one in view). */
 export function plainMessage(error: unknown): string {
-  if (error instanceof DocumentCheckError) return `${error.problem} The change was not made.`;
-  if (error instanceof DocumentShapeError) return `${error.message} The change was not made.`;
+  if (error instanceof DocumentCheckError) return sentences(error.problem, 'The change was not made.');
+  if (error instanceof DocumentShapeError) return sentences(error.message, 'The change was not made.');
+  if (error instanceof EditError) return editMessage(error);
   return error instanceof Error ? error.message : String(error);
+}
+
+/**
+ * A refused edit argument without the edit's internal name: "setFilletRadius: radius: A fillet radius cannot be
+ * negative…" is shown from "A fillet radius…"; a message that is not a sentence of its own names the value refused.
+ */
+function editMessage(error: EditError): string {
+  const prefix = `${error.edit}: `;
+  if (error.edit === '' || !error.message.startsWith(prefix)) return error.message;
+  const rest = error.message.slice(prefix.length);
+  const field = /^([\w.[\]]+): ([\s\S]*)$/.exec(rest);
+  const problem = field ? field[2] : rest;
+  if (/^[A-Z]/.test(problem)) return problem;
+  return `The value${field ? ` of ${field[1]}` : ''} was refused: ${problem}`;
 }
 
 /** Why `doc` cannot be committed (a sentence naming the variant), or null when every variant builds. */

@@ -1,4 +1,5 @@
 /** Wires pointer and keyboard events to the pure drag tool and sends its edits to the document store. */
+import { lengthLabel } from '../breathing/units.ts';
 import type { PortDocument, Point } from '../document/types.ts';
 import {
   activeSection, activeVariant, DEFAULT_GRID_STEP, findShortcut, hitTest, IDLE, listHandles, sameHandle, stepTool,
@@ -205,9 +206,9 @@ export class EditorController {
     const { units } = this.store.doc;
     const digits = units === 'mm' ? 1 : 3;
     const section = activeSection(this.store.doc);
-    if (ref.kind === 'fillet') return `R ${filletRadiusOf(section, ref).toFixed(digits)} ${units}`;
+    if (ref.kind === 'fillet') return `R ${filletRadiusOf(section, ref).toFixed(digits)} ${lengthLabel(units)}`;
     const valve = activeVariant(this.store.doc).parts?.valve;
-    if (ref.kind === 'lift' && valve) return `lift ${valve.lift.toFixed(digits)} ${units}`;
+    if (ref.kind === 'lift' && valve) return `lift ${valve.lift.toFixed(digits)} ${lengthLabel(units)}`;
     if (ref.kind === 'valve-axis') return 'valve axis';
     return undefined;
   }

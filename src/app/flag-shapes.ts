@@ -1,17 +1,20 @@
 /** Turns a flow reading into the view's flag overlays: slow cells hatched, the tightest station, over-wide stations, detachment. */
+import { lengthLabel } from '../breathing/units.ts';
+import type { Units } from '../document/types.ts';
 import type { FieldReply } from '../workers/protocol.ts';
 import type { FlagLine, FlagMarker, FlagShapes } from '../view/types.ts';
 
-export function flagShapes(reply: FieldReply, units: string): FlagShapes {
+export function flagShapes(reply: FieldReply, units: Units): FlagShapes {
   const reading = reply.reading;
   if (!reading) return { hatched: [], lines: [], markers: [] };
   const digits = units === 'mm' ? 1 : 3;
+  const label = lengthLabel(units);
   const lines: FlagLine[] = [];
   const markers: FlagMarker[] = [];
   const t = reading.tightest;
-  if (t) lines.push({ xy: new Float64Array([t.x1, t.y1, t.x2, t.y2]), label: `tightest ${t.width.toFixed(digits)} ${units}` });
+  if (t) lines.push({ xy: new Float64Array([t.x1, t.y1, t.x2, t.y2]), label: `tightest ${t.width.toFixed(digits)} ${label}` });
   for (const w of reading.overWide) {
-    lines.push({ xy: new Float64Array([w.x1, w.y1, w.x2, w.y2]), label: `over-wide +${w.excess.toFixed(digits)} ${units}` });
+    lines.push({ xy: new Float64Array([w.x1, w.y1, w.x2, w.y2]), label: `over-wide +${w.excess.toFixed(digits)} ${label}` });
   }
   // Only the port's walls get detachment flags: the bore below the valve is the bench's, not the porter's.
   for (const d of reading.detachments) {

@@ -1,5 +1,6 @@
-/** The Undo and Redo buttons of the top bar: enabled when there is a step, each naming its steps in its tooltip. */
+/** The Undo and Redo buttons of the top bar (each naming its steps in its tooltip) and the History list beside them. */
 import type { DocumentStore } from './document-store.ts';
+import { mountHistoryList, travel, type HistoryList } from './history-list.ts';
 
 /** Steps named in a button's tooltip. */
 const LISTED = 12;
@@ -8,26 +9,25 @@ export interface HistoryControls {
   /** Undo one step and say which (or that there is nothing to undo). */
   undo(): void;
   redo(): void;
-  /** Show the buttons' state again (after any committed change). */
+  /** Show the buttons' state and the list again (after any committed change). */
   refresh(): void;
+  /** The History button and its list of steps. */
+  readonly list: HistoryList;
 }
 
 /** `say` puts a sentence in the status line. */
 export function mountHistoryControls(undoButton: HTMLButtonElement, redoButton: HTMLButtonElement, store: DocumentStore, say: (message: string) => void): HistoryControls {
+  const list = mountHistoryList(redoButton, store, say);
   const controls: HistoryControls = {
-    undo: () => {
-      const label = store.undo();
-      say(label === null ? 'Nothing to undo.' : `Undone: ${label}.`);
-    },
-    redo: () => {
-      const label = store.redo();
-      say(label === null ? 'Nothing to redo.' : `Redone: ${label}.`);
-    },
+    undo: () => say(travel(store, 'undo', 1)),
+    redo: () => say(travel(store, 'redo', 1)),
     refresh: () => {
       const { undo, redo } = store.steps(LISTED);
       show(undoButton, undo, 'Undo', 'Ctrl+Z', 'Nothing to undo');
       show(redoButton, redo, 'Redo', 'Ctrl+Shift+Z or Ctrl+Y', 'Nothing to redo');
+      list.refresh();
     },
+    list,
   };
   undoButton.addEventListener('click', controls.undo);
   redoButton.addEventListener('click', controls.redo);

@@ -1,4 +1,6 @@
 /** Plots beside the field: station width and mean speed along the port, and speed along a chosen wall. */
+import { lengthLabel } from '../breathing/units.ts';
+import type { Units } from '../document/types.ts';
 import type { FlowReading } from '../solver/reading/index.ts';
 import { drawPlot, type PlotSeries } from '../view/line-plot.ts';
 
@@ -23,9 +25,9 @@ export class PlotsPanel {
     host.replaceChildren(this.stationsCanvas, pickRow, this.wallCanvas, this.wallCaption);
   }
 
-  show(reading: FlowReading, units: string): void {
+  show(reading: FlowReading, units: Units): void {
     this.reading = reading;
-    this.units = units;
+    this.units = lengthLabel(units);
     const names = reading.walls.map((w) => w.name);
     const keep = names.includes(this.wallPick.value) ? this.wallPick.value : names.find((n) => n === 'short side') ?? names[0] ?? '';
     this.wallPick.replaceChildren(...names.map((n) => new Option(n, n, false, n === keep)));

@@ -1,7 +1,10 @@
 /** The readings beside the field: the numbers the solver and the flow reading computed, and the ranked findings. */
+import { lengthLabel } from '../breathing/units.ts';
+import type { Units } from '../document/types.ts';
 import type { Finding } from '../solver/reading/index.ts';
 import type { FieldReply } from '../workers/protocol.ts';
 import { heading, readingTable, type ReadingRow } from './panel-table.ts';
+import { endSentence } from './status.ts';
 
 export interface ReadingsHooks {
   /** A finding was clicked: zoom the view to its place. */
@@ -11,11 +14,12 @@ export interface ReadingsHooks {
 export class ReadingsPanel {
   constructor(private readonly host: HTMLElement, private readonly hooks: ReadingsHooks) {}
 
-  show(reply: FieldReply, units: string, refineMs: number): void {
+  show(reply: FieldReply, units: Units, refineMs: number): void {
     const digits = units === 'mm' ? 1 : 3;
+    const label = lengthLabel(units);
     const reading = reply.reading;
     const rows: ReadingRow[] = [
-      ['grid', `${reply.nx} × ${reply.ny} cells, ${reply.h.toFixed(units === 'mm' ? 2 : 4)} ${units}`],
+      ['grid', `${reply.nx} × ${reply.ny} cells, ${reply.h.toFixed(units === 'mm' ? 2 : 4)} ${label}`],
       ['solve', `${reply.iterations} iterations, residual ${reply.residual.toExponential(1)}, ${refineMs.toFixed(0)} ms`],
       ['peak speed ratio (clear of sharp corners)', peakText(reply.peak, digits), 'peak'],
     ];
@@ -23,7 +27,7 @@ export class ReadingsPanel {
     for (const wall of reading?.walls ?? []) {
       if (wall.inPort) rows.push([`${wall.name}, fastest wall flow`, `${wall.peak.speedRatio.toFixed(3)}`, `${slug(wall.name)}-peak`]);
     }
-    if (reading?.tightest) rows.push(['tightest section', `${reading.tightest.width.toFixed(digits)} ${units} wide`, 'tightest']);
+    if (reading?.tightest) rows.push(['tightest section', `${reading.tightest.width.toFixed(digits)} ${label} wide`, 'tightest']);
     if (reading) rows.push(['slow share', `${(100 * reading.slow.share).toFixed(1)}% of the port and bowl`, 'slow-share']);
     rows.push(['conductance', `${reply.conductance.toFixed(4)} (per unit depth)`]);
     this.host.replaceChildren(heading('Readings'), readingTable(rows), ...this.findings(reading?.findings ?? []));
@@ -47,7 +51,7 @@ export class ReadingsPanel {
       const item = document.createElement('li');
       const button = document.createElement('button');
       button.type = 'button';
-      button.textContent = finding.text;
+      button.textContent = endSentence(finding.text);
       button.title = 'Show this place';
       button.addEventListener('click', () => this.hooks.onFinding(finding));
       item.append(button);

@@ -1,7 +1,9 @@
 /** Typed values for what is selected: a corner's fillet radius, an edge's role and wall name. Each change is one edit. */
+import { lengthLabel } from '../breathing/units.ts';
 import type { PortDocument } from '../document/types.ts';
 import { WALL_NAMES } from '../document/types.ts';
 import { activeSection, type HandleRef } from '../editor/index.ts';
+import { boxText, typedChange, type BoxUnit } from './box-precision.ts';
 
 type Send = (name: string, args: unknown) => void;
 
@@ -19,9 +21,9 @@ export class SelectionPanel {
       const vertex = outline.vertices[selection.vertex];
       if (!vertex) return this.host.replaceChildren();
       title.textContent = `Corner ${selection.vertex + 1}${island === undefined ? '' : ` of ${section.islands[island].name}`}`;
-      const radius = numberInput(vertex.filletRadius ?? 0, (r) => this.send('setFilletRadius', { vertex: selection.vertex, island, radius: r }));
+      const radius = numberInput(vertex.filletRadius ?? 0, doc.units, (r) => this.send('setFilletRadius', { vertex: selection.vertex, island, radius: r }));
       radius.dataset.field = 'fillet-radius';
-      return this.host.replaceChildren(title, row(`fillet radius, ${doc.units}`, radius));
+      return this.host.replaceChildren(title, row(`fillet radius, ${lengthLabel(doc.units)}`, radius));
     }
     const edgeIndex = 'edge' in selection ? selection.edge : -1;
     const edge = outline.edges[edgeIndex];
@@ -41,15 +43,17 @@ export class SelectionPanel {
   }
 }
 
-function numberInput(value: number, onChange: (v: number) => void): HTMLInputElement {
+/** A box showing `exact` rounded to its unit; a committed number other than the shown one is sent as typed. */
+function numberInput(exact: number, unit: BoxUnit, onChange: (v: number) => void): HTMLInputElement {
   const input = document.createElement('input');
   input.type = 'number';
   input.min = '0';
   input.step = 'any';
-  input.value = String(Math.round(value * 1e4) / 1e4);
+  input.value = boxText(exact, unit);
   input.addEventListener('change', () => {
-    const v = Number(input.value);
-    if (input.value.trim() !== '' && Number.isFinite(v)) onChange(v);
+    const change = input.value.trim() === '' ? null : typedChange(Number(input.value), exact, unit);
+    if (change === null) input.value = boxText(exact, unit);
+    else onChange(change);
   });
   return input;
 }

@@ -1,6 +1,7 @@
 /** The settings panel (lil-gui) over the one settings object; tells the app which group changed. */
-import GUI from 'lil-gui';
+import GUI, { type Controller } from 'lil-gui';
 import { CELLS_BY_DETAIL } from '../study/grid-detail.ts';
+import { showRounded, type BoxUnit } from './box-precision.ts';
 import type { AppSettings } from './settings.ts';
 import { cellsText } from './solve-indicator.ts';
 
@@ -19,8 +20,8 @@ export function buildSettingsPanel(host: HTMLElement, settings: AppSettings, onC
   const draw = gui.addFolder('Colours and lines');
   draw.add(settings, 'reference', ['mean inlet speed', 'tightest station']).name('ratio of speed to').onFinishChange(() => onChange('reference'));
   draw.add(settings, 'colourMode', { 'automatic': 'auto', 'fixed (compare variants)': 'fixed' }).name('colour range').onFinishChange(() => onChange('draw'));
-  draw.add(settings, 'colourMin', 0, 5, 0.05).name('fixed from').onFinishChange(() => onChange('draw'));
-  draw.add(settings, 'colourMax', 0.1, 10, 0.05).name('fixed to').onFinishChange(() => onChange('draw'));
+  rounded(draw.add(settings, 'colourMin', 0, 5, 0.05).name('fixed from').onFinishChange(() => onChange('draw')), 'ratio');
+  rounded(draw.add(settings, 'colourMax', 0.1, 10, 0.05).name('fixed to').onFinishChange(() => onChange('draw')), 'ratio');
   draw.add(settings, 'contourLevels').name('contour levels').onFinishChange(() => onChange('draw'));
   draw.close();
 
@@ -33,10 +34,15 @@ export function buildSettingsPanel(host: HTMLElement, settings: AppSettings, onC
   layers.close();
 
   const reading = gui.addFolder('Flow reading');
-  reading.add(settings, 'slowFraction', 0.05, 0.9, 0.05).name('slow below (of local mean)').onFinishChange(() => onChange('reading'));
-  reading.add(settings, 'inletSpeedMs', 5, 300, 0.5).name('inlet speed, m/s').onFinishChange(() => onChange('reading'));
+  rounded(reading.add(settings, 'slowFraction', 0.05, 0.9, 0.05).name('slow below (of local mean)').onFinishChange(() => onChange('reading')), 'ratio');
+  rounded(reading.add(settings, 'inletSpeedMs', 5, 300, 0.5).name('inlet speed, m/s').onFinishChange(() => onChange('reading')), 'm/s');
   reading.close();
 
   gui.add(settings, 'snapping').name('snap points').onChange(() => onChange('edit'));
   return gui;
+}
+
+/** Settings are not the document: a box shows its unit's rounding (e.g. a flow scale of 63.2456 m/s sent from the bench as 63.2). */
+function rounded(controller: Controller, unit: BoxUnit): void {
+  showRounded(controller, () => unit);
 }

@@ -134,6 +134,16 @@ export const METRIC_UNITS: UnitSystem = { length: 'mm', speed: 'm/s', flow: 'L/s
 /** Inch workshop, as most flow benches read: inch, ft/s, CFM, in H2O. */
 export const INCH_UNITS: UnitSystem = { length: 'inch', speed: 'ft/s', flow: 'CFM', pressure: 'inH2O' };
 
+/** The one spelling of a length unit on screen and in messages: "mm" or "in" (the document says "inch"). */
+export function lengthLabel(length: UnitChoices['length']): string {
+  return UNIT_TABLE.length[length].label;
+}
+
+/** The one spelling of an area unit on screen: "mm²" or "in²". */
+export function areaLabel(length: UnitChoices['length']): string {
+  return UNIT_TABLE.area[areaUnitFor(length)].label;
+}
+
 /** The area unit that goes with a length unit. */
 export function areaUnitFor(length: UnitChoices['length']): UnitChoices['area'] {
   return length === 'mm' ? 'mm2' : 'in2';

@@ -20,7 +20,7 @@ export const THROAT_PERCENT_SAFE = { min: 90, max: 91 } as const;
 /** Above this L/D the curtain is far bigger than the throat, so extra lift buys little flow (common practice). */
 export const LIFT_OVER_DIAMETER_HIGH = 0.35;
 
-const pct = (x: number): string => `${x.toFixed(1)} %`;
+const pct = (x: number): string => `${x.toFixed(1)}%`;
 
 function throatNote(percent: number): PracticeNote | null {
   const { min: lo, max: hi } = THROAT_PERCENT_LIMITS;
@@ -29,7 +29,7 @@ function throatNote(percent: number): PracticeNote | null {
     return {
       level: 'warn',
       code: 'throat-out-of-range',
-      message: `Throat is ${pct(percent)} of the valve, outside ${lo}–${hi} %; it is ${side}.`,
+      message: `Throat is ${pct(percent)} of the valve, outside ${lo}–${hi}%; it is ${side}.`,
     };
   }
   const usual = THROAT_PERCENT_USUAL;
@@ -37,7 +37,7 @@ function throatNote(percent: number): PracticeNote | null {
     return {
       level: 'note',
       code: 'throat-outside-usual',
-      message: `Throat is ${pct(percent)} of the valve; seats are usually cut with the throat at ${usual.min}–${usual.max} %.`,
+      message: `Throat is ${pct(percent)} of the valve; seats are usually cut with the throat at ${usual.min}–${usual.max}%.`,
     };
   }
   const safe = THROAT_PERCENT_SAFE;
@@ -45,7 +45,7 @@ function throatNote(percent: number): PracticeNote | null {
     return {
       level: 'note',
       code: 'throat-not-safe-choice',
-      message: `Throat is ${pct(percent)} of the valve; ${safe.min}–${safe.max} % is the usual safe choice.`,
+      message: `Throat is ${pct(percent)} of the valve; ${safe.min}–${safe.max}% is the usual safe choice.`,
     };
   }
   return null;

@@ -23,7 +23,7 @@ export interface Shortcut {
 const COMMANDS: readonly Shortcut[] = [
   { key: 'i', description: 'Insert mode on/off: a click on an edge adds a corner there', group: 'Edit', run: { command: 'toggleInsertMode' } },
   { key: 's', description: 'Snapping on/off (grid, and lining up with neighbouring points)', group: 'Edit', run: { command: 'toggleSnapping' } },
-  { key: 'Escape', description: 'Cancel the drag, or clear the selection', group: 'Edit', run: { command: 'cancel' } },
+  { key: 'Escape', description: 'Close the keys or history list; otherwise cancel the drag, or clear the selection', group: 'Edit', run: { command: 'cancel' } },
   { key: 'Ctrl+Z', description: 'Undo the last change to the document (a whole drag is one change)', group: 'Edit', run: { command: 'undo' } },
   { key: 'Ctrl+Shift+Z', description: 'Redo what was undone', group: 'Edit', run: { command: 'redo' } },
   { key: 'Ctrl+Y', description: 'Redo what was undone', group: 'Edit', run: { command: 'redo' } },

@@ -66,12 +66,17 @@ export function capitalise(s: string): string {
 
 /** A length for a message: 3 significant digits, trailing zeros dropped, with the units label ("units" if unknown). */
 export function formatLength(value: number, units = 'units', round: 'nearest' | 'down' = 'nearest'): string {
-  return `${formatNumber(value, round)} ${units}`;
+  return `${formatNumber(value, round)} ${unitLabel(units)}`;
 }
 
 /** A position for a message: "(12.5, -3.25) mm", 4 significant digits. */
 export function formatPoint(p: readonly [number, number], units = 'units'): string {
-  return `(${formatNumber(p[0], 'nearest', 4)}, ${formatNumber(p[1], 'nearest', 4)}) ${units}`;
+  return `(${formatNumber(p[0], 'nearest', 4)}, ${formatNumber(p[1], 'nearest', 4)}) ${unitLabel(units)}`;
+}
+
+/** The one spelling of a length unit on screen: the document's "inch" is shown "in" (as src/breathing/units.ts labels it). */
+function unitLabel(units: string): string {
+  return units === 'inch' ? 'in' : units;
 }
 
 function formatNumber(value: number, round: 'nearest' | 'down', digits = 3): string {

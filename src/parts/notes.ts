@@ -4,7 +4,7 @@
  */
 
 import type { Parts, Units } from '../document/types.ts';
-import { seatPracticeNotes, type PracticeNote } from '../breathing/index.ts';
+import { lengthLabel, seatPracticeNotes, type PracticeNote } from '../breathing/index.ts';
 import { metresPerUnit, seatCutSI, valveHeadSI } from './si.ts';
 
 export interface PartsNote {
@@ -27,6 +27,7 @@ export interface PartsNoteOptions {
 /** Every remark on `parts`, in the order seat and lift, shrouding, seat width. Empty when nothing stands out. */
 export function partsNotes(parts: Parts, units: Units, options: PartsNoteOptions = {}): PartsNote[] {
   const { valve, seat, bore } = parts;
+  const label = lengthLabel(units);
   if (!valve) return [];
   const notes: PartsNote[] = [];
   if (seat) notes.push(...seatPracticeNotes(valveHeadSI(valve, units), seatCutSI(valve, seat, units), valve.lift * metresPerUnit(units)));
@@ -37,15 +38,15 @@ export function partsNotes(parts: Parts, units: Units, options: PartsNoteOptions
       level: 'warn',
       code: 'valve-shrouded',
       message:
-        `The valve edge is ${fmt(bore.valveEdgeToWall)} ${units} from the bore wall, under ${share} x the valve diameter ` +
-        `(${fmt(least)} ${units}; common practice): the wall shrouds that side of the valve, so the bench reads less flow there.`,
+        `The valve edge is ${fmt(bore.valveEdgeToWall)} ${label} from the bore wall, under ${share} x the valve diameter ` +
+        `(${fmt(least)} ${label}; common practice): the wall shrouds that side of the valve, so the bench reads less flow there.`,
     });
   }
   if (seat && seat.seatWidth > valve.seatFaceWidth) {
     notes.push({
       level: 'warn',
       code: 'seat-wider-than-valve-face',
-      message: `The seat (${fmt(seat.seatWidth)} ${units}) is wider than the valve's seat face (${fmt(valve.seatFaceWidth)} ${units}): the valve cannot cover it.`,
+      message: `The seat (${fmt(seat.seatWidth)} ${label}) is wider than the valve's seat face (${fmt(valve.seatFaceWidth)} ${label}): the valve cannot cover it.`,
     });
   }
   return notes;

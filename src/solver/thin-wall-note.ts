@@ -25,7 +25,9 @@ export interface ThinWallNoteOptions {
  * wall about one cell (0.05 mm) thick. A grid of about 410,000 cells would resolve it.`
  */
 export function thinWallNote(wall: ThinWall, options: ThinWallNoteOptions): string {
-  const { units, spacing } = options;
+  const { spacing } = options;
+  // One spelling per unit on screen: the document's "inch" is shown "in".
+  const units = options.units === 'inch' ? 'in' : options.units;
   const digits = units === 'mm' ? 1 : 3;
   const place = `(${wall.x.toFixed(digits)}, ${wall.y.toFixed(digits)}) ${units}`;
   const thick = wall.thickness > 0 ? `about ${twoFigures(wall.thickness)} ${units} thick` : 'no thickness';

@@ -17,7 +17,7 @@ describe('seat practice notes (common practice)', () => {
   it('inside 88-93 % but off 90-91 %: a note naming the safe choice', () => {
     expect(codesAt(89)).toEqual(['note:throat-not-safe-choice']);
     expect(codesAt(92.5)).toEqual(['note:throat-not-safe-choice']);
-    expect(seatPracticeNotes(valve, seatWithThroat(89))[0].message).toContain('90–91 %');
+    expect(seatPracticeNotes(valve, seatWithThroat(89))[0].message).toContain('90–91%');
   });
 
   it('inside 85-95 % but outside 88-93 %: a note about the usual band', () => {

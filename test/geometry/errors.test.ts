@@ -17,7 +17,7 @@ describe('message wording', () => {
   it('lengths: 3 significant digits, units label or "units"', () => {
     expect(formatLength(12, 'mm')).toBe('12 mm');
     expect(formatLength(8.4372)).toBe('8.44 units');
-    expect(formatLength(0.0123456, 'inch')).toBe('0.0123 inch');
+    expect(formatLength(0.0123456, 'inch')).toBe('0.0123 in');
   });
 
   it('"at most" figures round down so the stated radius really fits, but not below a value that is whole up to rounding', () => {
