@@ -1,6 +1,7 @@
 /** Keeps the current work in the browser (IndexedDB) after each committed change, and says whether it is kept. */
 import { saveDocument } from '../document/load.ts';
 import type { PortDocument } from '../document/types.ts';
+import type { DocumentStore } from './document-store.ts';
 import { RECENT_KEY, withRecent, WORK_KEY, type KeptWork, type RecentEntry } from './kept-records.ts';
 import { storageProblem, type KeptStorage } from './kept-storage.ts';
 
@@ -51,6 +52,16 @@ export class Autosaver {
 
   get recentList(): readonly RecentEntry[] {
     return this.recent;
+  }
+
+  /**
+   * Writes every committed change of `store` (a drag's steps are not committed: only its release is written);
+   * `isUnsaved` says whether a document has changes not in a file saved or opened.
+   */
+  follow(store: DocumentStore, isUnsaved: (doc: PortDocument) => boolean): () => void {
+    return store.subscribe((doc, cause) => {
+      if (cause !== 'drag') this.changed(doc, isUnsaved(doc));
+    });
   }
 
   /** A committed change (never a mid-drag step): written once the changes pause. */

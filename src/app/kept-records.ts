@@ -117,6 +117,6 @@ export async function moveLegacyWork(storage: KeptStorage, legacyText: string | 
   const work: KeptWork = { text: legacyText, title: titleOfText(legacyText), changedAt: now, unsaved: true };
   const recent = asRecentList(await storage.get(RECENT_KEY));
   // Text without a title is no section file: it is kept as the work (and set aside when read), not listed.
-  const listed = work.title === '' ? recent : withRecent(recent, work);
+  const listed = work.title === '' ? recent : withRecent(recent, { title: work.title, changedAt: now, text: legacyText });
   await storage.write([[WORK_KEY, work], [RECENT_KEY, listed], [MOVED_KEY, true]]);
 }

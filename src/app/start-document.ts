@@ -39,10 +39,10 @@ export function judgeKeptWork(value: unknown, problemOf = documentProblem): { wo
     doc = loadDocument(work.text);
   } catch (error) {
     const first = (error instanceof Error ? error.message : String(error)).split('\n')[0];
-    return { reason: `${lead} could not be read (${first.replace(/[.\s]+$/, '')}).` };
+    return { reason: `${lead} could not be read: ${first.replace(/[.\s]+$/, '')}.` };
   }
   const problem = problemOf(doc);
-  if (problem !== null) return { reason: `${lead} cannot be solved: ${asSentence(problem)}` };
+  if (problem !== null) return { reason: `${lead} cannot be solved. ${asSentence(problem)}` };
   return { work: { ...work, title: doc.title }, doc };
 }
 

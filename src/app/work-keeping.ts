@@ -61,9 +61,7 @@ export function mountWorkKeeping({ started, sampleText, say, element, now }: Kee
   }, started.keepingProblem);
   showSavedState(element('saved-state'), autosaver.current);
   menu.show(started.recent);
-  store.subscribe((doc, cause) => {
-    if (cause !== 'drag') autosaver.changed(doc, doc !== baseline);
-  });
+  autosaver.follow(store, (doc) => doc !== baseline);
   // A tab closed within the quiet time still keeps its last change.
   document.addEventListener('visibilitychange', () => {
     if (document.visibilityState === 'hidden') void autosaver.flush();
@@ -134,7 +132,8 @@ export function mountWorkKeeping({ started, sampleText, say, element, now }: Kee
     });
   }
   if (started.setAside) showSetAsideNotice(started, element('notices'), say);
-  else if (started.keepingProblem) say(`Your work will not be kept in this browser: ${started.keepingProblem}. Use Save to keep a file.`, 'warn');
+  // Said as information, so the first solve (which clears errors it answers) leaves it in the status line.
+  else if (started.keepingProblem) say(`Your work will not be kept in this browser: ${started.keepingProblem}. Use Save to keep a file.`);
   return keeping;
 }
 
@@ -149,7 +148,7 @@ function showSetAsideNotice(started: StartedWork, host: HTMLElement, say: Keepin
     }, () => say('The set-aside copy could not be read from this browser.', 'error'));
   };
   showSetAside(host, aside.message, download);
-  say(aside.message, 'warn');
+  say(aside.message);
 }
 
 function firstLine(error: unknown): string {
