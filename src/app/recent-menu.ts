@@ -1,10 +1,12 @@
-/** The Recent menu in the top bar: documents opened or worked on lately, by title and time. */
+/** The Recent menu in the top bar: documents opened or worked on lately, by title and time, and set-aside copies. */
 import { whenChanged } from './kept-notices.ts';
 import type { RecentEntry } from './kept-records.ts';
 
 export interface RecentMenuHooks {
   /** Reopen an entry (as an undoable open, asking first over unsaved work). */
   readonly reopen: (entry: RecentEntry) => void;
+  /** Download the set-aside copy kept under `key`. */
+  readonly download: (key: string) => void;
   /** ms since 1970. */
   readonly now: () => number;
 }
@@ -12,6 +14,7 @@ export interface RecentMenuHooks {
 /** The menu under `button`: opened by it, closed by a choice, Escape or a click elsewhere. */
 export class RecentMenu {
   private entries: readonly RecentEntry[] = [];
+  private asides: ReadonlyArray<{ readonly key: string; readonly setAsideAt: number }> = [];
 
   constructor(private readonly button: HTMLButtonElement, private readonly list: HTMLElement, private readonly hooks: RecentMenuHooks) {
     button.addEventListener('click', () => (this.isOpen ? this.close() : this.open()));
@@ -32,11 +35,13 @@ export class RecentMenu {
     return !this.list.hidden;
   }
 
-  /** The entries to list, newest first. */
-  show(entries: readonly RecentEntry[]): void {
+  /** The entries to list, newest first, and the set-aside copies (kept as they were; unchanged when not given). */
+  show(entries: readonly RecentEntry[], asides = this.asides): void {
     this.entries = entries;
-    this.button.disabled = entries.length === 0;
-    this.button.title = entries.length === 0 ? 'No recent documents yet.' : 'Reopen a document opened or worked on lately.';
+    this.asides = asides;
+    const empty = entries.length === 0 && asides.length === 0;
+    this.button.disabled = empty;
+    this.button.title = empty ? 'No recent documents yet.' : 'Reopen a document opened or worked on lately.';
     if (this.isOpen) this.fill();
   }
 
@@ -54,22 +59,28 @@ export class RecentMenu {
 
   private fill(): void {
     const now = this.hooks.now();
-    this.list.replaceChildren(...this.entries.map((entry) => {
-      const item = document.createElement('button');
-      item.type = 'button';
-      item.setAttribute('role', 'menuitem');
-      item.className = 'recent-item';
-      const title = document.createElement('span');
-      title.textContent = entry.title || 'Untitled section';
-      const when = document.createElement('span');
-      when.className = 'recent-when';
-      when.textContent = `changed ${whenChanged(entry.changedAt, now)}`;
-      item.append(title, when);
-      item.addEventListener('click', () => {
-        this.close();
-        this.hooks.reopen(entry);
-      });
-      return item;
-    }));
+    const recent = this.entries.map((entry) =>
+      this.item(entry.title || 'Untitled section', `changed ${whenChanged(entry.changedAt, now)}`, () => this.hooks.reopen(entry)));
+    const asides = this.asides.map(({ key, setAsideAt }) =>
+      this.item('Download the set-aside copy', `set aside ${whenChanged(setAsideAt, now)}`, () => this.hooks.download(key)));
+    this.list.replaceChildren(...recent, ...asides);
+  }
+
+  private item(label: string, detail: string, choose: () => void): HTMLButtonElement {
+    const item = document.createElement('button');
+    item.type = 'button';
+    item.setAttribute('role', 'menuitem');
+    item.className = 'recent-item';
+    const title = document.createElement('span');
+    title.textContent = label;
+    const when = document.createElement('span');
+    when.className = 'recent-when';
+    when.textContent = detail;
+    item.append(title, when);
+    item.addEventListener('click', () => {
+      this.close();
+      choose();
+    });
+    return item;
   }
 }

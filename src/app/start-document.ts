@@ -8,7 +8,7 @@ import { applyEdit, EDITS, isEditName } from '../editor/index.ts';
 import { checkDocument, documentProblem } from './document-check.ts';
 import { DocumentStore } from './document-store.ts';
 import { clampEdit } from './edit-clamp.ts';
-import { asKeptWork, asRecentList, LEGACY_KEY, moveLegacyWork, RECENT_KEY, setAside, titleOfText, WORK_KEY, type KeptWork, type RecentEntry } from './kept-records.ts';
+import { asKeptWork, asRecentList, LEGACY_KEY, moveLegacyWork, RECENT_KEY, setAside, setAsideCopies, titleOfText, WORK_KEY, type KeptWork, type RecentEntry } from './kept-records.ts';
 import { storageProblem, type KeptStorage } from './kept-storage.ts';
 
 /** How the app started and what to say about it. */
@@ -23,6 +23,8 @@ export interface StartedWork {
   /** Kept work set aside at this start: the copy's key and the sentences to show. */
   readonly setAside: { readonly key: string; readonly message: string } | null;
   readonly recent: RecentEntry[];
+  /** Every set-aside copy in this browser (this start's too), oldest first, for the Recent menu. */
+  readonly asides: Array<{ readonly key: string; readonly setAsideAt: number }>;
 }
 
 /** Kept work as a document that opens and solves, or the sentence saying why it cannot be opened. */
@@ -48,6 +50,12 @@ export function judgeKeptWork(value: unknown, problemOf = documentProblem): { wo
 
 /** Reads the kept work (bringing the old local-storage autosave over once) and starts the store on it or the sample. */
 export async function startStore(sampleText: string, opening: Promise<KeptStorage>, legacyText: string | null, now: number): Promise<StartedWork> {
+  const started = await startOn(sampleText, opening, legacyText, now);
+  const copies = started.storage === null ? [] : await setAsideCopies(started.storage).catch(() => []);
+  return { ...started, asides: copies.map(({ key, copy }) => ({ key, setAsideAt: copy.setAsideAt })) };
+}
+
+async function startOn(sampleText: string, opening: Promise<KeptStorage>, legacyText: string | null, now: number): Promise<Omit<StartedWork, 'asides'>> {
   let storage: KeptStorage | null = null;
   let keepingProblem: string | null = null;
   /** The old local-storage work is read from there when it could not be brought over (this once). */

@@ -5,15 +5,14 @@
 import { loadDocument } from '../document/load.ts';
 import type { PortDocument } from '../document/types.ts';
 import { Autosaver, type SavedState } from './autosave.ts';
-import { checkDocument } from './document-check.ts';
-import type { DocumentStore } from './document-store.ts';
 import { downloadText } from './files.ts';
 import { offerKeptWork, showSetAside } from './kept-notices.ts';
-import { setAsideText, type RecentEntry, type SetAsideCopy } from './kept-records.ts';
+import { setAsideText, type KeptWork, type RecentEntry, type SetAsideCopy } from './kept-records.ts';
 import { RecentMenu } from './recent-menu.ts';
-import { askToReplace } from './replace-dialog.ts';
+import { WorkReplacer, type OpenWords } from './replace-work.ts';
 import { showSavedState } from './saved-state-view.ts';
 import type { StartedWork } from './start-document.ts';
+import type { KeptStorage } from './kept-storage.ts';
 import type { StatusLevel } from './status.ts';
 
 export interface KeepingParts {
@@ -23,13 +22,6 @@ export interface KeepingParts {
   readonly element: (id: string) => HTMLElement;
   /** ms since 1970. */
   readonly now: () => number;
-}
-
-/** How an open is named: in the undo list ("Open \"a.json\""), in the question ("opening \"a.json\""), once done. */
-export interface OpenWords {
-  readonly label: string;
-  readonly doing: string;
-  readonly opened: string;
 }
 
 export interface WorkKeeping {
@@ -47,10 +39,10 @@ export interface WorkKeeping {
 
 export function mountWorkKeeping({ started, sampleText, say, element, now }: KeepingParts): WorkKeeping {
   const { store, offer } = started;
-  /** The document as last saved or opened; the work is unsaved while the store holds another. */
-  let baseline: PortDocument | null = offer?.unsaved ? null : store.doc;
-  const offered = store.doc;
-  const menu = new RecentMenu(element('recent-button') as HTMLButtonElement, element('recent-menu'), { reopen: (entry) => reopen(entry), now });
+  const replacer = new WorkReplacer(store, say, offer?.unsaved ? null : store.doc);
+  const download = (key: string) => downloadSetAside(started.storage, key, say);
+  const reopen = (entry: RecentEntry) => reopenRecent(entry, replacer, say);
+  const menu = new RecentMenu(element('recent-button') as HTMLButtonElement, element('recent-menu'), { reopen, download, now });
   const autosaver = new Autosaver(started.storage, started.recent, {
     now,
     onState: (state, firstFailure) => {
@@ -60,42 +52,20 @@ export function mountWorkKeeping({ started, sampleText, say, element, now }: Kee
     onRecent: (recent) => menu.show(recent),
   }, started.keepingProblem);
   showSavedState(element('saved-state'), autosaver.current);
-  menu.show(started.recent);
-  autosaver.follow(store, (doc) => doc !== baseline);
+  menu.show(started.recent, started.asides);
+  autosaver.follow(store, (doc) => replacer.isUnsaved(doc));
   // A tab closed within the quiet time still keeps its last change.
   document.addEventListener('visibilitychange', () => {
     if (document.visibilityState === 'hidden') void autosaver.flush();
   });
-
-  let dismissOffer: (() => void) | null = null;
-  const keeping: WorkKeeping = {
-    open(doc, { label, doing, opened }, refused) {
-      const commit = () => {
-        const before = baseline;
-        baseline = doc;
-        try {
-          store.replace(doc, label);
-        } catch (error) {
-          baseline = before;
-          refused(error);
-          return;
-        }
-        dismissOffer?.();
-        say(opened);
-      };
-      if (store.doc === baseline) return commit();
-      try {
-        // Refuse a document that cannot be solved before asking about it.
-        checkDocument(doc);
-      } catch (error) {
-        return refused(error);
-      }
-      const title = store.doc.title || 'Your section';
-      const text = `"${title}" has changes that are not in a saved file, and ${doing} replaces it. Undo brings it back while this page is open.`;
-      void askToReplace({ text }).then((replace) => (replace ? commit() : say('Your work is unchanged; nothing was opened.')));
-    },
+  if (offer) offerBack(offer, { started, sampleText, say, element, now }, replacer);
+  if (started.setAside) showSetAsideNotice(started, element('notices'), say, download);
+  // Said as information, so the first solve (which clears errors it answers) leaves it in the status line.
+  else if (started.keepingProblem) say(`Your work will not be kept in this browser: ${started.keepingProblem}. Use Save to keep a file.`);
+  return {
+    open: (doc, words, refused) => replacer.open(doc, words, refused),
     saved() {
-      baseline = store.doc;
+      replacer.markSaved();
       autosaver.changed(store.doc, false);
     },
     flush: () => autosaver.flush(),
@@ -103,52 +73,50 @@ export function mountWorkKeeping({ started, sampleText, say, element, now }: Kee
       return autosaver.current;
     },
   };
-
-  function reopen(entry: RecentEntry): void {
-    const name = entry.title || 'the section';
-    let doc: PortDocument;
-    try {
-      doc = loadDocument(entry.text);
-    } catch (error) {
-      say(`"${name}" from the recent list could not be opened (${firstLine(error)}). Your current work is unchanged.`, 'error');
-      return;
-    }
-    const words = { label: `Open "${name}"`, doing: `opening "${name}"`, opened: `Opened "${name}" from the recent list.` };
-    keeping.open(doc, words, (error) => {
-      say(`"${name}" from the recent list was not opened: ${firstLine(error)}. Your current work is unchanged.`, 'error');
-    });
-  }
-
-  if (offer) {
-    dismissOffer = offerKeptWork(element('notices'), offer, now(), {
-      keep: () => say('Keeping your work from the last visit.'),
-      sample: () => {
-        const sample = loadDocument(sampleText);
-        // Chosen straight away, the offer itself was the question; after changes made since, ask again.
-        if (store.doc === offered) baseline = offered;
-        const words = { label: 'Start from the sample', doing: 'starting from the sample', opened: 'Started from the sample. Undo brings your work back.' };
-        keeping.open(sample, words, (error) => say(firstLine(error), 'error'));
-      },
-    });
-  }
-  if (started.setAside) showSetAsideNotice(started, element('notices'), say);
-  // Said as information, so the first solve (which clears errors it answers) leaves it in the status line.
-  else if (started.keepingProblem) say(`Your work will not be kept in this browser: ${started.keepingProblem}. Use Save to keep a file.`);
-  return keeping;
 }
 
-function showSetAsideNotice(started: StartedWork, host: HTMLElement, say: KeepingParts['say']): void {
+/** The notice that offers the last visit's work back; it goes once a choice is made or another document is opened. */
+function offerBack(offer: KeptWork, { started, sampleText, say, element, now }: KeepingParts, replacer: WorkReplacer): void {
+  const offered = started.store.doc;
+  const dismiss = offerKeptWork(element('notices'), offer, now(), {
+    keep: () => say('Keeping your work from the last visit.'),
+    sample: () => {
+      // Chosen straight away, the offer itself was the question; after changes made since, ask again.
+      if (started.store.doc === offered) replacer.markSaved(offered);
+      const words = { label: 'Start from the sample', doing: 'starting from the sample', opened: 'Started from the sample. Undo brings your work back.' };
+      replacer.open(loadDocument(sampleText), words, (error) => say(firstLine(error), 'error'));
+    },
+  });
+  replacer.onReplaced = dismiss;
+}
+
+function reopenRecent(entry: RecentEntry, replacer: WorkReplacer, say: KeepingParts['say']): void {
+  const name = entry.title || 'the section';
+  let doc: PortDocument;
+  try {
+    doc = loadDocument(entry.text);
+  } catch (error) {
+    say(`"${name}" from the recent list could not be opened (${firstLine(error)}). Your current work is unchanged.`, 'error');
+    return;
+  }
+  const words = { label: `Open "${name}"`, doing: `opening "${name}"`, opened: `Opened "${name}" from the recent list.` };
+  replacer.open(doc, words, (error) => say(`"${name}" from the recent list was not opened: ${firstLine(error)}. Your current work is unchanged.`, 'error'));
+}
+
+function showSetAsideNotice(started: StartedWork, host: HTMLElement, say: KeepingParts['say'], download: (key: string) => void): void {
   const aside = started.setAside;
   if (!aside) return;
-  const { storage } = started;
-  const download = storage === null || aside.key === '' ? null : () => {
-    void storage.get(aside.key).then((copy) => {
-      const stamp = aside.key.replace(/[^0-9]+/g, '-').replace(/^-|-$/g, '');
-      downloadText(`set-aside-${stamp}.portwright.json`, setAsideText(copy as SetAsideCopy));
-    }, () => say('The set-aside copy could not be read from this browser.', 'error'));
-  };
-  showSetAside(host, aside.message, download);
+  showSetAside(host, aside.message, started.storage === null || aside.key === '' ? null : () => download(aside.key));
   say(aside.message);
+}
+
+/** Offers the set-aside copy under `key` as a file, e.g. set-aside-2026-12-05-21-40-00-000.portwright.json. */
+function downloadSetAside(storage: KeptStorage | null, key: string, say: KeepingParts['say']): void {
+  if (storage === null) return;
+  storage.get(key).then((copy) => {
+    const stamp = key.replace(/[^0-9]+/g, '-').replace(/^-|-$/g, '');
+    downloadText(`set-aside-${stamp}.portwright.json`, setAsideText(copy as SetAsideCopy));
+  }, () => say('The set-aside copy could not be read from this browser.', 'error'));
 }
 
 function firstLine(error: unknown): string {

@@ -106,6 +106,15 @@ describe('kept work that cannot be opened', () => {
       expect(asides).toHaveLength(1);
       expect((records[asides[0]] as { value: { text: string } }).value.text).toBe(garbage);
       expect((records.work as { text: string }).text).toContain('after the set-aside');
+
+      // On a later visit the copy is still there: the Recent menu downloads it.
+      await reload(page);
+      expect(await page.locator('#set-aside-notice').count()).toBe(0);
+      await page.click('#recent-button');
+      const item = page.locator('#recent-menu .recent-item', { hasText: 'Download the set-aside copy' });
+      expect(await item.innerText()).toMatch(/set aside today at/);
+      const [again] = await Promise.all([page.waitForEvent('download'), item.click()]);
+      expect(readFileSync(await again.path(), 'utf8')).toBe(garbage);
       expect(problems).toEqual([]);
     });
   }, CHECK_MS);
