@@ -48,6 +48,10 @@ export class RecentMenu {
   open(): void {
     this.fill();
     this.list.hidden = false;
+    // Under the button, moved left as far as needed to stay on screen (the top bar wraps, so it may sit anywhere).
+    this.list.style.left = '0px';
+    const overflow = this.list.getBoundingClientRect().right - (document.documentElement.clientWidth - 8);
+    if (overflow > 0) this.list.style.left = `${-overflow}px`;
     this.button.setAttribute('aria-expanded', 'true');
     this.list.querySelector('button')?.focus();
   }
