@@ -5,6 +5,7 @@ import {
   setAsideText, titleOfText, withRecent, WORK_KEY, type RecentEntry,
 } from '../../src/app/kept-records.ts';
 import { storageProblem } from '../../src/app/kept-storage.ts';
+import { offerText, whenChanged } from '../../src/app/kept-notices.ts';
 import { FakeKeptStorage, quotaError } from './fake-kept-storage.ts';
 
 const entry = (title: string, changedAt: number): RecentEntry => ({ title, changedAt, text: `{"title":"${title}"}` });
@@ -102,5 +103,16 @@ describe('why the browser would not keep the work', () => {
     expect(storageProblem(new DOMException('no', 'InvalidStateError'))).toBe(storageProblem(new DOMException('no', 'NotSupportedError')));
     expect(storageProblem(new DOMException('odd', 'DataCloneError'))).toBe('the browser refused to keep it (DataCloneError)');
     expect(storageProblem('odd')).toBe('the browser refused to keep it');
+  });
+});
+
+describe('the offer of kept work', () => {
+  it('names the work and when it changed, today or on another day', () => {
+    const earlier = NOW - 5 * 60_000;
+    expect(whenChanged(earlier, NOW)).toMatch(/^today at \S/);
+    expect(whenChanged(NOW - 3 * 86_400_000, NOW)).toMatch(/2026 at \S/);
+    const work = { text: '{}', title: 'Bowl study', changedAt: earlier, unsaved: true };
+    expect(offerText(work, NOW)).toBe(`Keep working on "Bowl study" (changed ${whenChanged(earlier, NOW)})?`);
+    expect(offerText({ ...work, title: '' }, NOW)).toMatch(/^Keep working on "your section" \(changed today at .+\)\?$/);
   });
 });

@@ -1,5 +1,6 @@
 /**
- * Work kept in the browser, in the app: a reload offers the work back (Keep gives the same document), a corrupt or
+ * Work kept in the browser, in the app: a reload offers the work back (Keep gives the same document), the old
+ * local-storage autosave is brought over, a corrupt or
  * newer-version autosave is set aside with a message and can be downloaded, a storage failure is said, and opening
  * a file or a recent document over unsaved work asks first.
  */
@@ -81,6 +82,22 @@ describe('a reload', () => {
       await page.click('#kept-keep');
       expect(await page.locator('#kept-offer').count()).toBe(0);
       expect(await appDocument(page)).toEqual(edited);
+      expect(problems).toEqual([]);
+    });
+  }, CHECK_MS);
+});
+
+describe('work kept by an older Portwright in local storage', () => {
+  it('is brought into IndexedDB once and offered back', async () => {
+    await withApp(async ({ page, problems }) => {
+      const tight = readFileSync(resolve(SAMPLES, 'street-tight-short-side.json'), 'utf8');
+      await page.evaluate((t) => localStorage.setItem('portwright.autosave', t), tight);
+      await reload(page);
+      expect(await text(page, '#kept-offer')).toMatch(/^Keep working on "Street intake, 46 mm valve: tight short side"/);
+      expect((await appDocument(page)).title).toBe('Street intake, 46 mm valve: tight short side');
+      const records = await keptRecords(page);
+      expect((records.work as { text: string }).text).toBe(tight);
+      expect(records['moved-from-local-storage']).toBe(true);
       expect(problems).toEqual([]);
     });
   }, CHECK_MS);
