@@ -1,8 +1,7 @@
 /**
  * Work kept in the browser, in the app: a reload offers the work back (Keep gives the same document), the old
- * local-storage autosave is brought over, a corrupt or
- * newer-version autosave is set aside with a message and can be downloaded, a storage failure is said, and opening
- * a file or a recent document over unsaved work asks first.
+ * local-storage autosave is brought over, a corrupt or newer-version autosave is set aside with a message and can be
+ * downloaded, a storage failure is said, and opening a file or a recent document over unsaved work asks first.
  */
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
