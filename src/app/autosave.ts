@@ -5,8 +5,9 @@ import type { DocumentStore } from './document-store.ts';
 import { RECENT_KEY, withRecent, WORK_KEY, type KeptWork, type RecentEntry } from './kept-records.ts';
 import { storageProblem, type KeptStorage } from './kept-storage.ts';
 
-/** Whether the work is kept in this browser: written, waiting to be written, or refused with a reason. */
+/** Whether the work is kept in this browser: nothing written yet, written, waiting to be written, or refused with a reason. */
 export type SavedState =
+  | { readonly kind: 'idle' }
   | { readonly kind: 'saved' }
   | { readonly kind: 'saving' }
   | { readonly kind: 'failed'; readonly reason: string };
@@ -41,8 +42,10 @@ export class Autosaver {
     private readonly hooks: AutosaveHooks,
     private readonly problem: string | null = null,
     private readonly delayMs = AUTOSAVE_DELAY_MS,
+    /** The work shown at the start was read from storage (so it is kept already). */
+    kept = false,
   ) {
-    this.state = storage === null ? { kind: 'failed', reason: problem ?? storageProblem(null) } : { kind: 'saved' };
+    this.state = storage === null ? { kind: 'failed', reason: problem ?? storageProblem(null) } : { kind: kept ? 'saved' : 'idle' };
     this.refused = storage === null;
   }
 

@@ -4,6 +4,7 @@ import type { SavedState } from './autosave.ts';
 /** The words for a saved state. */
 export function savedStateText(state: SavedState): string {
   switch (state.kind) {
+    case 'idle': return 'Changes are kept in this browser.';
     case 'saved': return 'Saved in this browser.';
     case 'saving': return 'Saving…';
     case 'failed': return `Not saved: ${state.reason}. Use Save to keep a file.`;

@@ -50,7 +50,7 @@ export function mountWorkKeeping({ started, sampleText, say, element, now }: Kee
       if (firstFailure && state.kind === 'failed') say(`Your work was not saved in this browser: ${state.reason}. Use Save to keep a file.`, 'error');
     },
     onRecent: (recent) => menu.show(recent),
-  }, started.keepingProblem);
+  }, started.keepingProblem, undefined, offer !== null);
   showSavedState(element('saved-state'), autosaver.current);
   menu.show(started.recent, started.asides);
   autosaver.follow(store, (doc) => replacer.isUnsaved(doc));

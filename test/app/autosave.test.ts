@@ -27,6 +27,7 @@ describe('autosave', () => {
     const { saver, states } = autosaverOn(storage);
     const store = new DocumentStore(SAMPLE, retitle);
     saver.follow(store, () => true);
+    expect(saver.current).toEqual({ kind: 'idle' });
     store.edit('title', 'Bowl A');
     store.edit('title', 'Bowl B');
     expect(storage.writes).toBe(0);
