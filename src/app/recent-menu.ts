@@ -25,6 +25,10 @@ export class RecentMenu {
         this.close();
         button.focus();
       }
+      if (event.key === 'ArrowDown' || event.key === 'ArrowUp') {
+        event.preventDefault();
+        this.moveFocus(event.key === 'ArrowDown' ? 1 : -1);
+      }
     });
     document.addEventListener('pointerdown', (event) => {
       if (this.isOpen && !list.contains(event.target as Node) && event.target !== button) this.close();
@@ -59,6 +63,13 @@ export class RecentMenu {
   close(): void {
     this.list.hidden = true;
     this.button.setAttribute('aria-expanded', 'false');
+  }
+
+  /** Focus the next (+1) or previous (-1) item, wrapping round. */
+  private moveFocus(step: 1 | -1): void {
+    const items = [...this.list.querySelectorAll('button')];
+    const at = items.indexOf(document.activeElement as HTMLButtonElement);
+    items[(at + step + items.length) % items.length]?.focus();
   }
 
   private fill(): void {
