@@ -198,7 +198,16 @@ describe('replacing unsaved work', () => {
 
       // Just opened, nothing unsaved: the recent document reopens without a question, and Undo takes it back.
       await page.click('#recent-button');
-      await page.locator('#recent-menu .recent-item', { hasText: 'short-side radius compared' }).click();
+      expect(await page.locator('#recent-menu .recent-item').allInnerTexts()).toEqual([
+        expect.stringMatching(/^Street intake, 46 mm valve: tight short side\s+changed today at /),
+        expect.stringMatching(/^Street intake, 46 mm valve: short-side radius compared\s+changed today at /),
+      ]);
+      await page.keyboard.press('Escape');
+      expect(await page.locator('#recent-menu').isHidden()).toBe(true);
+      // From the keys alone: the first item has the focus, the arrow moves to the second, Enter opens it.
+      await page.click('#recent-button');
+      await page.keyboard.press('ArrowDown');
+      await page.keyboard.press('Enter');
       expect(await page.locator('#replace-dialog').count()).toBe(0);
       await expect.poll(() => appDocument(page)).toEqual(edited);
       await page.click('#undo-button');
