@@ -2,12 +2,13 @@
 import './app/zod-jitless.ts'; // first: zod must be jitless before any schema is built (the CSP refuses eval)
 import sampleText from '../samples/short-side-compare.json?raw';
 import { acceptDrops, downloadDocument, pickFile, type FileHandlers } from './app/files.ts';
-import { autosaver } from './app/autosave.ts';
+import { openKeptStorage } from './app/kept-storage.ts';
+import { mountWorkKeeping } from './app/work-keeping.ts';
 import type { ChangeCause } from './app/document-store.ts';
 import { plainMessage } from './app/document-check.ts';
 import { mountHistoryControls } from './app/history-controls.ts';
 import { Overlays } from './app/overlays.ts';
-import { startStore } from './app/start-document.ts';
+import { readLegacyWork, startStore } from './app/start-document.ts';
 import { wireVariantButtons } from './app/variant-buttons.ts';
 import { EditorController } from './app/editor-controller.ts';
 import { FlowPicture } from './app/flow-picture.ts';
@@ -42,7 +43,9 @@ const helpOverlay = byId<HTMLElement>('help-overlay');
 const variantSelect = byId<HTMLSelectElement>('variant-select');
 
 const settings = defaultSettings();
-const { store, greeting } = startStore(sampleText);
+// The last visit's work is read before anything is drawn, so it (not the sample) is what shows until the user chooses.
+const started = await startStore(sampleText, openKeptStorage(), readLegacyWork(), Date.now());
+const { store } = started;
 settings.units = store.doc.units;
 settings.gridDetail = store.doc.settings.gridDetail;
 
@@ -133,7 +136,6 @@ function showDocument(doc: PortDocument): void {
   variantSelect.replaceChildren(...doc.variants.map((v) => new Option(v.name, v.name, false, v.name === doc.activeVariant)));
 }
 
-const autosave = autosaver();
 /** The active variant shown before the latest change (an undo that switches variants forgets the selection). */
 let shownVariant = store.doc.activeVariant;
 store.subscribe((doc, cause) => {
@@ -145,7 +147,6 @@ store.subscribe((doc, cause) => {
     settings.gridDetail = doc.settings.gridDetail;
   }
   solve(doc, cause);
-  autosave(doc);
   // Mid-drag only the field and the handles follow the pointer; panels catch up when the drag ends.
   if (cause === 'drag') return;
   undoControls.refresh();
@@ -172,8 +173,8 @@ store.subscribe((doc, cause) => {
 const fileHandlers: FileHandlers = {
   // A file with a variant that does not build is refused (the store throws, files.ts reports it by variant).
   onOpened: (doc, name) => {
-    store.replace(doc, `Open "${name}"`);
-    status.show(`Opened "${name}".`);
+    const words = { label: `Open "${name}"`, doing: `opening "${name}"`, opened: `Opened "${name}".` };
+    keeping.open(doc, words, (error) => fileHandlers.onRejected(`"${name}" was not opened: ${error instanceof Error ? error.message : String(error)}`, name));
   },
   onRejected: (message) => status.show(sentences(message, 'Your current work is unchanged.'), 'error'),
 };
@@ -186,7 +187,9 @@ function runCommand(name: CommandName): void {
       refreshSettingsPanel();
       return status.show(settings.snapping ? 'Snapping on.' : 'Snapping off.');
     case 'toggleHelp': helpOverlay.hidden = !helpOverlay.hidden; return;
-    case 'save': return status.show(`Saved as ${downloadDocument(store.doc)}.`);
+    case 'save':
+      status.show(`Saved as ${downloadDocument(store.doc)}.`);
+      return keeping.saved();
     case 'open': return pickFile(byId('file-input'), fileHandlers);
     case 'cancel': overlays.closeAll(); return;
     case 'toggleInsertMode': return;
@@ -275,10 +278,10 @@ showDocument(store.doc);
 showPartsNumbers(byId('breathing'), bench, store.doc);
 view.fitToView(sectionBounds(activeSection(store.doc)));
 solve(store.doc, 'open');
-if (greeting) status.show(greeting.text, greeting.level);
+const keeping = mountWorkKeeping({ started, sampleText, say: (m, level) => status.show(m, level), element: byId, now: Date.now });
 
 // For browser tests and the interaction benchmark: read-only handles on the running app.
 // `stopSolverWorker` ends the live solver worker as a crash would, for the check that it is replaced.
 Object.assign(window, {
-  portwright: { store, view, timings, get lastReply() { return lastReply; }, stopSolverWorker: () => newestWorker?.terminate() },
+  portwright: { store, view, timings, keeping, get lastReply() { return lastReply; }, stopSolverWorker: () => newestWorker?.terminate() },
 });

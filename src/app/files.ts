@@ -65,16 +65,22 @@ export function pickFile(input: HTMLInputElement, handlers: FileHandlers): void 
 /** Offer the document as a download named after its title. */
 export function downloadDocument(doc: PortDocument): string {
   const name = fileNameFor(doc.title);
-  const url = URL.createObjectURL(new Blob([saveDocument(doc)], { type: 'application/json' }));
+  downloadText(name, saveDocument(doc));
+  return name;
+}
+
+/** Offer `text` as a download named `name`. */
+export function downloadText(name: string, text: string): void {
+  const url = URL.createObjectURL(new Blob([text], { type: 'application/json' }));
   const link = document.createElement('a');
   link.href = url;
   link.download = name;
   link.click();
   setTimeout(() => URL.revokeObjectURL(url), 1000);
-  return name;
 }
 
-function fileNameFor(title: string): string {
+/** A file name made from a title, e.g. "Street intake" -> "street-intake.portwright.json". */
+export function fileNameFor(title: string): string {
   const stem = title.trim().toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-+|-+$/g, '') || 'section';
   return `${stem}.portwright.json`;
 }

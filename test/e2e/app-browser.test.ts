@@ -118,6 +118,8 @@ describe('Portwright in a browser', () => {
       await page.selectOption('#variant-select', 'tight short side');
       expect((await appDocument(page)).activeVariant).toBe('tight short side');
       await openThroughPicker(page, path);
+      // Switching the variant after saving is a change not in a file: opening asks first.
+      await page.click('#replace-confirm');
       await page.waitForFunction(() => (window as unknown as { portwright: { store: { doc: { activeVariant: string } } } })
         .portwright.store.doc.activeVariant === 'generous short side');
       expect(await appDocument(page)).toEqual(saved);
