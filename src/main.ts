@@ -23,7 +23,8 @@ import { defaultSettings, parseLevels } from './app/settings.ts';
 import { buildSettingsPanel, type SettingsGroup } from './app/settings-panel.ts';
 import { StatusLine } from './app/status.ts';
 import type { PortDocument } from './document/types.ts';
-import { activeSection, type CommandName } from './editor/index.ts';
+import { activeSection, activeVariant, type CommandName } from './editor/index.ts';
+import { benchOnlyChange } from './editor/edits-bench.ts';
 import { sectionBounds } from './geometry/index.ts';
 import { thinWallNote } from './solver/thin-wall-note.ts';
 import type { FlowDomain } from './solver/types.ts';
@@ -134,7 +135,11 @@ function showDocument(doc: PortDocument): void {
 const autosave = autosaver();
 /** The active variant shown before the latest change (an undo that switches variants forgets the selection). */
 let shownVariant = store.doc.activeVariant;
+/** The document as the last change left it: a change of bench inputs alone has nothing to solve. */
+let lastDoc = store.doc;
 store.subscribe((doc, cause) => {
+  const benchOnly = benchOnlyChange(lastDoc, doc);
+  lastDoc = doc;
   // An opened file brings its own units and grid detail, and is solved on its own grid as the command solves it;
   // an undo or redo may bring back other units or another grid detail.
   const unitsChanged = settings.units !== doc.units || settings.gridDetail !== doc.settings.gridDetail;
@@ -142,7 +147,7 @@ store.subscribe((doc, cause) => {
     settings.units = doc.units;
     settings.gridDetail = doc.settings.gridDetail;
   }
-  solve(doc, cause);
+  if (!benchOnly) solve(doc, cause);
   autosave(doc);
   // Mid-drag only the field and the handles follow the pointer; panels catch up when the drag ends.
   if (cause === 'drag') return;
@@ -153,6 +158,7 @@ store.subscribe((doc, cause) => {
   selectionPanel.show(doc, editor.selection);
   partsPanel.update(doc);
   showPartsNumbers(byId('breathing'), bench, doc);
+  bench.showInputs(activeVariant(doc).bench, doc.activeVariant);
   if (cause === 'history' && unitsChanged) {
     refreshSettingsPanel();
     view.setUnits(doc.units);
@@ -235,6 +241,8 @@ const bench = mountBenchPanel(byId('bench-host'), {
     applySettings('reading');
     status.show(`Flow scale for the boundary-layer march set to ${ms.toFixed(1)} m/s from the bench.`);
   },
+  // One typed value or choice is one undo step; it is kept in the variant shown and solves nothing again.
+  onInputs: (inputs) => tryEdit('setBench', { bench: inputs }, false),
 });
 
 const partsPanel = new PartsPanel(gui, (part, values) => {
@@ -268,9 +276,22 @@ function tryEdit(name: string, args: unknown, resetSelection = true, cause: Chan
 
 showDocument(store.doc);
 showPartsNumbers(byId('breathing'), bench, store.doc);
+bench.showInputs(activeVariant(store.doc).bench, store.doc.activeVariant);
+const adopted = adoptKeptBench();
 view.fitToView(sectionBounds(activeSection(store.doc)));
 solve(store.doc, 'open');
-if (greeting) status.show(greeting.text, greeting.level);
+if (greeting || adopted) status.show([greeting?.text, adopted].filter(Boolean).join(' '), greeting?.level);
+
+/**
+ * Bench inputs this browser kept before files held them are adopted once into the active variant, if it has none,
+ * as an undoable step; returns what to say, or null.
+ */
+function adoptKeptBench(): string | null {
+  const kept = bench.takeKeptInputs();
+  if (kept === null || activeVariant(store.doc).bench !== undefined) return null;
+  if (!tryEdit('setBench', { bench: kept }, false)) return null;
+  return `The air and bench inputs kept in this browser are now saved with the variant "${store.doc.activeVariant}".`;
+}
 
 // For browser tests and the interaction benchmark: read-only handles on the running app.
 // `stopSolverWorker` ends the live solver worker as a crash would, for the check that it is replaced.

@@ -37,3 +37,22 @@ export function sameBench(a: BenchInputs | undefined, b: BenchInputs | undefined
 function presentKeys(bench: BenchInputs): (keyof BenchInputs)[] {
   return (Object.keys(bench) as (keyof BenchInputs)[]).filter((key) => bench[key] !== undefined);
 }
+
+/**
+ * True when `after` differs from `before` in bench inputs and nothing else (no shape, part, name, unit or setting):
+ * such a change has nothing to solve again. Objects are compared by identity, as edits share what they leave alone.
+ */
+export function benchOnlyChange(before: PortDocument, after: PortDocument): boolean {
+  if (before === after || before.variants.length !== after.variants.length) return false;
+  const { variants: _a, ...restBefore } = before;
+  const { variants: _b, ...restAfter } = after;
+  if ((Object.keys(restAfter) as (keyof typeof restAfter)[]).some((key) => restBefore[key] !== restAfter[key])) return false;
+  let benchChanged = false;
+  for (let i = 0; i < after.variants.length; i++) {
+    const a = before.variants[i], b = after.variants[i];
+    if (a === b) continue;
+    if (a.name !== b.name || a.note !== b.note || a.parts !== b.parts || a.section !== b.section) return false;
+    if (!sameBench(a.bench, b.bench)) benchChanged = true;
+  }
+  return benchChanged;
+}

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { loadDocument, saveDocument } from '../../src/document/load.ts';
 import type { BenchInputs } from '../../src/document/types.ts';
 import { applyEdit, EDITS } from '../../src/editor/edits.ts';
-import { sameBench } from '../../src/editor/edits-bench.ts';
+import { benchOnlyChange, sameBench } from '../../src/editor/edits-bench.ts';
 import { boxDocument, deepFreeze } from './fixtures.ts';
 
 /** Invented inputs: 28 in H2O (6974.4892 Pa), 20 °C, an 86 mm bore. */
@@ -70,5 +70,28 @@ describe('sameBench', () => {
     expect(sameBench(BENCH, { ...BENCH, boreM: 0.0861 })).toBe(false);
     expect(sameBench({ boreM: 0.086 }, { boreM: 0.086, strokeM: undefined })).toBe(true);
     expect(sameBench({ boreM: 0.086 }, { strokeM: 0.086 })).toBe(false);
+  });
+});
+
+describe('benchOnlyChange', () => {
+  it('is true for setBench and its undo, so the field is not solved again', () => {
+    const doc = boxDocument();
+    const set = applyEdit(doc, 'setBench', { bench: BENCH, variant: 'opened roof' });
+    expect(benchOnlyChange(doc, set)).toBe(true);
+    expect(benchOnlyChange(set, doc)).toBe(true);
+  });
+
+  it('is false for no change (a drag let go) and for any change a solve must follow', () => {
+    const doc = applyEdit(boxDocument(), 'setBench', { bench: BENCH });
+    expect(benchOnlyChange(doc, doc)).toBe(false);
+    for (const [name, args] of [
+      ['setFilletRadius', { vertex: 1, radius: 2 }], ['setActiveVariant', { name: 'opened roof' }], ['setUnits', { units: 'inch' }],
+      ['addVariant', {}], ['renameVariant', { from: 'stock', to: 'ported' }],
+    ] as const) {
+      expect(benchOnlyChange(doc, applyEdit(doc, name, args)), name).toBe(false);
+    }
+    expect(benchOnlyChange(doc, { ...doc, settings: { gridDetail: 'fine' } })).toBe(false);
+    const benchAndShape = applyEdit(applyEdit(doc, 'setBench', {}), 'setFilletRadius', { vertex: 1, radius: 2 });
+    expect(benchOnlyChange(doc, benchAndShape)).toBe(false);
   });
 });
