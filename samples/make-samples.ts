@@ -111,8 +111,8 @@ function document(title: string, variants: Variant[]): PortDocument {
 const TIGHT = variant('tight short side', 4);
 const GENEROUS = variant('generous short side', 14);
 
-/** SI to six decimals, so the file reads 0.112323 rather than the float's last digits. */
-const six = (v: number): number => Math.round(v * 1e6) / 1e6;
+/** SI to nine significant digits, so the file reads 0.112323481 rather than the float's last digits, and shows 238 CFM again. */
+const nine = (v: number): number => Number(v.toPrecision(9));
 
 /**
  * Invented bench inputs for the comparison file: a room at 20 °C, 100.8 kPa and 45% humidity, the bench at
@@ -120,8 +120,8 @@ const six = (v: number): number => Math.round(v * 1e6) / 1e6;
  */
 function benchInputs(cfm: number): BenchInputs {
   return {
-    airTemperatureK: 293.15, barometricPressurePa: 100_800, relativeHumidityPct: 45, testPressurePa: six(inH2OToPa(28)),
-    measuredFlowM3PerS: six(cfmToM3s(cfm)), boreM: 0.086, strokeM: 0.086, engineSpeedRpm: 6500, cylinderCount: 4,
+    airTemperatureK: 293.15, barometricPressurePa: 100_800, relativeHumidityPct: 45, testPressurePa: nine(inH2OToPa(28)),
+    measuredFlowM3PerS: nine(cfmToM3s(cfm)), boreM: 0.086, strokeM: 0.086, engineSpeedRpm: 6500, cylinderCount: 4,
     meanFlowCoefficient: 0.35, hpPerCfm: 0.26, humidityModel: 'cipm-2007', referenceArea: 'curtain', flowScale: 'ideal speed',
   };
 }
