@@ -283,12 +283,14 @@ solve(store.doc, 'open');
 if (greeting || adopted) status.show([greeting?.text, adopted].filter(Boolean).join(' '), greeting?.level);
 
 /**
- * Bench inputs this browser kept before files held them are adopted once into the active variant, if it has none,
- * as an undoable step; returns what to say, or null.
+ * Bench inputs this browser kept before files held them are adopted once, as an undoable step, into the active
+ * variant of the first work started on that has none; returns what to say, or null.
  */
 function adoptKeptBench(): string | null {
+  // Left in the browser while the active variant has inputs of its own, for a later start on work that has none.
+  if (activeVariant(store.doc).bench !== undefined) return null;
   const kept = bench.takeKeptInputs();
-  if (kept === null || activeVariant(store.doc).bench !== undefined) return null;
+  if (kept === null) return null;
   if (!tryEdit('setBench', { bench: kept }, false)) return null;
   return `The air and bench inputs kept in this browser are now saved with the variant "${store.doc.activeVariant}".`;
 }

@@ -15,17 +15,20 @@ export class DocumentCheckError extends Error {
 /**
  * Throws DocumentCheckError for the first variant of `doc` that `check` would refuse: no inlet or no outlet edge,
  * or a case that does not set up on the file's own grid detail (a fillet too big, a crossing, a part that does not
- * fit). Variants that are the very objects `before` held, under the same units and grid detail, were checked when
- * they were committed and are not built again, so a drag step builds only the variant it changes.
+ * fit). Variants whose section and parts are the very objects a variant of `before` held, under the same units and
+ * grid detail, were checked when they were committed and are not built again, so a drag step builds only the variant
+ * it changes and a change of bench inputs builds none.
  */
 export function checkDocument(doc: PortDocument, before?: PortDocument): void {
   if (!doc.variants.some((v) => v.name === doc.activeVariant)) {
     throw new DocumentCheckError(doc.activeVariant, 'The file names it as the active variant, but holds no variant of that name.');
   }
   const same = before !== undefined && before.units === doc.units && before.settings.gridDetail === doc.settings.gridDetail;
-  const known = new Set<Variant>(same ? before.variants : []);
+  // A variant is built from its section and parts alone (not its name, note or bench inputs): a pair already checked
+  // need not be built again, so a change of bench inputs costs no build.
+  const known = new Map<Variant['section'], Variant['parts']>(same ? before.variants.map((v) => [v.section, v.parts]) : []);
   for (const variant of doc.variants) {
-    if (known.has(variant)) continue;
+    if (known.has(variant.section) && known.get(variant.section) === variant.parts) continue;
     const problem = variantProblem(doc, variant);
     if (problem !== null) throw new DocumentCheckError(variant.name, problem.message, problem.fault);
   }
