@@ -13,6 +13,7 @@ import { caseSetup, CELLS_BY_DETAIL, DRAG_CELLS, type CaseSetup } from './study/
 import { fillHelp } from './app/help-overlay.ts';
 import { LiveSolve } from './app/live-solve.ts';
 import { mountBenchPanel } from './app/bench-panel.ts';
+import { adoptKeptBench } from './app/bench-adopt.ts';
 import { showPartsNumbers } from './app/breathing-panel.ts';
 import { PartsPanel } from './app/parts-panel.ts';
 import { PlotsPanel } from './app/plots-panel.ts';
@@ -277,23 +278,10 @@ function tryEdit(name: string, args: unknown, resetSelection = true, cause: Chan
 showDocument(store.doc);
 showPartsNumbers(byId('breathing'), bench, store.doc);
 bench.showInputs(activeVariant(store.doc).bench, store.doc.activeVariant);
-const adopted = adoptKeptBench();
+const adopted = adoptKeptBench(store.doc, () => bench.takeKeptInputs(), (inputs) => tryEdit('setBench', { bench: inputs }, false));
 view.fitToView(sectionBounds(activeSection(store.doc)));
 solve(store.doc, 'open');
 if (greeting || adopted) status.show([greeting?.text, adopted].filter(Boolean).join(' '), greeting?.level);
-
-/**
- * Bench inputs this browser kept before files held them are adopted once, as an undoable step, into the active
- * variant of the first work started on that has none; returns what to say, or null.
- */
-function adoptKeptBench(): string | null {
-  // Left in the browser while the active variant has inputs of its own, for a later start on work that has none.
-  if (activeVariant(store.doc).bench !== undefined) return null;
-  const kept = bench.takeKeptInputs();
-  if (kept === null) return null;
-  if (!tryEdit('setBench', { bench: kept }, false)) return null;
-  return `The air and bench inputs kept in this browser are now saved with the variant "${store.doc.activeVariant}".`;
-}
 
 // For browser tests and the interaction benchmark: read-only handles on the running app.
 // `stopSolverWorker` ends the live solver worker as a crash would, for the check that it is replaced.

@@ -5,6 +5,7 @@ import { checkDocument, DocumentCheckError } from '../../src/app/document-check.
 import { DocumentStore, type ChangeCause } from '../../src/app/document-store.ts';
 import { loadDocument } from '../../src/document/load.ts';
 import type { PortDocument } from '../../src/document/types.ts';
+import { adoptKeptBench } from '../../src/app/bench-adopt.ts';
 import { benchOnlyChange } from '../../src/editor/edits-bench.ts';
 import { activeVariant, applyEdit, EDITS, isEditName } from '../../src/editor/index.ts';
 
@@ -52,5 +53,31 @@ describe('bench inputs in the store', () => {
     const benchOnly = applyEdit(broken, 'setBench', { bench: { boreM: 0.09 } });
     expect(() => checkDocument(benchOnly, broken)).not.toThrow();
     expect(() => checkDocument(benchOnly)).toThrow(DocumentCheckError);
+  });
+});
+
+describe('inputs kept in the browser before files held them', () => {
+  const KEPT = { boreM: 0.1024, testPressurePa: 6974.4892 };
+  const withoutBench = (): PortDocument => applyEdit(SAMPLE, 'setBench', {});
+
+  it('are moved into the active variant that has none, as one undoable step, and the porter is told', () => {
+    const store = newStore(withoutBench());
+    let taken = 0;
+    const said = adoptKeptBench(store.doc, () => (taken++, KEPT), (bench) => (store.edit('setBench', { bench }), true));
+    expect(said).toBe('The air and bench inputs kept in this browser are now saved with the variant "tight short side".');
+    expect(taken).toBe(1);
+    expect(activeVariant(store.doc).bench).toEqual(KEPT);
+    expect(store.steps(5).undo).toEqual(['Set bench inputs']);
+  });
+
+  it('are left where they are while the active variant has inputs of its own, and nothing is said', () => {
+    let taken = 0;
+    expect(adoptKeptBench(SAMPLE, () => (taken++, KEPT), () => true)).toBeNull();
+    expect(taken).toBe(0);
+  });
+
+  it('say nothing when there are none, or the step is refused', () => {
+    expect(adoptKeptBench(withoutBench(), () => null, () => true)).toBeNull();
+    expect(adoptKeptBench(withoutBench(), () => KEPT, () => false)).toBeNull();
   });
 });
