@@ -103,7 +103,7 @@ export function mountBenchPanel(host: HTMLElement, options: BenchPanelOptions = 
     options.onInputs?.(inputs);
   }
 
-  // A reload soon after a unit switch must not lose the last number to the write delay.
+  // A reload soon after a unit switch must not lose it to the write delay.
   doc.defaultView?.addEventListener('pagehide', () => kept.flush(), { signal });
 
   return {
