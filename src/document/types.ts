@@ -224,7 +224,10 @@ export interface Settings {
 export const FORMAT_NAME = 'portwright-section';
 export const FORMAT_VERSION = 4;
 
-/** The saved file, current version. */
+/**
+ * The saved file, current version. A later format step adds an optional `underlay` here (the photo of the sectioned
+ * casting traced over), with its own version and an identity migration; see Variant for the keys kept per variant.
+ */
 export interface PortDocument {
   readonly format: typeof FORMAT_NAME;
   readonly version: typeof FORMAT_VERSION;
