@@ -10,9 +10,10 @@
 
 import { writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
-import type { Edge, Parts, PortDocument, Section, Variant, Vertex } from '../src/document/types.ts';
+import { FORMAT_VERSION, type BenchInputs, type Edge, type Parts, type PortDocument, type Section, type Variant, type Vertex } from '../src/document/types.ts';
 import { saveDocument } from '../src/document/load.ts';
 import { applyParts } from '../src/parts/apply.ts';
+import { cfmToM3s, inH2OToPa } from '../src/breathing/units.ts';
 
 const VALVE_DIAMETER = 46;
 const VALVE_LIFT = 10;
@@ -102,7 +103,7 @@ function variant(name: string, shortSideRadius: number): Variant {
 
 function document(title: string, variants: Variant[]): PortDocument {
   return {
-    format: 'portwright-section', version: 3, title, units: 'mm',
+    format: 'portwright-section', version: FORMAT_VERSION, title, units: 'mm',
     activeVariant: variants[0].name, settings: { gridDetail: 'standard' }, variants,
   };
 }
@@ -110,12 +111,29 @@ function document(title: string, variants: Variant[]): PortDocument {
 const TIGHT = variant('tight short side', 4);
 const GENEROUS = variant('generous short side', 14);
 
+/** SI to nine significant digits, so the file reads 0.112323481 rather than the float's last digits, and shows 238 CFM again. */
+const nine = (v: number): number => Number(v.toPrecision(9));
+
+/**
+ * Invented bench inputs for the comparison file: a room at 20 °C, 100.8 kPa and 45% humidity, the bench at
+ * 28 in H2O, an 86 x 86 mm four-cylinder at 6500 rpm; the tight short side flowed 238 CFM, the generous one 251.
+ */
+function benchInputs(cfm: number): BenchInputs {
+  return {
+    airTemperatureK: 293.15, barometricPressurePa: 100_800, relativeHumidityPct: 45, testPressurePa: nine(inH2OToPa(28)),
+    measuredFlowM3PerS: nine(cfmToM3s(cfm)), boreM: 0.086, strokeM: 0.086, engineSpeedRpm: 6500, cylinderCount: 4,
+    meanFlowCoefficient: 0.35, hpPerCfm: 0.26, humidityModel: 'cipm-2007', referenceArea: 'curtain', flowScale: 'ideal speed',
+  };
+}
+
 /** File name (in samples/) -> document. */
 export function buildSamples(): Record<string, PortDocument> {
   return {
     'street-tight-short-side.json': document('Street intake, 46 mm valve: tight short side', [TIGHT]),
     'street-generous-short-side.json': document('Street intake, 46 mm valve: generous short side', [GENEROUS]),
-    'short-side-compare.json': document('Street intake, 46 mm valve: short-side radius compared', [TIGHT, GENEROUS]),
+    'short-side-compare.json': document('Street intake, 46 mm valve: short-side radius compared', [
+      { ...TIGHT, bench: benchInputs(238) }, { ...GENEROUS, bench: benchInputs(251) },
+    ]),
   };
 }
 

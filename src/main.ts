@@ -16,6 +16,7 @@ import { caseSetup, CELLS_BY_DETAIL, DRAG_CELLS, type CaseSetup } from './study/
 import { fillHelp } from './app/help-overlay.ts';
 import { LiveSolve } from './app/live-solve.ts';
 import { mountBenchPanel } from './app/bench-panel.ts';
+import { adoptKeptBench } from './app/bench-adopt.ts';
 import { showPartsNumbers } from './app/breathing-panel.ts';
 import { PartsPanel } from './app/parts-panel.ts';
 import { PlotsPanel } from './app/plots-panel.ts';
@@ -26,7 +27,8 @@ import { defaultSettings, parseLevels } from './app/settings.ts';
 import { buildSettingsPanel, type SettingsGroup } from './app/settings-panel.ts';
 import { sentences, StatusLine } from './app/status.ts';
 import type { PortDocument } from './document/types.ts';
-import { activeSection, type CommandName } from './editor/index.ts';
+import { activeSection, activeVariant, type CommandName } from './editor/index.ts';
+import { benchOnlyChange } from './editor/edits-bench.ts';
 import { sectionBounds } from './geometry/index.ts';
 import { thinWallNote } from './solver/thin-wall-note.ts';
 import type { FlowDomain } from './solver/types.ts';
@@ -138,7 +140,11 @@ function showDocument(doc: PortDocument): void {
 
 /** The active variant shown before the latest change (an undo that switches variants forgets the selection). */
 let shownVariant = store.doc.activeVariant;
+/** The document as the last change left it: a change of bench inputs alone has nothing to solve. */
+let lastDoc = store.doc;
 store.subscribe((doc, cause) => {
+  const benchOnly = benchOnlyChange(lastDoc, doc);
+  lastDoc = doc;
   // An opened file brings its own units and grid detail, and is solved on its own grid as the command solves it;
   // an undo or redo may bring back other units or another grid detail.
   const unitsChanged = settings.units !== doc.units || settings.gridDetail !== doc.settings.gridDetail;
@@ -146,7 +152,7 @@ store.subscribe((doc, cause) => {
     settings.units = doc.units;
     settings.gridDetail = doc.settings.gridDetail;
   }
-  solve(doc, cause);
+  if (!benchOnly) solve(doc, cause);
   // Mid-drag only the field and the handles follow the pointer; panels catch up when the drag ends.
   if (cause === 'drag') return;
   undoControls.refresh();
@@ -156,6 +162,7 @@ store.subscribe((doc, cause) => {
   selectionPanel.show(doc, editor.selection);
   partsPanel.update(doc);
   showPartsNumbers(byId('breathing'), bench, doc);
+  bench.showInputs(activeVariant(doc).bench, doc.activeVariant);
   if (cause === 'history' && unitsChanged) {
     refreshSettingsPanel();
     view.setUnits(doc.units);
@@ -240,6 +247,8 @@ const bench = mountBenchPanel(byId('bench-host'), {
     applySettings('reading');
     status.show(`Flow scale for the boundary-layer march set to ${ms.toFixed(1)} m/s from the bench.`);
   },
+  // One typed value or choice is one undo step; it is kept in the variant shown and solves nothing again.
+  onInputs: (inputs) => tryEdit('setBench', { bench: inputs }, false),
 });
 
 const partsPanel = new PartsPanel(gui, (part, values) => {
@@ -276,9 +285,13 @@ function tryEdit(name: string, args: unknown, resetSelection = true, cause: Chan
 
 showDocument(store.doc);
 showPartsNumbers(byId('breathing'), bench, store.doc);
+bench.showInputs(activeVariant(store.doc).bench, store.doc.activeVariant);
 view.fitToView(sectionBounds(activeSection(store.doc)));
 solve(store.doc, 'open');
 const keeping = mountWorkKeeping({ started, sampleText, say: (m, level) => status.show(m, level), element: byId, now: Date.now });
+// After the keeping is mounted, so the adopted inputs are kept in the browser like any change.
+const adopted = adoptKeptBench(store.doc, () => bench.takeKeptInputs(), (inputs) => tryEdit('setBench', { bench: inputs }, false));
+if (adopted) status.show(adopted);
 
 // For browser tests and the interaction benchmark: read-only handles on the running app.
 // `stopSolverWorker` ends the live solver worker as a crash would, for the check that it is replaced.

@@ -29,6 +29,12 @@ export function engineRows(ctx: RowContext): OutputRow[] {
   ];
 }
 
+/**
+ * Where the knee comes from, as a reader cites it. The 0.6 was recalled from memory, not read from the book again;
+ * the tests and README say so, the screen names the work.
+ */
+export const MACH_INDEX_SOURCE = 'C. F. Taylor, The Internal-Combustion Engine in Theory and Practice, vol. 1, 2nd ed., 1985';
+
 function machRow(ctx: RowContext): OutputRow {
   const head = { key: 'mach-index', group: 'engine', label: 'Inlet Mach index Z' } as const;
   const needs = ['bore', 'valveDiameter', 'stroke', 'rpm', 'flowCoefficient', 'temperature'] as const;
@@ -42,7 +48,7 @@ function machRow(ctx: RowContext): OutputRow {
     });
     const over = z > MACH_INDEX_KNEE;
     const where = over ? 'past the' : 'below the';
-    const note = `${where} ${MACH_INDEX_KNEE} knee, above which volumetric efficiency falls quickly (Taylor; recalled from memory)`;
+    const note = `${where} ${MACH_INDEX_KNEE} knee, above which volumetric efficiency falls quickly (${MACH_INDEX_SOURCE})`;
     return { valueSI: z, text: z.toFixed(3), note, flag: over };
   });
 }

@@ -1,5 +1,6 @@
 /** The bench panel's input fields: what each measures, its limits, and the message a porter sees when a number won't do. */
 
+import { BENCH_BOUNDS } from '../document/limits.ts';
 import { fieldFromSI, fieldToSI, fieldUnitLabel, numberText, parseNumber, type FieldKind, type PanelUnits } from './bench-panel-units.ts';
 
 export type FieldKey =
@@ -31,6 +32,7 @@ export interface FieldSpec {
   readonly note?: string;
 }
 
+// The file holds the same bounds (src/document/limits.ts BENCH_BOUNDS): whatever the panel takes, a saved file takes.
 // Limits keep out typing and unit slips, not rare workshops: room air from -40 to 60 C, a barometer from about
 // 5000 m altitude to a deep low, and the common humid-air formulas are made for room air anyway.
 export const FIELDS: { readonly [K in FieldKey]: FieldSpec } = {
@@ -41,7 +43,10 @@ export const FIELDS: { readonly [K in FieldKey]: FieldSpec } = {
     note: 'the room\'s own pressure, not a weather report\'s sea-level one',
   },
   humidity: { label: 'Relative humidity', kind: 'plain', plainUnit: '%', min: 0, max: 100, why: 'a percentage' },
-  testPressure: { label: 'Test pressure', kind: 'pressure', min: 0, aboveMin: true },
+  testPressure: {
+    label: 'Test pressure', kind: 'pressure', min: 0, aboveMin: true,
+    ceiling: BENCH_BOUNDS.testPressurePa.max, ceilingWhy: 'a quarter of the highest barometer, more than any flow bench pulls; check the unit',
+  },
   // Upper limits far above any bench or engine keep absurd typing (1e308) from overflowing into Infinity.
   flow: { label: 'Measured flow', kind: 'flow', min: 0, ceiling: 10, ceilingWhy: 'a bench reading (10 m³/s is over 21,000 CFM)' },
   bore: { label: 'Bore', kind: 'length', min: 0, aboveMin: true, ceiling: 1, ceilingWhy: 'a cylinder bore' },

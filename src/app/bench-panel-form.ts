@@ -26,6 +26,8 @@ export interface FormRefs {
 
 export interface FormHandlers {
   readonly onType: (key: FieldKey, text: string) => void;
+  /** The field's value was entered (Enter, or leaving the field after a change): one typed value. */
+  readonly onCommit: (key: FieldKey) => void;
   readonly onUnit: (quantity: PanelQuantity, unit: string) => void;
   readonly onHumidityModel: (model: HumidAirModel) => void;
   readonly onReferenceArea: (kind: ReferenceArea) => void;
@@ -91,6 +93,7 @@ function fieldRow(make: Make, id: string, key: FieldKey, units: PanelUnits, sign
   input.placeholder = spec.placeholder ?? '';
   input.dataset.field = key;
   input.addEventListener('input', () => on.onType(key, input.value), { signal });
+  input.addEventListener('change', () => on.onCommit(key), { signal });
   const error = make('div', 'bench-error');
   error.id = `${id}-error`;
   error.setAttribute('aria-live', 'polite');

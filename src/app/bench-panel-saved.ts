@@ -1,55 +1,30 @@
-/** What the porter typed and chose in the "Air and bench" panel, as plain JSON to keep between visits, and how it comes back. */
+/**
+ * The bench panel's display units, kept in the browser between visits (a viewing preference), and the inputs a
+ * browser kept before the file held them (format version 4), read once so they can be adopted into the document.
+ */
 
 import { z } from 'zod';
-import type { HumidAirModel } from '../breathing/index.ts';
-import { entryFromSI, entryFromText, FIELD_KEYS, FIELDS, type FieldKey } from './bench-panel-fields.ts';
-import {
-  REFERENCE_AREA_KEYS, setChoice, setUnit, typeField, type BenchPanelState, type FlowScaleSource, type FollowingField,
-} from './bench-panel-model.ts';
+import { entryFromSI, FIELD_KEYS, FIELDS, type FieldKey } from './bench-panel-fields.ts';
+import { REFERENCE_AREA_KEYS, setChoice, setUnit, typeField, type BenchPanelState, type FlowScaleSource } from './bench-panel-model.ts';
 import { quantityOf, UNIT_OPTIONS, type PanelQuantity, type PanelUnits } from './bench-panel-units.ts';
+import type { HumidAirModel } from '../breathing/index.ts';
 
-/** Raise when the meaning of a kept field changes; a store of another version is left unread. */
-export const SAVED_BENCH_VERSION = 1;
+/** What the browser keeps now: the display units only; the inputs live in each variant of the document. */
+export const SAVED_BENCH_VERSION = 2;
+/** What it kept before: the units, every field as typed and the three choices, one set for all files. */
+export const LEGACY_BENCH_VERSION = 1;
 
-/** Longest field text kept: far beyond any number a porter types, small enough that a broken store stays harmless. */
+/** Longest field text read back from a version-1 store: far beyond any number a porter types. */
 export const MAX_SAVED_TEXT = 100;
-
-export interface SavedField {
-  /** The field's text as typed, or as re-shown after a unit switch. */
-  readonly text: string;
-  /**
-   * The exact SI value behind a re-shown text (m, m², m³/s, Pa, K, or the plain number), kept because six digits lose
-   * a little; left out when typing the text again gives the same value.
-   */
-  readonly si?: number;
-}
 
 export interface SavedBench {
   readonly version: typeof SAVED_BENCH_VERSION;
   readonly units: PanelUnits;
-  /** The porter's fields; a port area or valve diameter that follows the document is not kept. */
-  readonly fields: Partial<Record<FieldKey, SavedField>>;
-  readonly humidityModel: HumidAirModel;
-  readonly referenceArea: BenchPanelState['referenceArea'];
-  readonly flowScale: FlowScaleSource;
 }
 
-function follows(state: BenchPanelState, key: FieldKey): boolean {
-  return (key === 'portArea' || key === 'valveDiameter') && state.follows[key as FollowingField];
-}
-
-/** The panel's own inputs as plain JSON; the areas and port area the app supplies are left out. */
+/** The panel's display units as plain JSON. */
 export function savedBench(state: BenchPanelState): SavedBench {
-  const fields: Partial<Record<FieldKey, SavedField>> = {};
-  for (const key of FIELD_KEYS) {
-    const { text, valueSI } = state.fields[key];
-    if (follows(state, key) || text.length > MAX_SAVED_TEXT) continue;
-    const retyped = entryFromText(key, text, state.units).valueSI;
-    const exact = valueSI !== null && Number.isFinite(valueSI) && valueSI !== retyped;
-    fields[key] = exact ? { text, si: valueSI } : { text };
-  }
-  const { units, humidityModel, referenceArea, flowScale } = state;
-  return { version: SAVED_BENCH_VERSION, units: { ...units }, fields, humidityModel, referenceArea, flowScale };
+  return { version: SAVED_BENCH_VERSION, units: { ...state.units } };
 }
 
 // Every choice the panel offers, checked against its type so a new choice cannot be forgotten here.
@@ -60,7 +35,8 @@ function oneOf<T extends string>(choices: Readonly<Record<T, unknown>>) {
   return z.enum(Object.keys(choices) as [T, ...T[]]);
 }
 
-const shell = z.object({ version: z.literal(SAVED_BENCH_VERSION) });
+const anyVersion = z.object({ version: z.union([z.literal(SAVED_BENCH_VERSION), z.literal(LEGACY_BENCH_VERSION)]) });
+const legacyShell = z.object({ version: z.literal(LEGACY_BENCH_VERSION) });
 const table = z.record(z.string(), z.unknown());
 const fieldShape = z.object({ text: z.string().max(MAX_SAVED_TEXT), si: z.unknown().optional() });
 const choiceShapes = {
@@ -74,28 +50,39 @@ function own(t: Record<string, unknown> | undefined, key: string): unknown {
   return t !== undefined && Object.hasOwn(t, key) ? t[key] : undefined;
 }
 
-/**
- * The kept panel put back onto `base` through the panel's own edits, so it is exactly what typing would give. Whatever
- * is unknown, malformed or of another version is ignored part by part; never throws.
- */
-export function restoreBench(saved: unknown, base: BenchPanelState): BenchPanelState {
-  if (!shell.safeParse(saved).success) return base;
-  const record = saved as Record<string, unknown>;
-  const units = table.safeParse(own(record, 'units')).data;
-  const fields = table.safeParse(own(record, 'fields')).data;
+/** The kept display units put onto `base` (from a store of either version); `base` when none are usable. Never throws. */
+export function restoreUnits(saved: unknown, base: BenchPanelState): BenchPanelState {
+  return withUnits(saved, base).state;
+}
+
+function withUnits(saved: unknown, base: BenchPanelState): { state: BenchPanelState; known: Set<PanelQuantity> } {
+  const known = new Set<PanelQuantity>();
+  if (!anyVersion.safeParse(saved).success) return { state: base, known };
+  const units = table.safeParse(own(saved as Record<string, unknown>, 'units')).data;
   let state = base;
-  const unitKnown = new Set<PanelQuantity>();
   for (const quantity of Object.keys(UNIT_OPTIONS) as PanelQuantity[]) {
     const unit = own(units, quantity);
     if (!UNIT_OPTIONS[quantity].some((o) => o.value === unit)) continue;
-    unitKnown.add(quantity);
+    known.add(quantity);
     if (unit !== state.units[quantity]) state = setUnit(state, quantity, unit as never);
   }
+  return { state, known };
+}
+
+/**
+ * A version-1 store's inputs put back onto `base` through the panel's own edits, so they are exactly what typing
+ * would give; null for a store of another version. Whatever is unknown or malformed is ignored part by part; never throws.
+ */
+export function restoreLegacyBench(saved: unknown, base: BenchPanelState): BenchPanelState | null {
+  if (!legacyShell.safeParse(saved).success) return null;
+  const record = saved as Record<string, unknown>;
+  const fields = table.safeParse(own(record, 'fields')).data;
+  let { state, known } = withUnits(saved, base);
   for (const key of FIELD_KEYS) {
     const field = fieldShape.safeParse(own(fields, key));
     const quantity = quantityOf(FIELDS[key].kind);
     // A number without the unit it was typed in cannot be read back; it is left at the base value.
-    if (field.success && (quantity === null || unitKnown.has(quantity))) state = restoreField(state, key, field.data);
+    if (field.success && (quantity === null || known.has(quantity))) state = restoreField(state, key, field.data);
   }
   for (const key of Object.keys(choiceShapes) as Array<keyof typeof choiceShapes>) {
     const choice = choiceShapes[key].safeParse(own(record, key));

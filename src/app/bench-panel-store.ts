@@ -1,21 +1,26 @@
-/** Keeps the bench panel's inputs in the browser's storage between visits: one read at mount, writes held back. */
+/** Keeps the bench panel's display units in the browser's storage between visits, and hands over inputs kept there before. */
 
 import type { BenchPanelState } from './bench-panel-model.ts';
-import { restoreBench, savedBench } from './bench-panel-saved.ts';
+import { restoreLegacyBench, restoreUnits, savedBench } from './bench-panel-saved.ts';
 
-/** Where the panel's inputs live; the document's own autosave has a key of its own. */
+/** Where the panel's units live; the document's own autosave has a key of its own. */
 export const BENCH_STORAGE_KEY = 'portwright.bench';
 
-/** Quiet time after the last change before it is written, ms: typing a number is one write, not one per key. */
+/** Quiet time after the last change before it is written, ms: a burst of changes is one write. */
 export const BENCH_WRITE_DELAY_MS = 500;
 
 /** The part of the Web Storage API the panel uses (window.localStorage in the page, a fake in tests). */
 export type BenchStorage = Pick<Storage, 'getItem' | 'setItem'>;
 
 export interface BenchStore {
-  /** The panel as the last visit left it, put onto `base`; `base` when nothing usable is kept. */
+  /** The panel with the units the last visit left, put onto `base`; `base` when nothing usable is kept. */
   restore(base: BenchPanelState): BenchPanelState;
-  /** The panel changed: it is written once no change has come for the write delay. */
+  /**
+   * The inputs a browser kept before they were saved in the document, put onto `base`, or null when there are none.
+   * Taking them rewrites the store with the units alone, so they are handed over once.
+   */
+  takeLegacy(base: BenchPanelState): BenchPanelState | null;
+  /** The panel changed: its units are written once no change has come for the write delay. */
   changed(state: BenchPanelState): void;
   /** Write a change still waiting now (the page is going away, the panel is disposed). */
   flush(): void;
@@ -39,20 +44,28 @@ export function benchStore(storage: BenchStorage | null, delayMs = BENCH_WRITE_D
       storage.setItem(BENCH_STORAGE_KEY, text);
       lastText = text;
     } catch {
-      // Storage full or disabled: the panel still works, it just starts fresh next time.
+      // Storage full or disabled: the panel still works, it just starts in its default units next time.
+    }
+  }
+
+  function read(): unknown {
+    if (!storage) return null;
+    try {
+      lastText = storage.getItem(BENCH_STORAGE_KEY);
+      return lastText === null ? null : JSON.parse(lastText);
+    } catch {
+      return null;
     }
   }
 
   return {
-    restore(base) {
-      if (!storage) return base;
-      try {
-        const text = storage.getItem(BENCH_STORAGE_KEY);
-        lastText = text;
-        return text === null ? base : restoreBench(JSON.parse(text), base);
-      } catch {
-        return base;
-      }
+    restore: (base) => restoreUnits(read(), base),
+    takeLegacy(base) {
+      const legacy = restoreLegacyBench(read(), base);
+      if (legacy === null) return null;
+      pending = base;
+      flush();
+      return legacy;
     },
     changed(state) {
       if (!storage) return;

@@ -5,13 +5,14 @@ import { FIELD_KEYS, unitLabel } from './bench-panel-fields.ts';
 import type { FormRefs } from './bench-panel-form.ts';
 import { appValue, fieldProblems, REFERENCE_AREA_KEYS, type BenchPanelState, type FollowingField } from './bench-panel-model.ts';
 
-export function syncForm(refs: FormRefs, state: BenchPanelState): void {
+/** `everyBox` rewrites the box being typed in too (the document changed under it: undo, another variant, a file). */
+export function syncForm(refs: FormRefs, state: BenchPanelState, everyBox = false): void {
   const problems = fieldProblems(state);
   for (const key of FIELD_KEYS) {
     const f = refs.fields[key];
     const text = state.fields[key].text;
     // The field being typed in keeps its own caret; only other fields are rewritten.
-    if (f.input.value !== text && f.input.ownerDocument.activeElement !== f.input) f.input.value = text;
+    if (f.input.value !== text && (everyBox || f.input.ownerDocument.activeElement !== f.input)) f.input.value = text;
     const problem = problems[key] ?? '';
     f.error.textContent = problem;
     f.input.setAttribute('aria-invalid', problem ? 'true' : 'false');

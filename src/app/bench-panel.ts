@@ -1,11 +1,14 @@
 /** The "Air and bench" calculator panel: a self-contained DOM component over the pure bench model. */
 
 import { formatQuantity } from '../breathing/index.ts';
+import type { BenchInputs } from '../document/types.ts';
+import { sameBench } from '../editor/edits-bench.ts';
 import { buildForm } from './bench-panel-form.ts';
 import {
   followApp, initialBenchState, setAreas, setChoice, setPortArea, setUnit, typeField, type BenchAreas, type BenchPanelState,
   type FlowScaleSource,
 } from './bench-panel-model.ts';
+import { benchInputsOf, stateWithInputs } from './bench-panel-inputs.ts';
 import { benchOutputs, flowScaleSpeed } from './bench-panel-outputs.ts';
 import { renderResults } from './bench-panel-results.ts';
 import { benchStore, type BenchStorage } from './bench-panel-store.ts';
@@ -18,8 +21,13 @@ export interface BenchPanelOptions {
   readonly onInletSpeed?: (ms: number) => void;
   /** Units to start in (defaults: mm, m/s, CFM, in H2O, barometer in Pa, °C). */
   readonly units?: Partial<PanelUnits>;
-  /** Where the porter's inputs are kept between visits (default the page's localStorage); null keeps nothing. */
+  /** Where the panel's display units are kept between visits (default the page's localStorage); null keeps nothing. */
   readonly storage?: BenchStorage | null;
+  /**
+   * The porter entered a value or changed a choice: the inputs to keep in the document for the variant shown (one
+   * call per typed value, none for a unit switch or the app's own areas). Without it the panel keeps them to itself.
+   */
+  readonly onInputs?: (bench: BenchInputs) => void;
 }
 
 export interface BenchPanel {
@@ -29,6 +37,13 @@ export interface BenchPanel {
   setPortArea(m2: number | null, source?: string): void;
   /** Follow the document's length unit. */
   setLengthUnits(units: 'mm' | 'inch'): void;
+  /**
+   * Show the inputs the document holds for the variant named `owner` (undefined: none typed yet, the panel's
+   * defaults). Inputs the panel already shows for that variant are left as they are, with the text as typed.
+   */
+  showInputs(bench: BenchInputs | undefined, owner: string): void;
+  /** The inputs this browser kept before they were saved in the document, once (null when there are none). */
+  takeKeptInputs(): BenchInputs | null;
   dispose(): void;
 }
 
@@ -42,6 +57,9 @@ export function mountBenchPanel(host: HTMLElement, options: BenchPanelOptions = 
   const signal = lifetime.signal;
   const kept = benchStore(options.storage === undefined ? pageStorage(doc) : options.storage);
   let state: BenchPanelState = kept.restore(initialBenchState(options.units));
+  /** The variant whose inputs are shown, and the inputs the document holds for it as far as the panel knows. */
+  let owner: string | null = null;
+  let shown: BenchInputs | undefined;
 
   // A fold, like the cautions box: the panel is long and the side bar is shared.
   const root = doc.createElement('details');
@@ -51,36 +69,57 @@ export function mountBenchPanel(host: HTMLElement, options: BenchPanelOptions = 
   title.textContent = 'Air and bench';
   const form = buildForm(doc, idPrefix, state, signal, {
     onType: (key, text) => update(typeField(state, key, text)),
+    onCommit: () => commit(state),
     onUnit: (quantity, unit) => update(setUnit(state, quantity, unit as never)),
-    onHumidityModel: (model) => update(setChoice(state, 'humidityModel', model)),
-    onReferenceArea: (kind) => update(setChoice(state, 'referenceArea', kind)),
-    onFollow: (key) => update(followApp(state, key)),
+    onHumidityModel: (model) => commit(setChoice(state, 'humidityModel', model)),
+    onReferenceArea: (kind) => commit(setChoice(state, 'referenceArea', kind)),
+    onFollow: (key) => commit(followApp(state, key)),
   });
   const results = resultsBlock(doc, idPrefix, signal, (speed) => update(setUnit(state, 'speed', speed)));
   const scale = scaleBlock(doc, idPrefix, signal, options.onInletSpeed, {
-    choose: (source) => update(setChoice(state, 'flowScale', source)),
+    choose: (source) => commit(setChoice(state, 'flowScale', source)),
     current: () => state,
   });
   root.append(title, form.element, results.head, results.list, scale.element);
   host.append(root);
 
-  function update(next: BenchPanelState): void {
+  function update(next: BenchPanelState, everyBox = false): void {
     if (signal.aborted) return;
     state = next;
-    syncForm(form.refs, state);
+    syncForm(form.refs, state, everyBox);
     results.speed.value = state.units.speed;
     renderResults(results.list, benchOutputs(state));
     scale.sync(state);
     kept.changed(state);
   }
   update(state);
-  // A reload soon after typing must not lose the last number to the write delay.
+
+  /** Show `next`, and hand the document its inputs when they changed. */
+  function commit(next: BenchPanelState): void {
+    update(next);
+    const inputs = benchInputsOf(state, shown);
+    if (signal.aborted || sameBench(inputs, shown)) return;
+    shown = inputs;
+    options.onInputs?.(inputs);
+  }
+
+  // A reload soon after a unit switch must not lose it to the write delay.
   doc.defaultView?.addEventListener('pagehide', () => kept.flush(), { signal });
 
   return {
     setAreas: (areasM2) => update(setAreas(state, areasM2)),
     setPortArea: (m2, source) => update(setPortArea(state, m2, source)),
     setLengthUnits: (units) => update(setUnit(state, 'length', units)),
+    showInputs: (bench, variant) => {
+      if (variant === owner && sameBench(bench, shown)) return;
+      owner = variant;
+      shown = bench;
+      update(stateWithInputs(state, bench), true);
+    },
+    takeKeptInputs: () => {
+      const legacy = kept.takeLegacy(state);
+      return legacy === null ? null : benchInputsOf(legacy, undefined);
+    },
     dispose: () => {
       kept.flush();
       lifetime.abort();

@@ -26,9 +26,10 @@ export class DocumentShapeError extends Error {
 
 /**
  * Throws DocumentShapeError when Save would refuse `doc`, and DocumentCheckError for the first variant of `doc`
- * that `check` would refuse: no inlet or no outlet edge, or a case that does not set up on the file's own grid detail (a fillet too big, a crossing, a part that does not
- * fit). Variants that are the very objects `before` held, under the same units and grid detail, were checked when
- * they were committed and are not built again, so a drag step builds only the variant it changes.
+ * that `check` would refuse: no inlet or no outlet edge, or a case that does not set up on the file's own grid
+ * detail (a fillet too big, a crossing, a part that does not fit). Variants whose section and parts are the very
+ * objects a variant of `before` held, under the same units and grid detail, were checked when they were committed
+ * and are not built again, so a drag step builds only the variant it changes and a change of bench inputs builds none.
  */
 export function checkDocument(doc: PortDocument, before?: PortDocument): void {
   try {
@@ -40,9 +41,11 @@ export function checkDocument(doc: PortDocument, before?: PortDocument): void {
     throw new DocumentCheckError(doc.activeVariant, 'The file names it as the active variant, but holds no variant of that name.');
   }
   const same = before !== undefined && before.units === doc.units && before.settings.gridDetail === doc.settings.gridDetail;
-  const known = new Set<Variant>(same ? before.variants : []);
+  // A variant is built from its section and parts alone (not its name, note or bench inputs): a pair already checked
+  // need not be built again, so a change of bench inputs costs no build.
+  const known = new Map<Variant['section'], Variant['parts']>(same ? before.variants.map((v) => [v.section, v.parts]) : []);
   for (const variant of doc.variants) {
-    if (known.has(variant)) continue;
+    if (known.has(variant.section) && known.get(variant.section) === variant.parts) continue;
     const problem = variantProblem(doc, variant);
     if (problem !== null) throw new DocumentCheckError(variant.name, problem.message, problem.fault);
   }

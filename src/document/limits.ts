@@ -52,3 +52,36 @@ export const MAX_PART_LENGTH = MAX_COORDINATE;
 export const MAX_PORT_AREA = MAX_COORDINATE * MAX_COORDINATE;
 /** Largest lean of the valve axis from straight down, degrees (real heads lean well under this). */
 export const MAX_VALVE_INCLINATION_DEG = 75;
+
+/** Bounds of one bench input: from `min` (excluded when `aboveMin`) to `max`, a whole number when `integer`. */
+export interface BenchBound {
+  readonly min: number;
+  readonly aboveMin?: true;
+  readonly max: number;
+  readonly integer?: true;
+  /** What the number is, for the message: "kelvin", "pascals"... */
+  readonly unit: string;
+}
+
+/**
+ * Bounds of the bench inputs (BenchInputs in types.ts), the same as the bench panel's own limits: they keep out
+ * typing and unit slips, not rare workshops (room air from -40 to 60 °C, a barometer from about 5000 m altitude to a
+ * deep low), and ceilings far above any real bench or engine keep absurd numbers out.
+ */
+export const BENCH_BOUNDS = {
+  airTemperatureK: { min: 233.15, max: 333.15, unit: 'kelvin' },
+  barometricPressurePa: { min: 50e3, max: 110e3, unit: 'pascals' },
+  relativeHumidityPct: { min: 0, max: 100, unit: 'percent' },
+  /** A quarter of the highest barometer: no flow bench pulls more. */
+  testPressurePa: { min: 0, aboveMin: true, max: 27_500, unit: 'pascals' },
+  /** 10 m³/s is over 21,000 CFM. */
+  measuredFlowM3PerS: { min: 0, max: 10, unit: 'cubic metres a second' },
+  boreM: { min: 0, aboveMin: true, max: 1, unit: 'metres' },
+  strokeM: { min: 0, aboveMin: true, max: 1, unit: 'metres' },
+  engineSpeedRpm: { min: 0, max: 30_000, unit: 'revolutions a minute' },
+  cylinderCount: { min: 1, max: 24, integer: true, unit: 'cylinders' },
+  portAreaM2: { min: 0, aboveMin: true, max: 0.1, unit: 'square metres' },
+  valveDiameterM: { min: 0, aboveMin: true, max: 0.5, unit: 'metres' },
+  meanFlowCoefficient: { min: 0, aboveMin: true, max: 1, unit: 'a fraction of the valve head area' },
+  hpPerCfm: { min: 0, aboveMin: true, max: 1, unit: 'hp per CFM at 28 in H2O' },
+} as const satisfies Record<string, BenchBound>;

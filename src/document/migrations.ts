@@ -5,7 +5,7 @@
 
 import { z } from 'zod';
 import { FORMAT_NAME, type Section, type Settings, type Units } from './types.ts';
-import { documentV2Schema, sectionSchemaBeforeParts, titleSchema, unitsSchema } from './schema.ts';
+import { documentV2Schema, documentV3Schema, sectionSchemaBeforeParts, titleSchema, unitsSchema } from './schema.ts';
 
 /** Format version 1: one section at the top level, no variants, no settings. */
 export const documentV1Schema = z.strictObject(
@@ -55,6 +55,17 @@ function v2ToV3(doc: z.output<typeof documentV2Schema>): unknown {
   return { ...doc, version: 3 };
 }
 
+/**
+ * Version 3 to 4: variants may carry the bench panel's inputs (`bench`), optional, so a version-3 document is
+ * already a version-4 one once its version says so. The grid detail has been saved in `settings` since version 2.
+ *
+ * Later steps follow the same pattern, one optional key each with its own version and an identity lift like this one:
+ * `variants[].width` (width profile), `variants[].benchSheet` (bench rows) and a document-level `underlay` (photo).
+ */
+function v3ToV4(doc: z.output<typeof documentV3Schema>): unknown {
+  return { ...doc, version: 4 };
+}
+
 /** One step: the schema of version `from` and the lift to version `from + 1`. */
 export interface Migration {
   readonly from: number;
@@ -66,4 +77,5 @@ export interface Migration {
 export const MIGRATIONS: readonly Migration[] = [
   { from: 1, schema: documentV1Schema, up: v1ToV2 },
   { from: 2, schema: documentV2Schema, up: v2ToV3 },
+  { from: 3, schema: documentV3Schema, up: v3ToV4 },
 ];

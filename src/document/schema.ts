@@ -1,5 +1,5 @@
 /**
- * The zod schema of the current section file (format version 3), mirroring types.ts field for field.
+ * The zod schema of the current section file (format version 4), mirroring types.ts field for field.
  * Unknown fields are refused, not stripped: a misspelt "filetRadius" silently dropped would load a section
  * that differs from the file without a word, and a field this version does not know belongs to a newer format.
  * Every message is a plain requirement ("must be ..."); errors are worded from it by issues.ts.
@@ -7,6 +7,7 @@
 
 import { z } from 'zod';
 import { FORMAT_NAME, FORMAT_VERSION, type PortDocument } from './types.ts';
+import { benchInputsSchema } from './bench-schema.ts';
 import { checkParts, partsSchema } from './parts-schema.ts';
 import { boundedNumber, coordinateSchema } from './schema-numbers.ts';
 import {
@@ -137,11 +138,20 @@ const noteSchema = z
   .max(MAX_NOTE_LENGTH, { error: `must be text of at most ${MAX_NOTE_LENGTH} characters` })
   .optional();
 
+const variantError = { error: 'must be a variant { name, section }' };
+const checkVariantParts = (variant: { parts?: z.output<typeof partsSchema>; section: z.output<typeof sectionSchema> }, ctx: z.core.$RefinementCtx) => {
+  if (variant.parts) checkParts(variant.parts, variant.section.outline, ctx);
+};
+
+/** A variant of the current format: key order here is the order saveDocument writes (the short bench before the long section). */
 export const variantSchema = z
-  .strictObject({ name, note: noteSchema, parts: partsSchema.optional(), section: sectionSchema }, { error: 'must be a variant { name, section }' })
-  .superRefine((variant, ctx) => {
-    if (variant.parts) checkParts(variant.parts, variant.section.outline, ctx);
-  });
+  .strictObject({ name, note: noteSchema, parts: partsSchema.optional(), bench: benchInputsSchema.optional(), section: sectionSchema }, variantError)
+  .superRefine(checkVariantParts);
+
+/** The variant of format version 3: parts, but no bench inputs. */
+export const variantSchemaBeforeBench = z
+  .strictObject({ name, note: noteSchema, parts: partsSchema.optional(), section: sectionSchema }, variantError)
+  .superRefine(checkVariantParts);
 
 /** The variant of format version 2: no parts. */
 export const variantSchemaBeforeParts = z.strictObject(
@@ -185,6 +195,8 @@ function documentSchemaOf<V extends z.ZodType<{ name: string }>, N extends numbe
 
 /** The whole file, current version. */
 export const documentSchema = documentSchemaOf(FORMAT_VERSION, variantSchema);
+/** Format version 3: variants without bench inputs. */
+export const documentV3Schema = documentSchemaOf(3, variantSchemaBeforeBench);
 /** Format version 2: variants without parts, outlines without anchor corners. */
 export const documentV2Schema = documentSchemaOf(2, variantSchemaBeforeParts);
 

@@ -149,26 +149,85 @@ export interface Parts {
   readonly port?: PortPart;
 }
 
-/** A named alternative of the section, e.g. "tight short side" and "generous short side". */
+/** The humid-air formula the bench panel uses: CIPM-2007 (the default) or an ideal mixture of dry air and vapour. */
+export type BenchHumidityModel = 'cipm-2007' | 'ideal-mixture';
+/** The valve area a discharge coefficient is taken against (the default is the curtain). */
+export type BenchReferenceArea = 'curtain' | 'throat' | 'valve head';
+/** Which speed the panel offers as the boundary-layer march's flow scale (the default is the ideal speed). */
+export type BenchFlowScale = 'ideal speed' | 'bench flow / port area' | 'mean port speed';
+
+/**
+ * What the porter typed and chose in the "Air and bench" panel for one variant. Numbers are in SI with the unit in
+ * the key (K, Pa, m, m², m³/s), whatever units the drawing or the panel shows; three are in the trade's own units
+ * (percent, rev/min, hp per CFM at 28 in H2O). A number left out is a field left empty; a choice left out is the
+ * panel's default. The panel's display units are a viewing preference and are not part of the file. Bounds are the
+ * panel's own (limits.ts BENCH_BOUNDS), so anything the panel accepts the file accepts.
+ */
+export interface BenchInputs {
+  /** Room air temperature, K. */
+  readonly airTemperatureK?: number;
+  /** The room's own barometric pressure (not a sea-level report), Pa. */
+  readonly barometricPressurePa?: number;
+  /** Relative humidity of the room, percent. */
+  readonly relativeHumidityPct?: number;
+  /** Depression the bench pulls across the port, Pa (28 in H2O is 6974.5 Pa). */
+  readonly testPressurePa?: number;
+  /** Flow the bench measured at the test pressure, m³/s. */
+  readonly measuredFlowM3PerS?: number;
+  /** Cylinder bore, m. */
+  readonly boreM?: number;
+  /** Stroke, m. */
+  readonly strokeM?: number;
+  /** Engine speed, crankshaft rev/min. */
+  readonly engineSpeedRpm?: number;
+  /** Number of cylinders, a whole number. */
+  readonly cylinderCount?: number;
+  /** Port area typed by the porter, m²; left out while the panel follows the drawing's port area. */
+  readonly portAreaM2?: number;
+  /** Inlet valve diameter typed by the porter, m; left out while the panel follows the valve part. */
+  readonly valveDiameterM?: number;
+  /** Mean flow coefficient C_i against the valve head area over the open period, for the Mach index. */
+  readonly meanFlowCoefficient?: number;
+  /** The power rule's coefficient, hp per CFM at 28 in H2O (a rule of the trade quoted in those units). */
+  readonly hpPerCfm?: number;
+  readonly humidityModel?: BenchHumidityModel;
+  readonly referenceArea?: BenchReferenceArea;
+  readonly flowScale?: BenchFlowScale;
+}
+
+/**
+ * A named alternative of the section, e.g. "tight short side" and "generous short side".
+ *
+ * Room left for later data, each an optional key added with a format version step of its own and an identity
+ * migration (older files simply lack it); none is written as an empty placeholder now:
+ * - `width`: the variant's width profile (port width across the section along its length);
+ * - `benchSheet`: the variant's flow-bench sheet (measured rows of lift and flow);
+ * - the document-level `underlay` (a photo of the sectioned casting traced over) sits beside `settings`.
+ */
 export interface Variant {
   readonly name: string;
   readonly note?: string;
   /** Parametric valve, seat, test bore and port numbers; their geometry is already in `section`. */
   readonly parts?: Parts;
+  /** The air-and-bench panel's inputs for this variant (format version 4); left out when none were typed. */
+  readonly bench?: BenchInputs;
   readonly section: Section;
 }
 
 export type GridDetail = 'preview' | 'standard' | 'fine';
 
 export interface Settings {
-  /** Grid detail of the full solve. */
+  /** Grid detail of the full solve (saved since format version 2; the app and `solve` both solve on it). */
   readonly gridDetail: GridDetail;
 }
 
 export const FORMAT_NAME = 'portwright-section';
-export const FORMAT_VERSION = 3;
+export const FORMAT_VERSION = 4;
 
-/** The saved file, current version. */
+/**
+ * The saved file, current version. A later format step adds an optional `underlay` here (the photo of the sectioned
+ * casting traced over), with its own version and an identity migration; see Variant for the keys kept per variant.
+ */
 export interface PortDocument {
   readonly format: typeof FORMAT_NAME;
   readonly version: typeof FORMAT_VERSION;

@@ -10,7 +10,7 @@ const MM_PER_INCH = 25.4;
 /**
  * Every number in the variants is a length except angles and percentages (keys ending in "Deg" or "Pct") and
  * areas (keys ending in "Area", scaled by the square), by the format's naming rule; so one walk converts outlines,
- * fillets, islands and parts alike.
+ * fillets, islands and parts alike. A variant's bench inputs are in SI whatever the drawing's units, so they stay.
  */
 export function setUnits(doc: PortDocument, args: { readonly units: Units }): PortDocument {
   if (args.units === doc.units) return doc;
@@ -19,6 +19,7 @@ export function setUnits(doc: PortDocument, args: { readonly units: Units }): Po
 }
 
 function scaleLengths(value: unknown, factor: number, key: string): unknown {
+  if (key === 'bench') return value;
   if (typeof value === 'number') return /(Deg|Pct)$/.test(key) ? value : /Area$/.test(key) ? value * factor * factor : value * factor;
   if (Array.isArray(value)) return value.map((v) => scaleLengths(v, factor, key));
   if (value !== null && typeof value === 'object') {

@@ -20,6 +20,7 @@ import {
   setActiveVariant, setActiveVariantArgs,
 } from './edits-variants.ts';
 import { setUnits, setUnitsArgs } from './edits-units.ts';
+import { setBench, setBenchArgs } from './edits-bench.ts';
 
 /** A key that runs an edit on the current selection. */
 export interface EditShortcut {
@@ -93,6 +94,7 @@ export const EDITS = {
   setParts: spec({ name: 'setParts', label: 'Set parts', args: setPartsArgs, run: setParts, regeneratesParts: true }),
   setLift: spec({ name: 'setLift', label: 'Set lift', args: setLiftArgs, run: setLift, regeneratesParts: true }),
   removeParts: spec({ name: 'removeParts', label: 'Remove parts', args: removePartsArgs, run: removeParts, regeneratesParts: true }),
+  setBench: spec({ name: 'setBench', label: 'Set bench inputs', args: setBenchArgs, run: setBench }),
 } as const;
 
 export type EditName = keyof typeof EDITS;

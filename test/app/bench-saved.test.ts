@@ -1,4 +1,7 @@
-/** The bench panel's kept inputs: what is saved, that it comes back exactly, and that a broken store changes nothing it should not. */
+/**
+ * The bench panel's browser store: now the display units only; and the inputs a browser kept before the document held
+ * them (version 1), which must come back exactly for their one adoption, a broken store changing nothing it should not.
+ */
 
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
@@ -6,11 +9,30 @@ import { FIELD_KEYS, type FieldKey } from '../../src/app/bench-panel-fields.ts';
 import {
   followApp, initialBenchState, setAreas, setChoice, setPortArea, setUnit, typeField, type BenchPanelState, type FollowingField,
 } from '../../src/app/bench-panel-model.ts';
-import { MAX_SAVED_TEXT, restoreBench, savedBench, SAVED_BENCH_VERSION } from '../../src/app/bench-panel-saved.ts';
+import {
+  LEGACY_BENCH_VERSION, MAX_SAVED_TEXT, restoreLegacyBench, restoreUnits, savedBench, SAVED_BENCH_VERSION,
+} from '../../src/app/bench-panel-saved.ts';
 import { UNIT_OPTIONS, type PanelQuantity } from '../../src/app/bench-panel-units.ts';
 
-/** Through storage: the same JSON text a browser would keep. */
-const throughJson = (s: BenchPanelState): unknown => JSON.parse(JSON.stringify(savedBench(s)));
+/** What a browser kept under version 1 (the writer the panel used before the document held the inputs). */
+function legacySaved(state: BenchPanelState) {
+  const fields: Partial<Record<FieldKey, { text: string; si?: number }>> = {};
+  for (const key of FIELD_KEYS) {
+    const { text, valueSI } = state.fields[key];
+    const follows = (key === 'portArea' || key === 'valveDiameter') && state.follows[key];
+    if (follows || text.length > MAX_SAVED_TEXT) continue;
+    const retyped = typeField(state, key, text).fields[key].valueSI;
+    const exact = valueSI !== null && Number.isFinite(valueSI) && valueSI !== retyped;
+    fields[key] = exact ? { text, si: valueSI } : { text };
+  }
+  const { units, humidityModel, referenceArea, flowScale } = state;
+  return { version: LEGACY_BENCH_VERSION, units: { ...units }, fields, humidityModel, referenceArea, flowScale };
+}
+
+/** Through storage: the same JSON text a browser kept. */
+const throughJson = (s: BenchPanelState): unknown => JSON.parse(JSON.stringify(legacySaved(s)));
+/** The version-1 inputs put back, or `base` when the store holds none. */
+const restoreBench = (saved: unknown, base: BenchPanelState): BenchPanelState => restoreLegacyBench(saved, base) ?? base;
 
 /** A porter's session: engine in inches, bench in L/s and Pa, room in °F, some fields typed before a switch, some after. */
 function session(): BenchPanelState {
@@ -48,11 +70,11 @@ describe('a porter\'s inputs survive a visit', () => {
 
   it('the port area and valve diameter the document supplies are not kept; typed ones are', () => {
     let s = setPortArea(setAreas(initialBenchState(), { valveHead: 2e-3, curtain: 1.4e-3 }), 1.6e-3, 'measured');
-    expect(savedBench(s).fields).not.toHaveProperty('portArea');
-    expect(savedBench(s).fields).not.toHaveProperty('valveDiameter');
-    expect(JSON.stringify(savedBench(s))).not.toMatch(/areas|appPortArea|follows|measured/);
+    expect(legacySaved(s).fields).not.toHaveProperty('portArea');
+    expect(legacySaved(s).fields).not.toHaveProperty('valveDiameter');
+    expect(JSON.stringify(legacySaved(s))).not.toMatch(/areas|appPortArea|follows|measured/);
     s = typeField(s, 'portArea', '1500');
-    expect(savedBench(s).fields.portArea).toEqual({ text: '1500' });
+    expect(legacySaved(s).fields.portArea).toEqual({ text: '1500' });
     const back = restoreBench(throughJson(s), initialBenchState());
     expect(back.fields.portArea).toEqual(s.fields.portArea);
     expect(back.follows.portArea).toBe(false);
@@ -62,10 +84,27 @@ describe('a porter\'s inputs survive a visit', () => {
 
   it('a text typed in the unit shown needs no stored value; only a re-shown one does', () => {
     const s = session();
-    const kept = savedBench(s).fields;
+    const kept = legacySaved(s).fields;
     expect(kept.flow).toEqual({ text: '100.3' });
     expect(kept.stroke).toEqual({ text: '3.48031', si: s.fields.stroke.valueSI });
-    expect(savedBench(s).version).toBe(SAVED_BENCH_VERSION);
+  });
+});
+
+describe('the store now keeps the display units only', () => {
+  it('writes the units and nothing the porter typed (that is in the document)', () => {
+    const s = session();
+    expect(savedBench(s)).toEqual({ version: SAVED_BENCH_VERSION, units: s.units });
+    expect(JSON.stringify(savedBench(s))).not.toMatch(/fields|101\.6|humidityModel/);
+  });
+
+  it('reads the units back from a store of either version, and no inputs from the new one', () => {
+    const s = session();
+    for (const stored of [JSON.parse(JSON.stringify(savedBench(s))), throughJson(s)]) {
+      const back = restoreUnits(stored, initialBenchState());
+      expect(back.units).toEqual(s.units);
+      expect(back.fields.flow).toEqual(initialBenchState().fields.flow);
+    }
+    expect(restoreLegacyBench(JSON.parse(JSON.stringify(savedBench(s))), initialBenchState())).toBeNull();
   });
 });
 

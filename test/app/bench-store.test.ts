@@ -1,4 +1,4 @@
-/** The bench panel's storage: read once, writes held back until typing pauses, and a storage that fails never breaks the panel. */
+/** The bench panel's storage of its display units: writes held back, inputs of old visits handed over once, and a storage that fails never breaks the panel. */
 
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { initialBenchState, setAreas, setUnit, typeField } from '../../src/app/bench-panel-model.ts';
@@ -35,29 +35,30 @@ afterEach(() => {
 const typedBore = typeField(setUnit(initialBenchState(), 'length', 'inch'), 'bore', '4.03');
 
 describe('bench panel storage', () => {
-  it('writes once typing pauses, the last state only, under its own key', () => {
+  it('writes once changes pause, the last units only, under its own key', () => {
     const storage = fakeStorage();
     const kept = benchStore(storage);
-    kept.changed(typeField(initialBenchState(), 'bore', '1'));
-    kept.changed(typeField(initialBenchState(), 'bore', '10'));
+    kept.changed(setUnit(initialBenchState(), 'length', 'inch'));
+    kept.changed(setUnit(initialBenchState(), 'flow', 'L/s'));
     vi.advanceTimersByTime(BENCH_WRITE_DELAY_MS - 1);
-    kept.changed(typeField(initialBenchState(), 'bore', '102'));
+    kept.changed(typeField(setUnit(initialBenchState(), 'pressure', 'Pa'), 'bore', '102'));
     vi.advanceTimersByTime(BENCH_WRITE_DELAY_MS - 1);
     expect(storage.writes).toBe(0);
     vi.advanceTimersByTime(1);
     expect(storage.writes).toBe(1);
-    expect(JSON.parse(storage.items.get(BENCH_STORAGE_KEY)!).fields.bore).toEqual({ text: '102' });
+    const stored = JSON.parse(storage.items.get(BENCH_STORAGE_KEY)!);
+    expect(stored).toEqual({ version: 2, units: { ...initialBenchState().units, pressure: 'Pa' } });
     expect([...storage.items.keys()]).toEqual(['portwright.bench']);
   });
 
-  it('the next visit reads back what the last one kept', () => {
+  it('the next visit reads back the units, not what was typed (that is kept in the document)', () => {
     const storage = fakeStorage();
     const first = benchStore(storage);
     first.changed(typedBore);
     first.flush();
     const back = benchStore(storage).restore(initialBenchState());
     expect(back.units.length).toBe('inch');
-    expect(back.fields.bore).toEqual(typedBore.fields.bore);
+    expect(back.fields.bore).toEqual({ text: '', valueSI: null });
   });
 
   it('areas sent again and again by the app do not rewrite an unchanged store', () => {
@@ -65,14 +66,29 @@ describe('bench panel storage', () => {
     const kept = benchStore(storage);
     let s = kept.restore(initialBenchState());
     for (const head of [1e-3, 1.5e-3, 2e-3]) {
-      s = setAreas(s, { valveHead: head });
+      s = setAreas(typeField(s, 'rpm', String(head * 1e6)), { valveHead: head });
       kept.changed(s);
       vi.advanceTimersByTime(BENCH_WRITE_DELAY_MS);
     }
     expect(storage.writes).toBe(0);
-    kept.changed(typeField(s, 'rpm', '7000'));
+    kept.changed(setUnit(s, 'speed', 'ft/s'));
     kept.flush();
     expect(storage.writes).toBe(1);
+  });
+
+  it('hands over the inputs an older visit kept (version 1) once, then keeps the units alone', () => {
+    const legacy = { version: 1, units: { ...initialBenchState().units, length: 'inch' }, fields: { bore: { text: '4.03' } }, flowScale: 'mean port speed' };
+    const storage = fakeStorage({ [BENCH_STORAGE_KEY]: JSON.stringify(legacy) });
+    const kept = benchStore(storage);
+    const base = kept.restore(initialBenchState());
+    expect(base.units.length).toBe('inch');
+    const taken = kept.takeLegacy(base);
+    expect(taken?.fields.bore).toEqual(typedBore.fields.bore);
+    expect(taken?.flowScale).toBe('mean port speed');
+    expect(JSON.parse(storage.items.get(BENCH_STORAGE_KEY)!)).toEqual({ version: 2, units: base.units });
+    expect(kept.takeLegacy(base)).toBeNull();
+    expect(benchStore(storage).takeLegacy(initialBenchState())).toBeNull();
+    expect(benchStore(fakeStorage()).takeLegacy(initialBenchState())).toBeNull();
   });
 
   it('flush writes a waiting change at once and leaves no timer behind', () => {

@@ -1,10 +1,10 @@
 /** fast-check generators of valid section documents (valid by the schema; the geometry need not make sense). */
 
 import fc from 'fast-check';
-import type { Edge, Island, Outline, Parts, PortDocument, Section, Variant, Vertex } from '../../src/document/types.ts';
+import type { BenchInputs, Edge, Island, Outline, Parts, PortDocument, Section, Variant, Vertex } from '../../src/document/types.ts';
 import { FORMAT_VERSION } from '../../src/document/types.ts';
 import {
-  MAX_COORDINATE, MAX_FILLET_RADIUS, MAX_NAME_LENGTH, MAX_PART_LENGTH, MAX_PORT_AREA, MAX_VALVE_INCLINATION_DEG,
+  BENCH_BOUNDS, type BenchBound, MAX_COORDINATE, MAX_FILLET_RADIUS, MAX_NAME_LENGTH, MAX_PART_LENGTH, MAX_PORT_AREA, MAX_VALVE_INCLINATION_DEG,
 } from '../../src/document/limits.ts';
 
 /** Plain objects, as a loaded file gives (fc.record may otherwise build null-prototype ones). */
@@ -69,8 +69,25 @@ const partsArb: fc.Arbitrary<Parts> = fc.record(
   { requiredKeys: [], noNullPrototype: true },
 );
 
+/** Any number a bench input may hold, bounds included (a whole number where the bound says so). */
+function benchNumberArb(bound: BenchBound): fc.Arbitrary<number> {
+  if (bound.integer) return fc.integer({ min: bound.min, max: bound.max });
+  return fc.double({ min: bound.min, max: bound.max, minExcluded: bound.aboveMin === true, noNaN: true, noDefaultInfinity: true });
+}
+
+/** Bench inputs with any subset of the numbers and choices. */
+const benchArb: fc.Arbitrary<BenchInputs> = fc.record(
+  {
+    ...(Object.fromEntries(Object.entries(BENCH_BOUNDS).map(([key, bound]) => [key, benchNumberArb(bound)])) as Record<keyof typeof BENCH_BOUNDS, fc.Arbitrary<number>>),
+    humidityModel: fc.constantFrom('cipm-2007', 'ideal-mixture') as fc.Arbitrary<BenchInputs['humidityModel']>,
+    referenceArea: fc.constantFrom('curtain', 'throat', 'valve head') as fc.Arbitrary<BenchInputs['referenceArea']>,
+    flowScale: fc.constantFrom('ideal speed', 'bench flow / port area', 'mean port speed') as fc.Arbitrary<BenchInputs['flowScale']>,
+  },
+  { requiredKeys: [], noNullPrototype: true },
+);
+
 const variantArb: fc.Arbitrary<Variant> = fc.record(
-  { name: labelArb(), note: fc.string({ maxLength: 200 }), parts: partsArb, section: sectionArb },
+  { name: labelArb(), note: fc.string({ maxLength: 200 }), parts: partsArb, bench: benchArb, section: sectionArb },
   { requiredKeys: ['name', 'section'], noNullPrototype: true },
 );
 

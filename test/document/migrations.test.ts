@@ -8,15 +8,16 @@ import { documentErrorOf } from './document-error.ts';
 const fixture = (name: string): string => readFileSync(new URL(`../fixtures/${name}`, import.meta.url), 'utf8');
 
 describe('format version 1', () => {
-  it('migrates through version 2 to the expected current document (golden files)', () => {
+  it('migrates through versions 2 and 3 to the expected current document (golden files)', () => {
     const { document, fileVersion } = readDocument(fixture('section-v1.json'));
     expect(fileVersion).toBe(1);
     expect(document).toStrictEqual(loadDocument(fixture('section-v1-as-v2.json')));
     expect(document).toStrictEqual(loadDocument(fixture('section-v1-as-v3.json')));
+    expect(document).toStrictEqual(loadDocument(fixture('section-v1-as-v4.json')));
   });
 
-  it('saves as version 3, byte for byte the golden file', () => {
-    expect(saveDocument(loadDocument(fixture('section-v1.json')))).toBe(fixture('section-v1-as-v3.json'));
+  it('saves as version 4, byte for byte the golden file', () => {
+    expect(saveDocument(loadDocument(fixture('section-v1.json')))).toBe(fixture('section-v1-as-v4.json'));
   });
 
   it('names problems by their place in the version-1 file', () => {
@@ -35,12 +36,12 @@ describe('format version 1', () => {
 });
 
 describe('format version 2', () => {
-  it('migrates to version 3 unchanged but for the version (golden file)', () => {
+  it('migrates through version 3 unchanged but for the version (golden files)', () => {
     const { document, fileVersion } = readDocument(fixture('section-v1-as-v2.json'));
     expect(fileVersion).toBe(2);
-    expect(document.version).toBe(3);
-    expect(document.variants.every((v) => v.parts === undefined)).toBe(true);
-    expect(saveDocument(document)).toBe(fixture('section-v1-as-v3.json'));
+    expect(document.version).toBe(4);
+    expect(document.variants.every((v) => v.parts === undefined && v.bench === undefined)).toBe(true);
+    expect(saveDocument(document)).toBe(fixture('section-v1-as-v4.json'));
   });
 
   it('is refused when it has version-3 fields mixed in, naming each', () => {
@@ -50,6 +51,29 @@ describe('format version 2', () => {
     const message = documentErrorOf(() => loadDocument(JSON.stringify(v2))).message;
     expect(message).toContain('variants[0].parts: is not a field');
     expect(message).toContain('variants[0].section.outline.vertices[1].anchor: is not a field');
+  });
+});
+
+describe('format version 3', () => {
+  it('migrates to version 4 unchanged but for the version (golden files: a sample as version 3 wrote it)', () => {
+    const { document, fileVersion } = readDocument(fixture('section-v3.json'));
+    expect(fileVersion).toBe(3);
+    expect(document).toStrictEqual(loadDocument(fixture('section-v3-as-v4.json')));
+    expect(saveDocument(document)).toBe(fixture('section-v3-as-v4.json'));
+    const asWritten = JSON.parse(fixture('section-v3.json'));
+    expect({ ...document }).toStrictEqual({ ...asWritten, version: 4 });
+  });
+
+  it('keeps its grid detail', () => {
+    const v3 = JSON.parse(fixture('section-v3.json'));
+    v3.settings.gridDetail = 'fine';
+    expect(loadDocument(JSON.stringify(v3)).settings.gridDetail).toBe('fine');
+  });
+
+  it('is refused when it has bench inputs mixed in, naming the field', () => {
+    const v3 = JSON.parse(fixture('section-v3.json'));
+    v3.variants[0].bench = { testPressurePa: 6974.4892 };
+    expect(documentErrorOf(() => loadDocument(JSON.stringify(v3))).message).toContain('variants[0].bench: is not a field');
   });
 });
 

@@ -2,6 +2,7 @@
 
 import fc from 'fast-check';
 import { formatPath } from '../../src/document/errors.ts';
+import { BENCH_BOUNDS, type BenchBound } from '../../src/document/limits.ts';
 
 export type Json = null | boolean | number | string | Json[] | { [key: string]: Json };
 export type Path = (string | number)[];
@@ -35,7 +36,10 @@ export function setAt(root: Json, path: Path, value: Json): void {
 }
 
 /** Fields the schema lets a file leave out. */
-const OPTIONAL = new Set(['filletRadius', 'wallName', 'note', 'anchor', 'parts', 'valve', 'seat', 'bore', 'port']);
+const OPTIONAL = new Set([
+  'filletRadius', 'wallName', 'note', 'anchor', 'parts', 'valve', 'seat', 'bore', 'port', 'bench', ...Object.keys(BENCH_BOUNDS),
+  'humidityModel', 'referenceArea', 'flowScale',
+]);
 
 /** `path:` as the message writes it, so "variants[1]" does not match "variants[1].name". */
 export const named = (path: Path): string => `${formatPath(path)}:`;
@@ -51,6 +55,10 @@ function outOfRange(path: Path, pick: number): Json | undefined {
   if (parentKey === 'at' || parentKey === 'through' || typeof parentKey === 'number') {
     if (typeof key === 'number' && path.length >= 2) return choose([100000.5, -100001, 1e300, -1e300]);
   }
+  if (typeof key === 'string' && parentKey === 'bench' && Object.hasOwn(BENCH_BOUNDS, key)) {
+    const bound: BenchBound = BENCH_BOUNDS[key as keyof typeof BENCH_BOUNDS];
+    return choose([bound.aboveMin ? bound.min : bound.min - 1e-6, bound.max * 1.001 + 1e-9, -1e300]);
+  }
   switch (key) {
     case 'filletRadius': return choose([-1e-9, -4, 100001]);
     case 'name': case 'wallName': case 'activeVariant': return choose(['', '   ', 'x'.repeat(81), 'two\nlines', 'tab\there']);
@@ -60,6 +68,9 @@ function outOfRange(path: Path, pick: number): Json | undefined {
     case 'role': return choose(['pipe', 'Wall', 'exit']);
     case 'kind': return choose(['spline', 'bezier', 'Line', '']);
     case 'gridDetail': return choose(['ultra', 'coarse']);
+    case 'humidityModel': return choose(['dry', 'CIPM-2007', '']);
+    case 'referenceArea': return choose(['valve', 'Curtain', 'head']);
+    case 'flowScale': return choose(['port speed', 'ideal', '']);
     case 'version': return choose([0, -2, 1.5, 99]);
     case 'format': return choose(['portwright-drawing', 'Portwright-section', '']);
     default: return undefined;

@@ -1,7 +1,16 @@
-/** Browser check of the "Air and bench" panel: typed numbers, unit switches, messages, the flow-scale button, a reload, in chromium. */
+/**
+ * Browser check of the "Air and bench" panel: typed numbers, unit switches, messages, the flow-scale button and a
+ * reload on its own page; in the app, its inputs kept per variant in the document (undo, Save and Open), in chromium.
+ */
 
+import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
+import { cfmToM3s } from '../../src/breathing/index.ts';
+import type { PortDocument } from '../../src/document/types.ts';
+import { appDocument } from './app-fillet.ts';
+import { CHECK_MS, solveCount } from './app-session.ts';
+import { appSuite } from './app-suite.ts';
 import { collectProblems, startSession, type BrowserSession } from './view-browser.ts';
 
 let session: BrowserSession;
@@ -107,27 +116,74 @@ describe('bench panel in a browser', () => {
     expect(problems).toEqual([]);
   });
 
-  it('what the porter typed and chose is still there after the page is reloaded', async () => {
+  it('the display units are still there after the page is reloaded; the numbers are not kept in the browser', async () => {
     await page.evaluate(() => (window as unknown as { harness: { remount: () => void } }).harness.remount());
     await page.selectOption('.bench-panel select[aria-label="Bore unit"]', 'inch');
-    await type('bore', '4.03');
     await page.selectOption('.bench-panel select[aria-label="Measured flow unit"]', 'L/s');
-    await type('flow', '98.5');
-    // Written once typing pauses: wait for it, then type more and reload at once (kept when the page goes away).
-    await page.waitForFunction(() => localStorage.getItem('portwright.bench')?.includes('98.5') === true);
-    await type('stroke', '3.25');
-    await page.selectOption('.bench-panel select[id$="-humidityModel"]', 'ideal-mixture');
-    await page.selectOption('.bench-panel select[id$="-flow-scale"]', 'mean port speed');
+    await type('bore', '4.03');
+    // Written once changes pause: wait for it, then switch one more and reload at once (kept when the page goes away).
+    await page.waitForFunction(() => localStorage.getItem('portwright.bench')?.includes('L/s') === true);
+    await page.selectOption('.bench-panel select[aria-label="Test pressure unit"]', 'Pa');
     await page.reload();
     await page.waitForFunction(() => (window as unknown as { harness?: { ready: boolean } }).harness?.ready === true);
-    expect(await page.inputValue('.bench-panel input[data-field="bore"]')).toBe('4.03');
-    expect(await page.inputValue('.bench-panel input[data-field="stroke"]')).toBe('3.25');
-    expect(await page.inputValue('.bench-panel input[data-field="flow"]')).toBe('98.5');
     expect(await page.inputValue('.bench-panel select[aria-label="Bore unit"]')).toBe('inch');
     expect(await page.inputValue('.bench-panel select[aria-label="Measured flow unit"]')).toBe('L/s');
-    expect(await page.inputValue('.bench-panel select[id$="-humidityModel"]')).toBe('ideal-mixture');
-    expect(await page.inputValue('.bench-panel select[id$="-flow-scale"]')).toBe('mean port speed');
-    expect(await page.inputValue('.bench-panel input[data-field="temperature"]')).toBe('20'); // untouched: the default
+    expect(await page.inputValue('.bench-panel select[aria-label="Test pressure unit"]')).toBe('Pa');
+    expect(await page.inputValue('.bench-panel input[data-field="bore"]')).toBe(''); // numbers belong to the document
+    expect(await page.inputValue('.bench-panel input[data-field="testPressure"]')).toBe('6974.49'); // 28 in H2O [derived]
+    expect(await page.evaluate(() => localStorage.getItem('portwright.bench'))).not.toMatch(/fields|4\.03/);
     expect(problems).toEqual([]);
   });
+});
+
+describe('bench inputs in the app: kept per variant in the document', () => {
+  const withApp = appSuite();
+  const field = (p: Page, key: string) => p.locator(`#bench-host input[data-field="${key}"]`);
+  const benchOf = (doc: PortDocument, name: string) => doc.variants.find((v) => v.name === name)?.bench;
+
+  /** Types `text` into a bench field and leaves it (Tab): one entered value. */
+  async function enter(p: Page, key: string, text: string): Promise<void> {
+    await field(p, key).fill(text);
+    await field(p, key).press('Tab');
+  }
+
+  it('a typed value is one undo step that solves nothing again, and each variant\'s inputs survive Save and Open', async () => {
+    await withApp(async ({ page: app, problems: appProblems }) => {
+      // The comparison sample carries bench inputs for each variant (238 and 251 CFM, an 86 mm bore).
+      expect(await field(app, 'flow').inputValue()).toBe('238');
+      expect(await field(app, 'bore').inputValue()).toBe('86');
+      const fullSolves = await solveCount(app, 'full');
+
+      await enter(app, 'bore', '90');
+      await expect.poll(async () => benchOf(await appDocument(app), 'tight short side')?.boreM).toBeCloseTo(0.09, 12);
+      expect(await app.locator('#solve-indicator').getAttribute('data-state')).toBe('idle');
+      expect(await solveCount(app, 'full'), 'a bench input changes no shape: nothing is solved again').toBe(fullSolves);
+      expect(await app.locator('#undo-button').getAttribute('title')).toMatch(/^Undo Set bench inputs/);
+      await app.click('#undo-button');
+      await expect.poll(() => field(app, 'bore').inputValue()).toBe('86');
+      expect(benchOf(await appDocument(app), 'tight short side')?.boreM).toBe(0.086);
+
+      await app.selectOption('#variant-select', 'generous short side');
+      await expect.poll(() => field(app, 'flow').inputValue()).toBe('251');
+      await enter(app, 'flow', '260');
+      await expect.poll(async () => benchOf(await appDocument(app), 'generous short side')?.measuredFlowM3PerS)
+        .toBeCloseTo(cfmToM3s(260), 12);
+
+      const [download] = await Promise.all([app.waitForEvent('download'), app.click('#save-button')]);
+      const saved = JSON.parse(readFileSync(await download.path(), 'utf8')) as PortDocument;
+      expect(saved.version).toBe(4);
+      expect(benchOf(saved, 'tight short side')?.boreM).toBe(0.086);
+      expect(benchOf(saved, 'generous short side')?.measuredFlowM3PerS).toBeCloseTo(cfmToM3s(260), 12);
+
+      // Changed after saving, then the saved file opened: the panel shows the file's inputs, variant by variant.
+      await enter(app, 'flow', '300');
+      const [chooser] = await Promise.all([app.waitForEvent('filechooser'), app.click('#open-button')]);
+      await chooser.setFiles({ name: 'bench-kept.json', mimeType: 'application/json', buffer: readFileSync(await download.path()) });
+      await expect.poll(() => field(app, 'flow').inputValue()).toBe('260');
+      await app.selectOption('#variant-select', 'tight short side');
+      await expect.poll(() => field(app, 'flow').inputValue()).toBe('238');
+      expect(await field(app, 'bore').inputValue()).toBe('86');
+      expect(appProblems).toEqual([]);
+    });
+  }, CHECK_MS);
 });
