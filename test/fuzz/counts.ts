@@ -5,7 +5,7 @@ export const LOADER_RUNS = 4000;
 /** Generated documents of the older format versions, each loaded, compared with its migrated form and saved again. */
 export const MIGRATION_RUNS = 1500;
 /** Random sequences of 1 to 20 registry edits through the app's checked store, each undone and redone whole. */
-export const EDIT_SEQUENCE_RUNS = 1500;
+export const EDIT_SEQUENCE_RUNS = 600;
 /** Random outlines and edges through the geometry kernel (flattening, areas, crossings, fillets). */
 export const GEOMETRY_RUNS = 3500;
 
