@@ -6,11 +6,11 @@ export const LOADER_RUNS = 4000;
 export const MIGRATION_RUNS = 1500;
 /** Random sequences of 1 to 20 registry edits through the app's checked store, each undone and redone whole. */
 export const EDIT_SEQUENCE_RUNS = 600;
-/** Random outlines and edges through the geometry kernel (flattening, areas, crossings, fillets). */
-export const GEOMETRY_RUNS = 3500;
+/** Random edges and outlines through the geometry kernel, by property. */
+export const GEOMETRY_RUNS = { flatten: 1200, area: 800, crossings: 1200, fillets: 800 } as const;
 
 /** All of them: issue 11 asks for 10,000 or more. */
-export const TOTAL_RUNS = LOADER_RUNS + MIGRATION_RUNS + EDIT_SEQUENCE_RUNS + GEOMETRY_RUNS;
+export const TOTAL_RUNS = LOADER_RUNS + MIGRATION_RUNS + EDIT_SEQUENCE_RUNS + Object.values(GEOMETRY_RUNS).reduce((a, b) => a + b, 0);
 
 /** One fixed seed per kind, so every run checks the same cases and a failure reproduces. */
 export const SEEDS = { loader: 20261205, migrations: 20261206, edits: 20261207, geometry: 20261208 } as const;
