@@ -6,14 +6,17 @@
 import fc from 'fast-check';
 import type { Outline, Point, PortDocument, Section, Variant } from '../../src/document/types.ts';
 import { WALL_NAMES } from '../../src/document/types.ts';
-import { activeVariant } from '../../src/editor/index.ts';
+import { activeVariant, isEditName } from '../../src/editor/index.ts';
 
-/** The registry edits the fuzz draws, each listed as often as it should be drawn. */
-const DRAWN = [
+/**
+ * The registry edits the fuzz draws, each listed as often as it should be drawn; an edit the registry does not have
+ * yet (setBench comes with format version 4) is left out until it does.
+ */
+export const DRAWN: readonly string[] = [
   'movePoint', 'movePoint', 'movePoint', 'insertVertex', 'insertVertex', 'deleteVertex', 'setFilletRadius', 'setFilletRadius',
   'setEdgeRole', 'setWallName', 'makeArc', 'makeCurve', 'makeLine', 'addVariant', 'renameVariant', 'setActiveVariant',
-  'deleteVariant', 'setUnits', 'setPart', 'setPart', 'setLift', 'setLift', 'setParts', 'removeParts',
-] as const;
+  'deleteVariant', 'setUnits', 'setPart', 'setPart', 'setLift', 'setLift', 'setParts', 'removeParts', 'setBench',
+].filter(isEditName);
 
 /** The edits a pointer drags: their steps go through the store with cause 'drag'. */
 export const DRAGGED = ['movePoint', 'setFilletRadius', 'setLift'] as const;
@@ -140,8 +143,20 @@ function resolveDocumentEdit(doc: PortDocument, intent: Intent, step: number, st
     case 'setPart': return { name: edit, args: partChange(parts as Record<string, unknown> | undefined, n, m, u) };
     case 'setParts': return { name: edit, args: { parts: pick(doc.variants, n).parts ?? (m % 2 === 0 ? {} : undefined) } };
     case 'removeParts': return { name: edit, args: {} };
+    case 'setBench': return { name: edit, args: benchChange(doc, n, m, u) };
     default: throw new Error(`no resolver for the edit "${edit}"`);
   }
+}
+
+/** The active variant's bench inputs with one number scaled by up to 20%, another variant's, or none. */
+function benchChange(doc: PortDocument, n: number, m: number, u: number): unknown {
+  const benchOf = (v: unknown): Record<string, unknown> | undefined => (v as { bench?: Record<string, unknown> }).bench;
+  const own = benchOf(activeVariant(doc));
+  if (own === undefined || m % 4 === 0) return { bench: benchOf(pick(doc.variants, n)) };
+  const numeric = Object.keys(own).filter((k) => typeof own[k] === 'number');
+  if (numeric.length === 0) return { bench: undefined };
+  const key = pick(numeric, n);
+  return { bench: { ...own, [key]: (own[key] as number) * (1 + 0.2 * u) } };
 }
 
 /** One number of one existing part scaled by up to 20% (the valve's axis moved instead, now and then). */

@@ -14,7 +14,7 @@ import type { PortDocument } from '../../src/document/types.ts';
 import { applyEdit, EDITS, EditError, isEditName } from '../../src/editor/index.ts';
 import { deepFreeze } from '../editor/fixtures.ts';
 import { EDIT_SEQUENCE_RUNS, SEEDS } from './counts.ts';
-import { DRAGGED, intentArb, resolve, type Intent } from './edit-intents.ts';
+import { DRAGGED, DRAWN, intentArb, resolve, type Intent } from './edit-intents.ts';
 
 const read = (path: string): PortDocument => deepFreeze(loadDocument(readFileSync(new URL(path, import.meta.url), 'utf8')));
 /** Starting documents: a one-variant sample, the two-variant one with parts, and an inch file with an island. */
@@ -88,6 +88,10 @@ function runSteps(store: DocumentStore, steps: readonly Step[]): PortDocument[] 
 }
 
 describe(`edit-registry fuzz: ${EDIT_SEQUENCE_RUNS} random edit sequences through the checked store`, () => {
+  it('draws every edit in the registry (a new edit needs a case in edit-intents.ts resolve)', () => {
+    expect([...new Set(DRAWN)].sort()).toEqual(Object.keys(EDITS).sort());
+  });
+
   it('commits only documents that build, and undo all / redo all walk back and forth through exactly them', () => {
     let edits = 0, committedSteps = 0;
     const cases = fc.record({ start: fc.nat({ max: STARTS.length - 1 }), steps: fc.array(stepArb, { minLength: 1, maxLength: 20 }) });
