@@ -1,11 +1,11 @@
 /** How many generated cases each kind of fuzz test runs, and its fixed seed: the README quotes these numbers. */
 
 /** Section files broken at the byte and JSON level, each loaded once. */
-export const LOADER_RUNS = 4000;
+export const LOADER_RUNS = 5000;
 /** Generated documents of the older format versions, each loaded, compared with its migrated form and saved again. */
 export const MIGRATION_RUNS = 2000;
 /** Random sequences of 1 to 20 registry edits through the app's checked store, each undone and redone whole. */
-export const EDIT_SEQUENCE_RUNS = 100;
+export const EDIT_SEQUENCE_RUNS = 800;
 /** Random edges and outlines through the geometry kernel, by property. */
 export const GEOMETRY_RUNS = { flatten: 1200, area: 800, crossings: 1200, fillets: 800 } as const;
 
