@@ -16,13 +16,10 @@ import { deepFreeze } from '../editor/fixtures.ts';
 import { EDIT_SEQUENCE_RUNS, SEEDS } from './counts.ts';
 import { DRAGGED, DRAWN, intentArb, resolve, type Intent } from './edit-intents.ts';
 
-const read = (path: string): PortDocument => deepFreeze(loadDocument(readFileSync(new URL(path, import.meta.url), 'utf8')));
-/** Starting documents: a one-variant sample, the two-variant one with parts, and an inch file with an island. */
-const STARTS = [
-  read('../../samples/street-tight-short-side.json'),
-  read('../../samples/short-side-compare.json'),
-  read('../fixtures/section-v1-as-v3.json'),
-];
+const FILES = ['../../samples/street-tight-short-side.json', '../../samples/short-side-compare.json', '../fixtures/section-v1-as-v3.json']
+  .map((path) => readFileSync(new URL(path, import.meta.url), 'utf8'));
+/** Starting documents, frozen: a one-variant sample, the two-variant one with parts, and an inch file with an island. */
+const STARTS = FILES.map((text) => deepFreeze(loadDocument(text)));
 
 /** The store as the app builds it (src/app/start-document.ts): checked by checkDocument, drags clamped by clampEdit. */
 function appStore(doc: PortDocument): DocumentStore {
@@ -32,22 +29,31 @@ function appStore(doc: PortDocument): DocumentStore {
   });
 }
 
-/** One step of a sequence: a plain edit, or a drag of 2..5 steps let go or cancelled. */
-interface Step {
-  readonly intent: Intent;
-  readonly drag: null | { readonly steps: number; readonly cancel: boolean };
-}
+/** One step of a sequence: a plain edit, a drag of 2..5 steps let go or cancelled, or an undo or a redo. */
+type EditStep =
+  | { readonly kind: 'edit'; readonly intent: Intent }
+  | { readonly kind: 'drag'; readonly intent: Intent; readonly steps: number; readonly cancel: boolean };
+type Step = EditStep | { readonly kind: 'undo' | 'redo' };
 
 const stepArb: fc.Arbitrary<Step> = fc.oneof(
-  { weight: 4, arbitrary: fc.record({ intent: intentArb(), drag: fc.constant(null) }) },
+  { weight: 8, arbitrary: fc.record({ kind: fc.constant('edit' as const), intent: intentArb() }) },
   {
-    weight: 1,
+    weight: 2,
     arbitrary: fc.record({
-      intent: intentArb(DRAGGED),
-      drag: fc.record({ steps: fc.integer({ min: 2, max: 5 }), cancel: fc.boolean() }),
+      kind: fc.constant('drag' as const), intent: intentArb(DRAGGED), steps: fc.integer({ min: 2, max: 5 }), cancel: fc.boolean(),
     }),
   },
+  { weight: 1, arbitrary: fc.record({ kind: fc.constantFrom('undo' as const, 'redo' as const) }) },
 );
+
+/**
+ * What the history must hold: every committed document in order (the start first) and which one is shown. A new
+ * commit drops the documents after the shown one (they can no longer be redone).
+ */
+interface Timeline {
+  docs: PortDocument[];
+  at: number;
+}
 
 /** Applies one edit through the store; a refusal must be a typed error of ours and leave the document alone. */
 function tryEdit(store: DocumentStore, name: string, args: unknown, cause: 'edit' | 'drag'): void {
@@ -61,30 +67,42 @@ function tryEdit(store: DocumentStore, name: string, args: unknown, cause: 'edit
   }
 }
 
-/** Runs the steps; returns the committed documents in order, the start first (each one undo step from the last). */
-function runSteps(store: DocumentStore, steps: readonly Step[]): PortDocument[] {
-  const committed = [store.doc];
-  for (const { intent, drag } of steps) {
-    const before = store.doc;
-    if (drag === null) {
-      const call = resolve(store.doc, intent);
-      tryEdit(store, call.name, call.args, 'edit');
-    } else {
-      for (let k = 1; k <= drag.steps; k++) {
-        const call = resolve(before, intent, k, drag.steps);
-        tryEdit(store, call.name, call.args, 'drag');
-      }
-      if (drag.cancel) store.cancelDrag();
-      else store.endDrag();
-      if (drag.cancel) expect(store.doc).toBe(before);
+/** Runs one edit or drag; returns whether it committed a document. */
+function runEdit(store: DocumentStore, step: EditStep): boolean {
+  const before = store.doc;
+  if (step.kind === 'edit') {
+    const call = resolve(store.doc, step.intent);
+    tryEdit(store, call.name, call.args, 'edit');
+  } else {
+    for (let k = 1; k <= step.steps; k++) {
+      const call = resolve(before, step.intent, k, step.steps);
+      tryEdit(store, call.name, call.args, 'drag');
     }
-    if (store.doc !== before) {
-      // Every committed document builds (each variant, as `portwright check` builds it) and saves.
+    if (step.cancel) store.cancelDrag();
+    else store.endDrag();
+    if (step.cancel) expect(store.doc).toBe(before);
+  }
+  return store.doc !== before;
+}
+
+/** Runs the steps, checking each undo and redo against the timeline; returns the timeline at the end. */
+function runSteps(store: DocumentStore, steps: readonly Step[]): Timeline {
+  const line: Timeline = { docs: [store.doc], at: 0 };
+  for (const step of steps) {
+    if (!('intent' in step)) {
+      const target = line.at + (step.kind === 'undo' ? -1 : 1);
+      const label = step.kind === 'undo' ? store.undo() : store.redo();
+      expect(label === null).toBe(target < 0 || target >= line.docs.length);
+      if (label !== null) line.at = target;
+      expect(store.doc).toBe(line.docs[line.at]);
+    } else if (runEdit(store, step)) {
+      // Every committed document builds (each variant, as `portwright check` builds it).
       checkDocument(store.doc);
-      committed.push(store.doc);
+      line.docs = [...line.docs.slice(0, line.at + 1), store.doc];
+      line.at++;
     }
   }
-  return committed;
+  return line;
 }
 
 describe(`edit-registry fuzz: ${EDIT_SEQUENCE_RUNS} random edit sequences through the checked store`, () => {
@@ -92,32 +110,30 @@ describe(`edit-registry fuzz: ${EDIT_SEQUENCE_RUNS} random edit sequences throug
     expect([...new Set(DRAWN)].sort()).toEqual(Object.keys(EDITS).sort());
   });
 
-  it('commits only documents that build, and undo all / redo all walk back and forth through exactly them', () => {
+  it('commits only documents that build; undo and redo, mid-sequence and all the way, walk through exactly them', () => {
     let edits = 0, committedSteps = 0;
     const cases = fc.record({ start: fc.nat({ max: STARTS.length - 1 }), steps: fc.array(stepArb, { minLength: 1, maxLength: 20 }) });
     fc.assert(fc.property(cases, ({ start, steps }) => {
       const store = appStore(STARTS[start]);
-      const committed = runSteps(store, steps);
+      const line = runSteps(store, steps);
       edits += steps.length;
-      committedSteps += committed.length - 1;
-      const end = store.doc;
-      expect(loadDocument(saveDocument(end))).toStrictEqual(end);
-      for (let k = committed.length - 1; k > 0; k--) {
+      committedSteps += line.docs.length - 1;
+      expect(loadDocument(saveDocument(store.doc))).toStrictEqual(store.doc);
+      for (let k = line.at; k > 0; k--) {
         expect(store.undo()).not.toBeNull();
-        expect(store.doc).toBe(committed[k - 1]);
+        expect(store.doc).toBe(line.docs[k - 1]);
       }
       expect(store.undo()).toBeNull();
       expect(store.doc).toBe(STARTS[start]);
-      for (let k = 1; k < committed.length; k++) {
+      for (let k = 1; k < line.docs.length; k++) {
         expect(store.redo()).not.toBeNull();
-        expect(store.doc).toBe(committed[k]);
+        expect(store.doc).toBe(line.docs[k]);
       }
       expect(store.redo()).toBeNull();
-      expect(store.doc).toBe(end);
     }), { seed: SEEDS.edits, numRuns: EDIT_SEQUENCE_RUNS });
-    // The starting documents are frozen and deep-equal to their files: no edit changed them in place.
-    STARTS.forEach((doc, k) => expect(saveDocument(doc)).toBe(saveDocument(loadDocument(saveDocument(STARTS[k])))));
+    // The starting documents (frozen, so an edit in place would have thrown) are still those of their files.
+    STARTS.forEach((doc, k) => expect(doc).toStrictEqual(loadDocument(FILES[k])));
     expect(committedSteps).toBeGreaterThan(edits / 4);
-    console.info(`edit-registry fuzz: ${EDIT_SEQUENCE_RUNS} sequences, ${edits} edits and drags, ${committedSteps} committed`);
+    console.info(`edit-registry fuzz: ${EDIT_SEQUENCE_RUNS} sequences, ${edits} steps (edits, drags, undos, redos), ${committedSteps} committed`);
   });
 });
