@@ -4,7 +4,7 @@
 export const LOADER_RUNS = 5000;
 /** Generated documents of the older format versions, each loaded, compared with its migrated form and saved again. */
 export const MIGRATION_RUNS = 2000;
-/** Random sequences of 1 to 20 registry edits through the app's checked store, each undone and redone whole. */
+/** Random sequences of 1 to 20 steps (edits, drags, undos, redos, opened files) through the app's checked store. */
 export const EDIT_SEQUENCE_RUNS = 800;
 /** Random edges and outlines through the geometry kernel, by property. */
 export const GEOMETRY_RUNS = { flatten: 1200, area: 800, crossings: 1200, fillets: 800 } as const;
