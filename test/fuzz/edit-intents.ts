@@ -177,9 +177,9 @@ function partChange(parts: Record<string, unknown> | undefined, n: number, m: nu
 /**
  * `vertex`, or the next corner that is not an anchor when the variant has no seat and bore to hold the anchors.
  * Known fault, left to the editor's owner: with no parts, deleting one anchor corner commits a document with one
- * anchor, which the store's check accepts but the file format refuses (Save and autosave then fail). Without this
- * skip the sequence fuzz stops on it (seed 20261207, case 698 of 800: removeParts, then deleteVertex of corner 6 of the
- * street sample).
+ * anchor, which the store's check accepts but the file format refuses (Save and autosave then fail). Reproduce: on
+ * samples/street-tight-short-side.json, removeParts {}, then deleteVertex { vertex: 5 } (an anchor), then Save. The
+ * fuzz found it at case 698 of seed 20261207 with an earlier mix of steps.
  */
 function skipLoneAnchor(variant: Variant, outline: Outline, vertex: number): number {
   if (variant.parts?.seat && variant.parts.bore) return vertex;
