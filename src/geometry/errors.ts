@@ -83,6 +83,8 @@ function formatNumber(value: number, round: 'nearest' | 'down', digits = 3): str
   if (!Number.isFinite(value)) return String(value);
   if (value === 0) return '0';
   const scale = 10 ** (digits - 1 - Math.floor(Math.log10(Math.abs(value))));
+  // Below about 1e-305 the scale overflows to Infinity (and the figure would read NaN): round by the digits alone.
+  if (!Number.isFinite(scale)) return String(Number(value.toPrecision(digits)));
   // Rounding down keeps an "at most" figure honest: the stated radius really fits.
   // (1e-9 slack so 9.999999999999998, a rounding of 10, still shows as 10.)
   const rounded = round === 'down' ? Math.floor(value * scale * (1 + 1e-9)) / scale : Math.round(value * scale) / scale;

@@ -43,10 +43,12 @@ export function solvePathFillet(inPath: EdgePath, outPath: EdgePath, radius: num
   const side = dIn[0] * dOut[1] - dIn[1] * dOut[0] > 0 ? 1 : -1;
   let tIn = guessIn, tOut = guessOut;
   const h = 1e-6, close = 1e-12 * radius;
+  let best = { tIn, tOut, miss: Infinity };
   for (let iter = 0; iter < 40; iter++) {
     const a = centreFrom(inPath, tIn, radius, side), b = centreFrom(outPath, tOut, radius, side);
-    const fx = a[0] - b[0], fy = a[1] - b[1];
-    if (Math.hypot(fx, fy) <= close) return within(tIn, tOut) ? fillet(inPath, outPath, tIn, tOut, radius, side) : null;
+    const fx = a[0] - b[0], fy = a[1] - b[1], miss = Math.hypot(fx, fy);
+    if (miss <= close) return within(tIn, tOut) ? fillet(inPath, outPath, tIn, tOut, radius, side) : null;
+    if (miss < best.miss) best = { tIn, tOut, miss };
     // Central-difference Jacobian: columns d(centreIn)/dtIn and -d(centreOut)/dtOut.
     const aP = centreFrom(inPath, tIn + h, radius, side), aM = centreFrom(inPath, tIn - h, radius, side);
     const bP = centreFrom(outPath, tOut + h, radius, side), bM = centreFrom(outPath, tOut - h, radius, side);
@@ -59,7 +61,10 @@ export function solvePathFillet(inPath: EdgePath, outPath: EdgePath, radius: num
     tIn -= stepIn;
     tOut -= stepOut;
   }
-  return null;
+  // Rounding can hold the centres a few ulps of the coordinates apart for good (a small fillet far from the origin, or
+  // beside a flat arc whose centre is far away): the closest pair is the fillet when it misses by under 1e-6 radius.
+  const found = best.miss <= 1e-6 * radius && within(best.tIn, best.tOut);
+  return found ? fillet(inPath, outPath, best.tIn, best.tOut, radius, side) : null;
 }
 
 function clampStep(step: number): number {

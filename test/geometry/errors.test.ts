@@ -26,6 +26,11 @@ describe('message wording', () => {
     expect(formatLength(9.999999999999998, 'mm', 'down')).toBe('10 mm');
   });
 
+  it('numbers too small for a decimal scale (found by the geometry fuzz) still read as numbers, not NaN', () => {
+    expect(formatPoint([5e-324, -1], 'mm')).toBe('(5e-324, -1) mm');
+    expect(formatLength(1.2345e-310, 'mm', 'down')).toBe('1.23e-310 mm');
+  });
+
   it('points and outline labels', () => {
     expect(formatPoint([2, 1], 'mm')).toBe('(2, 1) mm');
     expect(formatPoint([12.34567, -0.5])).toBe('(12.35, -0.5) units');

@@ -198,4 +198,16 @@ describe('fillets beside curves', () => {
     expect(() => sectionToDomain(section(outline(largest)), 0.001)).not.toThrow();
     expect(() => sectionToDomain(section(outline(largest * 1.01)), 0.001)).toThrow(GeometryError);
   });
+
+  it('a small fillet beside an arc far from the origin is found (found by the geometry fuzz: it was called too large)', () => {
+    // Corner about 600 units out: the centres cannot agree to 1e-12 of a 0.001 radius in doubles, only to their rounding.
+    const inPath = edgePath([-500, -500], { kind: 'line', role: 'wall' }, [-433.4873743355274, 420.1076030731201], { edgeIndex: 0 });
+    const outPath = edgePath([-433.4873743355274, 420.1076030731201], { kind: 'arc', role: 'wall', through: [-486.27671550089883, 397.6389064228763] }, [-500, 341.93227905780077], { edgeIndex: 1 });
+    for (const radius of [0.001, 0.02, 0.0448]) {
+      const f = solvePathFillet(inPath, outPath, radius, 0.99, 0.01);
+      expect(f, `radius ${radius}`).not.toBeNull();
+      const t = outPath.point(f!.tOut);
+      assertInDelta(Math.hypot(f!.centre[0] - t[0], f!.centre[1] - t[1]), radius, 1e-9);
+    }
+  });
 });
