@@ -105,7 +105,7 @@ describe('other edits on a variant with parts', () => {
   });
 
   it('deleting an anchor is refused, saying why', () => {
-    expect(() => applyEdit(sample(), 'deleteVertex', { vertex: anchorIndex(sample()) })).toThrow(/two anchor corners.*has 1/);
+    expect(() => applyEdit(sample(), 'deleteVertex', { vertex: anchorIndex(sample()) })).toThrow(/This corner is an anchor, where the seat and test bore join the port; it cannot be deleted/);
   });
 
   it('edits that leave sections alone do not regenerate them', () => {

@@ -107,7 +107,7 @@ export function resolve(doc: PortDocument, intent: Intent, step = 1, steps = 1):
       return { name: edit, args: { point: ref, to: [at[0] + u * scale, at[1] + v * scale] } };
     }
     case 'insertVertex': return { name: edit, args: { edge, ...own, at: offChord(outline, edge, w, 0.05 * u) } };
-    case 'deleteVertex': return { name: edit, args: { vertex: skipLoneAnchor(variant, outline, vertex), ...own } };
+    case 'deleteVertex': return { name: edit, args: { vertex, ...own } };
     case 'setFilletRadius': {
       const radius = m % 10 === 0 ? 0 : w * w * size(outline) * 0.3 * (step / steps);
       return { name: edit, args: { vertex, ...own, radius } };
@@ -174,16 +174,3 @@ function partChange(parts: Record<string, unknown> | undefined, n: number, m: nu
   return { part, values: { [key]: (values[key] as number) * (1 + 0.2 * u) } };
 }
 
-/**
- * `vertex`, or the next corner that is not an anchor when the variant has no seat and bore to hold the anchors.
- * Known fault, left to the editor's owner: with no parts, deleting one anchor corner commits a document with one
- * anchor, which the store's check accepts but the file format refuses (Save and autosave then fail). Reproduce: on
- * samples/street-tight-short-side.json, removeParts {}, then deleteVertex { vertex: 5 } (an anchor), then Save. The
- * fuzz found it at case 698 of seed 20261207 with an earlier mix of steps.
- */
-function skipLoneAnchor(variant: Variant, outline: Outline, vertex: number): number {
-  if (variant.parts?.seat && variant.parts.bore) return vertex;
-  let k = vertex;
-  for (let tries = 0; outline.vertices[k].anchor && tries < outline.vertices.length; tries++) k = (k + 1) % outline.vertices.length;
-  return k;
-}
