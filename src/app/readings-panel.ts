@@ -4,7 +4,6 @@ import type { Units } from '../document/types.ts';
 import type { Finding } from '../solver/reading/index.ts';
 import type { FieldReply } from '../workers/protocol.ts';
 import { heading, readingTable, type ReadingRow } from './panel-table.ts';
-import { endSentence } from './status.ts';
 
 export interface ReadingsHooks {
   /** A finding was clicked: zoom the view to its place. */
@@ -51,7 +50,7 @@ export class ReadingsPanel {
       const item = document.createElement('li');
       const button = document.createElement('button');
       button.type = 'button';
-      button.textContent = endSentence(finding.text);
+      button.textContent = finding.text;
       button.title = 'Show this place';
       button.addEventListener('click', () => this.hooks.onFinding(finding));
       item.append(button);

@@ -179,6 +179,8 @@ describe('bench inputs in the app: kept per variant in the document', () => {
       await enter(app, 'flow', '300');
       const [chooser] = await Promise.all([app.waitForEvent('filechooser'), app.click('#open-button')]);
       await chooser.setFiles({ name: 'bench-kept.json', mimeType: 'application/json', buffer: readFileSync(await download.path()) });
+      // The change after saving is not in a file, so opening asks first.
+      await app.click('#replace-confirm');
       await expect.poll(() => field(app, 'flow').inputValue()).toBe('260');
       await app.selectOption('#variant-select', 'tight short side');
       await expect.poll(() => field(app, 'flow').inputValue()).toBe('238');

@@ -32,7 +32,8 @@ export function findings(reading: Omit<FlowReading, 'findings'>, settings: Readi
       radius: 6 * h,
     });
   }
-  return out.sort((a, b) => b.score - a.score);
+  // Each finding is told as a whole sentence, the same in the app, the command's text and its JSON.
+  return out.sort((a, b) => b.score - a.score).map((f) => (f.text.endsWith('.') ? f : { ...f, text: `${f.text}.` }));
 }
 
 type PartReading = Omit<FlowReading, 'findings'>;

@@ -40,12 +40,12 @@ describe('readFlow, straight channel', () => {
     for (const d of reading.detachments) expect(d.detachment).toBeNull();
     expect(reading.findings.map((f) => f.kind)).not.toContain('detachment');
     const tight = reading.findings.find((f) => f.kind === 'tightest');
-    expect(tight?.text).toMatch(/^Tightest section: 1\.0 mm wide, \d+\.\d mm from the manifold face$/);
+    expect(tight?.text).toMatch(/^Tightest section: 1\.0 mm wide, \d+\.\d mm from the manifold face\.$/);
   });
 
   it('words the same reading in inches when the document is in inches', () => {
     const inches = readFlow(domain, exactResult(domain, 10_000, channelFlow(4, 1)), { units: 'inch', streamlineCount: 0 });
-    expect(inches.findings.find((f) => f.kind === 'tightest')?.text).toMatch(/^Tightest section: 1\.00 in wide, \d\.\d{2,3} in from the manifold face$/);
+    expect(inches.findings.find((f) => f.kind === 'tightest')?.text).toMatch(/^Tightest section: 1\.00 in wide, \d\.\d{2,3} in from the manifold face\.$/);
   });
 });
 

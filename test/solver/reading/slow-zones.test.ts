@@ -24,7 +24,7 @@ describe('slow zones', () => {
     expect(Math.hypot(patch.x, patch.y)).toBeGreaterThan(r0);
     assertInDelta(patch.area, share * (3 * Math.PI) / 4, 0.01);
     const finding = reading.findings.find((f) => f.kind === 'slow');
-    expect(finding?.text).toBe('48% of the section moves below 90% of its local mean speed');
+    expect(finding?.text).toBe('48% of the section moves below 90% of its local mean speed.');
   });
 
   it('takes each cell\'s station mean from its potential, linear between stations and held beyond them', () => {

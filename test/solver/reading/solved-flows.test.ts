@@ -72,7 +72,7 @@ describe('street-port samples: tight against generous short side', () => {
 
   it('tells the short-side detachment as a finding, and summarises to plain JSON', () => {
     const told = tight.findings.find((f) => f.kind === 'detachment' && f.text.startsWith('Short side:'));
-    expect(told?.text).toMatch(/^Short side: flow likely leaves the wall \d+\.\d mm past the speed peak.*; speed ratio falls from \d\.\d\d to \d\.\d\d$/);
+    expect(told?.text).toMatch(/^Short side: flow likely leaves the wall \d+\.\d mm past the speed peak.*; speed ratio falls from \d\.\d\d to \d\.\d\d\.$/);
     for (let k = 1; k < tight.findings.length; k++) expect(tight.findings[k].score).toBeLessThanOrEqual(tight.findings[k - 1].score);
     for (const f of tight.findings) expect(f.radius).toBeGreaterThan(0);
     // the deck and the test bore are read but not told
