@@ -2,21 +2,21 @@
 import './app/zod-jitless.ts'; // first: zod must be jitless before any schema is built (the CSP refuses eval)
 import sampleText from '../samples/short-side-compare.json?raw';
 import { acceptDrops, downloadDocument, pickFile, type FileHandlers } from './app/files.ts';
-import { openKeptStorage } from './app/kept-storage.ts';
-import { mountWorkKeeping } from './app/work-keeping.ts';
+import { openKeptStorage } from './app/keeping/storage.ts';
+import { mountWorkKeeping } from './app/keeping/work-keeping.ts';
 import type { ChangeCause } from './app/document-store.ts';
 import { plainMessage } from './app/document-check.ts';
 import { mountHistoryControls } from './app/history-controls.ts';
 import { Overlays } from './app/overlays.ts';
-import { readLegacyWork, startStore } from './app/start-document.ts';
+import { readLegacyWork, startStore } from './app/keeping/start-document.ts';
 import { wireVariantButtons } from './app/variant-buttons.ts';
 import { EditorController } from './app/editor-controller.ts';
 import { FlowPicture } from './app/flow-picture.ts';
 import { caseSetup, CELLS_BY_DETAIL, DRAG_CELLS, type CaseSetup } from './study/index.ts';
 import { fillHelp } from './app/help-overlay.ts';
 import { LiveSolve } from './app/live-solve.ts';
-import { mountBenchPanel } from './app/bench-panel.ts';
-import { adoptKeptBench } from './app/bench-adopt.ts';
+import { mountBenchPanel } from './app/bench-panel/panel.ts';
+import { adoptKeptBench } from './app/bench-panel/adopt.ts';
 import { showPartsNumbers } from './app/breathing-panel.ts';
 import { PartsPanel } from './app/parts-panel.ts';
 import { PlotsPanel } from './app/plots-panel.ts';

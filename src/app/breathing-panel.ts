@@ -3,7 +3,7 @@ import { areaLabel, lengthLabel } from '../breathing/units.ts';
 import type { PortDocument, Units } from '../document/types.ts';
 import { activeVariant } from '../editor/index.ts';
 import { metresPerUnit, partsBreathing, partsNotes, type PartsBreathing } from '../parts/index.ts';
-import type { mountBenchPanel } from './bench-panel.ts';
+import type { mountBenchPanel } from './bench-panel/panel.ts';
 import { heading, readingTable, type ReadingRow } from './panel-table.ts';
 import { endSentence } from './status.ts';
 

@@ -25,7 +25,7 @@ const STARTS = FILES.map((text) => deepFreeze(loadDocument(text)));
 /** Files the sequences open: each time a fresh document, as reading the file again gives. */
 const OPENED = FILES.map((text) => () => loadDocument(text));
 
-/** The store as the app builds it (src/app/start-document.ts): checked by checkDocument, drags clamped by clampEdit. */
+/** The store as the app builds it (src/app/keeping/start-document.ts): checked by checkDocument, drags clamped by clampEdit. */
 function appStore(doc: PortDocument): DocumentStore {
   return new DocumentStore(doc, applyEdit, {
     guard: { check: checkDocument, clamp: clampEdit },

@@ -1,7 +1,7 @@
 /** Dev-only page for the bench panel's browser check: the panel in a side bar as wide as the app's, with areas of an invented head. */
 
-import { mountBenchPanel, type BenchPanel } from '../../../src/app/bench-panel.ts';
-import { BENCH_STORAGE_KEY } from '../../../src/app/bench-panel-store.ts';
+import { mountBenchPanel, type BenchPanel } from '../../../src/app/bench-panel/panel.ts';
+import { BENCH_STORAGE_KEY } from '../../../src/app/bench-panel/store.ts';
 
 /** An invented 46 mm valve at 10 mm lift on a 91 % throat: areas in m² as the app would send them. */
 export const DEMO_AREAS_M2 = {
