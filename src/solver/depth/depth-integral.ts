@@ -2,7 +2,7 @@
 import { axisNormal, depthFunction } from './depth-model.ts';
 import { FlowSetupError } from '../errors.ts';
 import { markedLength } from '../rasterise/checks.ts';
-import { MARK_INLET, type DepthModel, type FlowDomain } from '../types.ts';
+import { MARK_INLET, MARK_OUTLET, type DepthModel, type FlowDomain } from '../types.ts';
 
 /**
  * The integral of b along the segment (ax, ay) -> (bx, by), length units squared (length times depth).
@@ -67,6 +67,19 @@ export function linesDepthIntegral(model: DepthModel, lines: readonly Float64Arr
   let sum = 0;
   for (const xy of lines) for (let k = 0; k + 3 < xy.length; k += 2) sum += segmentDepthIntegral(model, xy[k], xy[k + 1], xy[k + 2], xy[k + 3]);
   return sum;
+}
+
+/**
+ * With a depth, the inlet and the outlet must each have an area; one that lies on the axis of a round section has
+ * none (b = 0 there) and carries no flow. Throws FlowSetupError naming which.
+ */
+export function checkEndAreas(domain: FlowDomain): void {
+  if (domain.depth === undefined) return;
+  for (const [mark, name] of [[MARK_INLET, 'inlet'], [MARK_OUTLET, 'outlet']] as const) {
+    if (!(markedDepthIntegral(domain, domain.depth, mark) > 0)) {
+      throw new FlowSetupError('depth', `The ${name} has no area: it lies where the passage has no width (on the axis of a round section).`);
+    }
+  }
 }
 
 /**

@@ -9,6 +9,7 @@ import { thinWallsOf } from './thin-wall-report.ts';
 import type { FlowDomain, RasterGrid } from '../types.ts';
 import { checkDepth, depthFunction } from '../depth/depth-model.ts';
 import { faceConductances, gridDepth } from '../depth/face-conductance.ts';
+import { checkEndAreas } from '../depth/depth-integral.ts';
 
 /**
  * Lays a square grid over the domain and measures it exactly.
@@ -34,6 +35,7 @@ import { faceConductances, gridDepth } from '../depth/face-conductance.ts';
 export function rasterise(domain: FlowDomain, targetCells: number): RasterGrid {
   checkDomain(domain, targetCells);
   checkDepth(domain);
+  checkEndAreas(domain);
   const box = bounds(domain);
   const frame = gridFrame(box, targetCells);
   checkInletSpan(domain, frame.h);

@@ -5,6 +5,9 @@ import { checkDepth, depthFunction } from '../../../src/solver/depth/depth-model
 import { inletSize, segmentDepthIntegral } from '../../../src/solver/depth/depth-integral.ts';
 import { FlowSetupError } from '../../../src/solver/errors.ts';
 import type { SampledDepth } from '../../../src/solver/types.ts';
+import { solveFlow } from '../../../src/solver/solve.ts';
+import { MARK_INLET, MARK_OUTLET, MARK_WALL } from '../../../src/solver/types.ts';
+import { domainOf, ringOf, type Pt } from '../rasterise/shapes.ts';
 import { channelWithDepth, roundPipe, X_AXIS } from './depth-shapes.ts';
 
 const LATTICE: SampledDepth = { kind: 'sampled', x0: 1, y0: 2, dx: 2, dy: 1, nx: 3, ny: 2, values: Float64Array.of(1, 2, 4, 3, 5, 9) };
@@ -56,6 +59,16 @@ describe('depth integrals', () => {
     expect(inletSize(roundPipe(4, 1.5))).toBeCloseTo(Math.PI * 1.5 * 1.5, 12);
     expect(segmentDepthIntegral(X_AXIS, 0, -1, 0, 2)).toBeCloseTo(2 * Math.PI * (0.5 + 2), 12); // both sides of the axis
     expect(inletSize(channelWithDepth(4, 1, undefined))).toBe(1);
+  });
+
+  it('refuses, through the solve, an inlet that lies on the axis (no area) and a width of zero', () => {
+    const pts: Pt[] = [[0, 0], [4, 0], [4, 1], [0, 1]];
+    const onAxis = { ...domainOf(ringOf(pts, [MARK_INLET, MARK_OUTLET, MARK_WALL, MARK_WALL])), depth: X_AXIS };
+    const error = catchError(() => solveFlow(onAxis, { targetCells: 4096 })) as FlowSetupError;
+    expect(error.code).toBe('depth');
+    expect(error.message).toMatch(/^The inlet has no area: [^.]+\.$/);
+    const zero = { kind: 'sampled', x0: 0, y0: 0, dx: 4, dy: 1, nx: 2, ny: 1, values: Float64Array.of(1, -1) } as const;
+    expect(() => solveFlow(channelWithDepth(4, 1, zero), { targetCells: 4096 })).toThrow(FlowSetupError);
   });
 
   it('integrates the sampled depth exactly: against fine midpoint sums on random segments (fast-check, seed 12)', () => {
