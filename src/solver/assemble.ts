@@ -14,8 +14,9 @@ export const TINY = 1e-300;
  *   (A x)_k = diag_k x_k - sum over the four faces f of cell k of coef_f x_(cell across f),
  *   diag_k = sum of the four face coefficients + Dirichlet coupling of k (from the sparse list).
  * Face coefficients are conductances (open face length / centre distance, dimensionless in 2D, times the depth
- * when there is one); on the finest level that is the face's open fraction (CutGrid.conductanceX/Y with a depth). Excluded cells have no open face and no coupling, so
- * their rows are zero and every vector the solver makes stays 0 there.
+ * when there is one); on the finest level that is the face's open fraction (CutGrid.conductanceX/Y with a
+ * depth). Excluded cells have no open face and no coupling, so their rows are zero and every vector the solver
+ * makes stays 0 there.
  */
 export interface Stencil {
   readonly nx: number;
@@ -134,10 +135,10 @@ export function writeRhs(grid: CutGrid, mask: Uint8Array, b: Float64Array): numb
   return Math.sqrt(sum);
 }
 
-/** True when the grid edge faces are closed and no open face joins an active cell to an excluded one. */
 /** A grid's faces: its open fractions, or its conductances when it has a depth. */
 type Faces = Pick<CutGrid, 'nx' | 'ny' | 'openX' | 'openY'>;
 
+/** True when the grid edge faces are closed and no open face joins an active cell to an excluded one. */
 function facesSealed(grid: Faces, mask: Uint8Array): boolean {
   const { nx, ny, openX, openY } = grid;
   for (let j = 0; j < ny; j++) {
