@@ -4,7 +4,9 @@
  * process, as in the app), one for the peak memory of a single solve. Times are medians of wall-clock time
  * (other work on the machine shows up in them; CPU time is printed beside them). "runtime MB" is the resident
  * set before the solve (Node, the TypeScript loader, compiled code), included in "peak MB".
- * Environment: BENCH_SIZES=65536,262144 to pick sizes; BENCH_SOR=0 to skip the SOR baseline.
+ * Then one line compares the solve with and without a passage depth at 1M cells (bench/depth-compare.ts).
+ * Environment: BENCH_SIZES=65536,262144 to pick sizes; BENCH_SOR=0 to skip the SOR baseline; BENCH_DEPTH=0 to skip
+ * the depth line.
  */
 import { spawnSync } from 'node:child_process';
 import { loadavg } from 'node:os';
@@ -12,14 +14,21 @@ import { fileURLToPath } from 'node:url';
 import { SAMPLE } from './bench-problem.ts';
 import { runSize, type MemoryReport, type SizeArgs, type SizeReport, type TimeReport } from './bench-size.ts';
 import { SOR_FACTOR_METHOD } from './sor.ts';
+import { compareDepth, describeDepth, type DepthReport } from './depth-compare.ts';
 
 const SIZES = [65_536, 262_144, 1_048_576, 4_194_304];
 /** Runs per size: more where a run is short, so that a burst of other work on the machine moves the median less. */
 const RUNS = (cells: number) => (cells > 2_000_000 ? 3 : cells > 300_000 ? 5 : 11);
 
+/** Cells and runs of the depth line. */
+const DEPTH_CELLS = 1_048_576;
+const DEPTH_RUNS = 5;
+
 if (process.argv[2] === '--child') {
   const args = JSON.parse(process.argv[3]) as SizeArgs;
   console.log(JSON.stringify(runSize(args)));
+} else if (process.argv[2] === '--depth-child') {
+  console.log(JSON.stringify(compareDepth(DEPTH_CELLS, DEPTH_RUNS)));
 } else {
   main();
 }
@@ -37,15 +46,19 @@ function main(): void {
     reports.push(report);
     console.log(describe(report));
   }
-  console.log(`\n${table(reports)}\nload average at the end ${loadavg().map((l) => l.toFixed(1)).join(' ')}`);
+  console.log(`\n${table(reports)}`);
+  if (process.env.BENCH_DEPTH !== '0') console.log(describeDepth(inChild(null) as DepthReport));
+  console.log(`load average at the end ${loadavg().map((l) => l.toFixed(1)).join(' ')}`);
 }
 
-function inChild(args: SizeArgs): TimeReport | MemoryReport {
+/** Runs one size (or, for null, the depth comparison) in a fresh process and returns its report. */
+function inChild(args: SizeArgs | null): TimeReport | MemoryReport | DepthReport {
   const script = fileURLToPath(import.meta.url);
-  const out = spawnSync(process.execPath, [...process.execArgv, script, '--child', JSON.stringify(args)], { encoding: 'utf8', maxBuffer: 1 << 24 });
-  if (out.status !== 0) throw new Error(`benchmark child for ${args.cells} cells failed:\n${out.stderr}`);
+  const argv = args === null ? ['--depth-child'] : ['--child', JSON.stringify(args)];
+  const out = spawnSync(process.execPath, [...process.execArgv, script, ...argv], { encoding: 'utf8', maxBuffer: 1 << 24 });
+  if (out.status !== 0) throw new Error(`benchmark child for ${args === null ? 'the depth line' : `${args.cells} cells`} failed:\n${out.stderr}`);
   const lines = out.stdout.trim().split('\n');
-  return JSON.parse(lines[lines.length - 1]) as TimeReport | MemoryReport;
+  return JSON.parse(lines[lines.length - 1]) as TimeReport | MemoryReport | DepthReport;
 }
 
 function describe(r: SizeReport): string {

@@ -1,4 +1,4 @@
-/** Finite-volume assembly of div(grad phi) = 0 on a cut-cell grid as a symmetric 5-point stencil. */
+/** Finite-volume assembly of div(b grad phi) = 0 (b the passage depth, 1 without one) on a cut-cell grid as a symmetric 5-point stencil. */
 import { dirichletList, type DirichletList } from './assemble-dirichlet.ts';
 import type { CutGrid } from './types.ts';
 
@@ -13,9 +13,10 @@ export const TINY = 1e-300;
  * One grid level's 5-point operator, symmetric positive definite on the active cells:
  *   (A x)_k = diag_k x_k - sum over the four faces f of cell k of coef_f x_(cell across f),
  *   diag_k = sum of the four face coefficients + Dirichlet coupling of k (from the sparse list).
- * Face coefficients are conductances (open face length / centre distance, dimensionless in 2D); on the
- * finest level that is the face's open fraction. Excluded cells have no open face and no coupling, so
- * their rows are zero and every vector the solver makes stays 0 there.
+ * Face coefficients are conductances (open face length / centre distance, dimensionless in 2D, times the depth
+ * when there is one); on the finest level that is the face's open fraction (CutGrid.conductanceX/Y with a
+ * depth). Excluded cells have no open face and no coupling, so their rows are zero and every vector the solver
+ * makes stays 0 there.
  */
 export interface Stencil {
   readonly nx: number;
@@ -35,6 +36,12 @@ export interface Stencil {
    */
   readonly rowStart: Int32Array;
   readonly rowEnd: Int32Array;
+  /**
+   * With a passage depth: the open-length-weighted mean depth of the finest level's open faces (length units).
+   * Multigrid interpolation strengths are measured against a whole face of this depth, so the preconditioner does
+   * not change with the depth's units. Absent: unit depth.
+   */
+  readonly depthScale?: number;
 }
 
 /** Row spans of the active cells (see Stencil.rowStart). */
@@ -62,9 +69,10 @@ export function rowSpans(active: Uint8Array, nx: number, ny: number): { rowStart
 export function assemble(grid: CutGrid, mask: Uint8Array): Stencil {
   const { nx, ny } = grid;
   if (mask.length !== nx * ny) throw new Error(`assemble: mask has ${mask.length} cells, grid ${nx * ny}`);
-  const clean = facesSealed(grid, mask);
-  const faceX = clean ? grid.openX : maskedFacesX(grid, mask);
-  const faceY = clean ? grid.openY : maskedFacesY(grid, mask);
+  const faces = { nx, ny, openX: grid.conductanceX ?? grid.openX, openY: grid.conductanceY ?? grid.openY };
+  const clean = facesSealed(faces, mask);
+  const faceX = clean ? faces.openX : maskedFacesX(faces, mask);
+  const faceY = clean ? faces.openY : maskedFacesY(faces, mask);
   const cells: number[] = [];
   const coupling: number[] = [];
   const { inletCoupling, outletCoupling } = grid;
@@ -77,7 +85,23 @@ export function assemble(grid: CutGrid, mask: Uint8Array): Stencil {
   };
   if (grid.coupledCells) grid.coupledCells.forEach(consider);
   else for (let k = 0; k < nx * ny; k++) consider(k);
-  return { nx, ny, dirichlet: dirichletList(cells, coupling, nx, ny), faceX, faceY, active: mask, ...rowSpans(mask, nx, ny) };
+  const stencil = { nx, ny, dirichlet: dirichletList(cells, coupling, nx, ny), faceX, faceY, active: mask, ...rowSpans(mask, nx, ny) };
+  return grid.conductanceX ? { ...stencil, depthScale: meanFaceDepth(grid) } : stencil;
+}
+
+/** Sum of conductances over sum of open fractions of every face: the mean depth along the open faces, length units. */
+function meanFaceDepth(grid: CutGrid): number {
+  let conductance = 0;
+  let open = 0;
+  const pairs: [Float64Array, Float64Array | undefined][] = [[grid.openX, grid.conductanceX], [grid.openY, grid.conductanceY]];
+  for (const [fractions, conductances] of pairs) {
+    if (!conductances) continue;
+    for (let f = 0; f < fractions.length; f++) {
+      open += fractions[f];
+      conductance += conductances[f];
+    }
+  }
+  return open > 0 && conductance > 0 ? conductance / open : 1;
 }
 
 /** Diagonal of cell k (face sum plus coupling); for set-up code, not hot loops. */
@@ -111,8 +135,11 @@ export function writeRhs(grid: CutGrid, mask: Uint8Array, b: Float64Array): numb
   return Math.sqrt(sum);
 }
 
+/** A grid's faces: its open fractions, or its conductances when it has a depth. */
+type Faces = Pick<CutGrid, 'nx' | 'ny' | 'openX' | 'openY'>;
+
 /** True when the grid edge faces are closed and no open face joins an active cell to an excluded one. */
-function facesSealed(grid: CutGrid, mask: Uint8Array): boolean {
+function facesSealed(grid: Faces, mask: Uint8Array): boolean {
   const { nx, ny, openX, openY } = grid;
   for (let j = 0; j < ny; j++) {
     const rowX = j * (nx + 1);
@@ -129,7 +156,7 @@ function facesSealed(grid: CutGrid, mask: Uint8Array): boolean {
   return true;
 }
 
-function maskedFacesX(grid: CutGrid, mask: Uint8Array): Float64Array {
+function maskedFacesX(grid: Faces, mask: Uint8Array): Float64Array {
   const { nx, ny, openX } = grid;
   const out = new Float64Array(openX.length);
   for (let j = 0; j < ny; j++) {
@@ -141,7 +168,7 @@ function maskedFacesX(grid: CutGrid, mask: Uint8Array): Float64Array {
   return out;
 }
 
-function maskedFacesY(grid: CutGrid, mask: Uint8Array): Float64Array {
+function maskedFacesY(grid: Faces, mask: Uint8Array): Float64Array {
   const { nx, ny, openY } = grid;
   const out = new Float64Array(openY.length);
   for (let k = nx; k < nx * ny; k++) {

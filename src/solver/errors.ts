@@ -1,7 +1,7 @@
 /** Typed errors for flow set-ups a porter can get wrong, with messages in shop words. */
 
 /** What is wrong with the set-up. */
-export type FlowSetupCode = 'no-inlet' | 'no-outlet' | 'blocked' | 'too-many-cells' | 'degenerate';
+export type FlowSetupCode = 'no-inlet' | 'no-outlet' | 'blocked' | 'too-many-cells' | 'degenerate' | 'depth';
 
 /** Most grid cells one solve may use; above this the grid would not fit a browser tab's memory. */
 export const MAX_CELLS = 16_000_000;

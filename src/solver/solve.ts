@@ -7,9 +7,9 @@ import { pcg } from './pcg/pcg.ts';
 import { residual } from './pcg/operator.ts';
 import { rasterise } from './rasterise/rasterise.ts';
 import { STATION_COUNT, stationFluxes, worstImbalance } from './stations-flux.ts';
-import { MARK_INLET, type CutGrid, type FlowDomain, type SolveOptions, type SolveResult } from './types.ts';
+import { type CutGrid, type FlowDomain, type SolveOptions, type SolveResult } from './types.ts';
 import { boundaryFlux, speedRatio } from './velocity.ts';
-import { markedLength } from './rasterise/checks.ts';
+import { inletSize } from './depth/depth-integral.ts';
 import { peakSpeed, sharpConvexCorners } from './velocity-peak.ts';
 import { wallSpeeds } from './wall-speeds.ts';
 import { warmStartGuess } from './warm-start.ts';
@@ -36,7 +36,10 @@ export class SolveSupersededError extends Error {
 
 /** The solve settings of SolveOptions (tolerance, iteration cap, warm start, stop check), on a ready grid. */
 export interface GridSolveOptions extends Pick<SolveOptions, 'tolerance' | 'maxIterations' | 'warmStart' | 'shouldStop'> {
-  /** Total inlet length, length units: mean inlet speed = inlet flux / inletLength. */
+  /**
+   * Total inlet length, length units: mean inlet speed = inlet flux / inletLength. On a grid with a depth, the
+   * inlet's area instead (the integral of the depth along it, length units squared; inletSize).
+   */
   readonly inletLength: number;
   /** Told the relative residual after every iteration. */
   readonly onIteration?: (iteration: number, relativeResidual: number) => void;
@@ -50,7 +53,7 @@ export interface GridSolveOptions extends Pick<SolveOptions, 'tolerance' | 'maxI
 export type GridSolution = Omit<SolveResult, 'walls' | 'thinWalls'> & {
   /** False when the iteration cap came first. */
   readonly converged: boolean;
-  /** Inlet and outlet flux, per unit depth at unit potential drop (their mean is the conductance). */
+  /** Inlet and outlet flux at unit potential drop, per unit depth or with the depth (their mean is the conductance). */
   readonly inletFlux: number;
   readonly outletFlux: number;
 };
@@ -65,7 +68,7 @@ export function solveFlow(domain: FlowDomain, options: SolveOptions): SolveResul
   stopIfSuperseded(options.shouldStop);
   const mask = connectedCells(grid, SCRATCH);
   const solution = solveOnGrid(grid, {
-    inletLength: markedLength(domain, MARK_INLET),
+    inletLength: inletSize(domain),
     tolerance: options.tolerance,
     maxIterations: options.maxIterations,
     warmStart: options.warmStart,

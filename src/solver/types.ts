@@ -28,6 +28,42 @@ export interface FlowDomain {
   readonly islands: readonly Ring[];
   /** Names of walls, e.g. "short side"; islands' walls are named too. */
   readonly wallNames: readonly string[];
+  /**
+   * Passage depth b(x, y) normal to the section, so the solver solves div(b grad phi) = 0. Absent: unit depth
+   * (the plane model, per unit depth). Plain data, so the domain can be structured-cloned into a worker.
+   */
+  readonly depth?: DepthModel;
+}
+
+/** How the passage depth b(x, y) > 0 is given (see src/solver/depth). */
+export type DepthModel = AxisymmetricDepth | SampledDepth;
+
+/**
+ * Round passage about an axis in the section's plane: b = 2 pi r, r the distance from the axis line (length
+ * units). The section must lie on one side of the axis; a wall on the axis carries no flux (b = 0 there).
+ */
+export interface AxisymmetricDepth {
+  readonly kind: 'axisymmetric';
+  /** A point on the axis (x, y) and its direction (dirX, dirY, any length but zero), length units. */
+  readonly axis: { readonly x: number; readonly y: number; readonly dirX: number; readonly dirY: number };
+}
+
+/**
+ * Depth given at the nodes of a regular lattice in domain coordinates, bilinear between them and held at the
+ * edge value beyond the lattice. Node (i, j) lies at (x0 + i dx, y0 + j dy).
+ */
+export interface SampledDepth {
+  readonly kind: 'sampled';
+  readonly x0: number;
+  readonly y0: number;
+  /** Node spacing, length units, > 0. */
+  readonly dx: number;
+  readonly dy: number;
+  /** Nodes along x and y, >= 1 each (1: constant that way). */
+  readonly nx: number;
+  readonly ny: number;
+  /** Depth at each node, length units, > 0; row-major i + j * nx. */
+  readonly values: Float64Array;
 }
 
 /**
@@ -50,10 +86,18 @@ export interface CutGrid {
   readonly openY: Float64Array;
   /**
    * Dirichlet coupling per cell from inlet / outlet segments crossing it:
-   * conductance (boundary length / normal distance from the cell centre, dimensionless in 2D) to phi = 1 (inlet) and phi = 0 (outlet).
+   * conductance (boundary length / normal distance from the cell centre, dimensionless in 2D; times the depth when
+   * the domain has one) to phi = 1 (inlet) and phi = 0 (outlet).
    */
   readonly inletCoupling: Float64Array;
   readonly outletCoupling: Float64Array;
+  /**
+   * With a passage depth (FlowDomain.depth): each face's conductance, its open fraction times the depth at the face
+   * midpoint (depth units), layouts as openX and openY; the couplings above then carry the depth at each inlet or
+   * outlet piece's midpoint too. Absent: unit depth, the open fractions are the conductances.
+   */
+  readonly conductanceX?: Float64Array;
+  readonly conductanceY?: Float64Array;
   /**
    * Cells with a nonzero inlet or outlet coupling, ascending (i + j * nx), when the maker of the grid knows them
    * (rasterise does). The solver then reads the couplings there only: most of the two coupling arrays is never
@@ -127,11 +171,11 @@ export interface SolveResult {
   readonly iterations: number;
   /** Final relative residual ||r|| / ||b||. */
   readonly residual: number;
-  /** Total flux per unit potential drop (unit depth). */
+  /** Total flux per unit potential drop: per unit depth, or in depth units (length) when the domain has a depth. */
   readonly conductance: number;
   /** Worst |station flux - total| / total over equipotential stations. */
   readonly fluxImbalance: number;
-  /** Mean inlet speed, potential units per length (flux / inlet length) at a unit potential drop. */
+  /** Mean inlet speed, potential units per length (flux / inlet length, or / inlet area with a depth) at a unit potential drop. */
   readonly inletMeanSpeed: number;
   readonly peak: { readonly speedRatio: number; readonly x: number; readonly y: number };
   readonly walls: readonly WallSpeeds[];

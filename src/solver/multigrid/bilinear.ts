@@ -18,7 +18,10 @@
 import { diagonalOf, type Stencil } from '../assemble.ts';
 import { float32Of, type ScratchArrays } from '../scratch.ts';
 
-/** Coarse cells whose diagonal (face sum + coupling) reaches this take full weight; 2 keeps wall and corner cells full. */
+/**
+ * Coarse cells whose diagonal (face sum + coupling) reaches this take full weight; 2 keeps wall and corner cells full.
+ * With a passage depth, in units of the stencil's depthScale (a whole face of the mean depth).
+ */
 const FULL_STRENGTH_DIAGONAL = 2;
 
 /**
@@ -29,7 +32,7 @@ const FULL_STRENGTH_DIAGONAL = 2;
 export function interpolationStrength(c: Stencil, scratch: ScratchArrays | null = null, depth = 1): Float32Array {
   const { nx, ny, active, dirichlet } = c;
   const out = float32Of(scratch, `mg${depth}.strength`, nx * ny);
-  const scale = 1 / FULL_STRENGTH_DIAGONAL;
+  const scale = c.depthScale === undefined ? 1 / FULL_STRENGTH_DIAGONAL : 1 / (FULL_STRENGTH_DIAGONAL * c.depthScale);
   for (let j = 0; j < ny; j++) {
     for (let i = c.rowStart[j], k = i + j * nx, end = c.rowEnd[j]; i < end; i++, k++) {
       if (active[k] === 1) out[k] = Math.min(1, diagonalOf(c, k, 0) * scale);

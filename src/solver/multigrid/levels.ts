@@ -33,7 +33,8 @@ export function coarsen(fine: Stencil, scale: number = COARSE_SCALE, scratch: Sc
     const rowC = (j >> 1) * ncx;
     for (let i = fine.rowStart[j], end = fine.rowEnd[j]; i < end; i++) if (fine.active[row + i] === 1) active[(i >> 1) + rowC] = 1;
   }
-  return { nx: ncx, ny: ncy, dirichlet: coarseDirichlet(fine, ncx, ncy, scale), faceX, faceY, active, ...rowSpans(active, ncx, ncy) };
+  const coarse = { nx: ncx, ny: ncy, dirichlet: coarseDirichlet(fine, ncx, ncy, scale), faceX, faceY, active, ...rowSpans(active, ncx, ncy) };
+  return fine.depthScale === undefined ? coarse : { ...coarse, depthScale: fine.depthScale };
 }
 
 /** Sums the children's Dirichlet couplings into their parents, scaled like the faces. */

@@ -3,6 +3,7 @@ import { forEachCellPiece } from './clip-pieces.ts';
 import { clamp } from './area.ts';
 import type { GridRing } from './frame.ts';
 import { MARK_INLET, MARK_OUTLET } from '../types.ts';
+import type { GridDepthAt } from '../depth/face-conductance.ts';
 
 /**
  * Smallest normal distance from a cell centre to a boundary piece used in the coupling, grid units.
@@ -31,8 +32,11 @@ export interface Couplings {
  * for a potential that varies linearly across the boundary, so a straight channel whose inlet and
  * outlet lie on grid lines (dn = h / 2) gets the exact linear solution.
  * `fraction` is the cells' fluid fraction (row-major i + j * nx): cells without fluid get no coupling.
+ * With a passage depth each piece's coupling is multiplied by the depth at its midpoint (none: unit depth).
  */
-export function couplings(rings: readonly GridRing[], fraction: Float64Array, nx: number, ny: number): Couplings {
+export function couplings(
+  rings: readonly GridRing[], fraction: Float64Array, nx: number, ny: number, depth: GridDepthAt | null = null,
+): Couplings {
   const inletCoupling = new Float64Array(nx * ny);
   const outletCoupling = new Float64Array(nx * ny);
   const touched: number[] = [];
@@ -56,7 +60,7 @@ export function couplings(rings: readonly GridRing[], fraction: Float64Array, nx
         const j = clamp(Math.floor(0.5 * (va + vb) + NUDGE * nv), 0, ny - 1);
         // A cell whose area rounded to 0 holds no fluid to couple (a sliver below rounding level).
         if (fraction[i + j * nx] === 0) return;
-        target[i + j * nx] += pieceCoupling(ua, va, ub, vb, nu, nv, i, j);
+        target[i + j * nx] += pieceCoupling(ua, va, ub, vb, nu, nv, i, j, depth);
         touched.push(i + j * nx);
       });
     }
@@ -66,9 +70,12 @@ export function couplings(rings: readonly GridRing[], fraction: Float64Array, nx
 
 /**
  * Coupling Lb / max(dn, h / 4) of one inlet or outlet piece (ua, va) -> (ub, vb) to cell (i, j), grid units;
- * (nu, nv) is the unit normal pointing into the fluid.
+ * (nu, nv) is the unit normal pointing into the fluid; times the depth at the piece's midpoint when `depth` is given.
  */
-export function pieceCoupling(ua: number, va: number, ub: number, vb: number, nu: number, nv: number, i: number, j: number): number {
+export function pieceCoupling(
+  ua: number, va: number, ub: number, vb: number, nu: number, nv: number, i: number, j: number, depth: GridDepthAt | null = null,
+): number {
   const dn = (i + 0.5 - 0.5 * (ua + ub)) * nu + (j + 0.5 - 0.5 * (va + vb)) * nv;
-  return Math.hypot(ub - ua, vb - va) / Math.max(dn, MIN_NORMAL_DISTANCE);
+  const coupling = Math.hypot(ub - ua, vb - va) / Math.max(dn, MIN_NORMAL_DISTANCE);
+  return depth === null ? coupling : coupling * depth(0.5 * (ua + ub), 0.5 * (va + vb));
 }

@@ -7,6 +7,9 @@ import { gridFrame, toGridRings } from './frame.ts';
 import { findSplitCells, keepLargestPieces } from './split-cells.ts';
 import { thinWallsOf } from './thin-wall-report.ts';
 import type { FlowDomain, RasterGrid } from '../types.ts';
+import { checkDepth, depthFunction } from '../depth/depth-model.ts';
+import { faceConductances, gridDepth } from '../depth/face-conductance.ts';
+import { checkEndAreas } from '../depth/depth-integral.ts';
 
 /**
  * Lays a square grid over the domain and measures it exactly.
@@ -21,13 +24,18 @@ import type { FlowDomain, RasterGrid } from '../types.ts';
  * spacing h), the same dimensionless units as the inlet and outlet couplings.
  * Guarantees, so the solver need not re-check: every fraction is in 0..1; a face is open only if both
  * cells beside it hold fluid; a coupling is non-zero only in a cell holding fluid.
- * Memory: five Float64 arrays of about nx * ny (40 bytes a cell).
+ * Memory: five Float64 arrays of about nx * ny (40 bytes a cell); two more with a depth.
+ *
+ * With a passage depth (domain.depth) the couplings carry the depth at each inlet and outlet piece's midpoint and
+ * the grid gains conductanceX and conductanceY (open fraction times the depth at each face's midpoint).
  *
  * Throws FlowSetupError for a section the solver cannot use (see checks.ts).
  * Example: a 4 x 1 channel at targetCells 64 gives h = 0.25, nx = 18, ny = 6.
  */
 export function rasterise(domain: FlowDomain, targetCells: number): RasterGrid {
   checkDomain(domain, targetCells);
+  checkDepth(domain);
+  checkEndAreas(domain);
   const box = bounds(domain);
   const frame = gridFrame(box, targetCells);
   checkInletSpan(domain, frame.h);
@@ -35,11 +43,13 @@ export function rasterise(domain: FlowDomain, targetCells: number): RasterGrid {
   const rings = toGridRings(domain, frame);
   const cellFraction = cellFractions(rings, nx, ny);
   const { openX, openY } = faceFractions(rings, cellFraction, nx, ny);
-  const { inletCoupling, outletCoupling, touched } = couplings(rings, cellFraction, nx, ny);
+  const depth = domain.depth === undefined ? null : gridDepth(depthFunction(domain.depth), frame);
+  const { inletCoupling, outletCoupling, touched } = couplings(rings, cellFraction, nx, ny, depth);
   const split = findSplitCells(rings, cellFraction, nx, ny);
   const thinWalls = thinWallsOf(split, rings, domain.wallNames, frame, (box[2] - box[0]) * (box[3] - box[1]));
-  keepLargestPieces(split, rings, { cellFraction, openX, openY, inletCoupling, outletCoupling }, nx);
+  keepLargestPieces(split, rings, { cellFraction, openX, openY, inletCoupling, outletCoupling }, nx, depth);
   // A split cell keeps a share of its own couplings, so no cell outside `touched` gains one.
   const coupledCells = Int32Array.from(new Set(touched)).sort().filter((k) => inletCoupling[k] + outletCoupling[k] > 0);
-  return { ...frame, cellFraction, openX, openY, inletCoupling, outletCoupling, coupledCells, thinWalls };
+  const grid = { ...frame, cellFraction, openX, openY, inletCoupling, outletCoupling, coupledCells, thinWalls };
+  return depth === null ? grid : { ...grid, ...faceConductances(frame, openX, openY, depth) };
 }

@@ -2,6 +2,7 @@
 import { cellChains, type CellChain } from './cell-chains.ts';
 import { cellPieces, type CellPiece } from './cell-pieces.ts';
 import { pieceCoupling } from './coupling.ts';
+import type { GridDepthAt } from '../depth/face-conductance.ts';
 import type { GridRing } from './frame.ts';
 import { MARK_INLET, MARK_OUTLET } from '../types.ts';
 
@@ -111,7 +112,9 @@ export interface CutMeasures {
  * where the kept pieces of both cells beside it touch the face, and only the kept piece's inlet and outlet pieces
  * couple. Measures of other cells and faces are left as they are.
  */
-export function keepLargestPieces(scan: SplitScan, rings: readonly GridRing[], m: CutMeasures, nx: number): void {
+export function keepLargestPieces(
+  scan: SplitScan, rings: readonly GridRing[], m: CutMeasures, nx: number, depth: GridDepthAt | null = null,
+): void {
   const strideX = nx + 1;
   for (const [cell, split] of scan.cells) {
     const { i, j } = split;
@@ -121,8 +124,8 @@ export function keepLargestPieces(scan: SplitScan, rings: readonly GridRing[], m
     closeFace(m.openX, i + 1 + j * strideX, kept.sides[1], sideOf(scan, cell + 1, 3));
     closeFace(m.openY, i + (j + 1) * nx, kept.sides[2], sideOf(scan, cell + nx, 0));
     closeFace(m.openX, i + j * strideX, kept.sides[3], sideOf(scan, cell - 1, 1));
-    m.inletCoupling[cell] = keptCoupling(split, rings, MARK_INLET);
-    m.outletCoupling[cell] = keptCoupling(split, rings, MARK_OUTLET);
+    m.inletCoupling[cell] = keptCoupling(split, rings, MARK_INLET, depth);
+    m.outletCoupling[cell] = keptCoupling(split, rings, MARK_OUTLET, depth);
   }
 }
 
@@ -153,7 +156,7 @@ function overlap(a: readonly number[], b: readonly number[]): number {
 }
 
 /** Coupling of the split cell to `mark` from the kept piece's chains only (as coupling.ts measures each piece). */
-function keptCoupling(split: SplitCell, rings: readonly GridRing[], mark: number): number {
+function keptCoupling(split: SplitCell, rings: readonly GridRing[], mark: number, depth: GridDepthAt | null): number {
   let total = 0;
   for (const c of split.pieces[split.kept].chains) {
     const chain = split.chains[c];
@@ -167,7 +170,7 @@ function keptCoupling(split: SplitCell, rings: readonly GridRing[], mark: number
       const length = Math.hypot(du, dv);
       const at = 4 * p;
       const piece = chain.uv;
-      total += pieceCoupling(piece[at], piece[at + 1], piece[at + 2], piece[at + 3], (-dv / length) * sense, (du / length) * sense, split.i, split.j);
+      total += pieceCoupling(piece[at], piece[at + 1], piece[at + 2], piece[at + 3], (-dv / length) * sense, (du / length) * sense, split.i, split.j, depth);
     });
   }
   return total;

@@ -2,6 +2,7 @@
 import { MARK_INLET } from '../types.ts';
 import type { CutGrid, FlowDomain } from '../types.ts';
 import { clipToFluid, totalLength } from './clip.ts';
+import { linesDepthIntegral } from '../depth/depth-integral.ts';
 import { levelLines } from './contour.ts';
 import { lengthPastDeck } from './deck.ts';
 import type { RingIndex } from './ring-index.ts';
@@ -14,7 +15,7 @@ export interface StationInputs {
   /** extended cell potential (see extendedPhi), row-major i + j * nx */
   readonly phi: Float64Array;
   readonly index: RingIndex;
-  /** total flux per unit potential drop, unit depth */
+  /** total flux per unit potential drop: per unit depth, or with the domain's depth (SolveResult.conductance) */
   readonly conductance: number;
   /** mean inlet speed, potential units per length unit */
   readonly inletMeanSpeed: number;
@@ -27,23 +28,25 @@ export interface StationInputs {
  */
 export function buildStations(input: StationInputs, levels: readonly number[], deck: DeckLine | null = null): Station[] {
   const raw = levelLines(input.grid, input.phi, levels);
+  const { depth } = input.domain;
   const pieces = levels
     .map((phi, k) => {
       const lines = clipToFluid(raw[k], input.index);
-      return { phi, lines, width: totalLength(lines) };
+      const width = totalLength(lines);
+      return { phi, lines, width, area: depth === undefined ? width : linesDepthIntegral(depth, lines) };
     })
     .filter((s) => s.width > 0);
   let [px, py] = inletCentre(input.domain);
   let distance = 0;
-  return pieces.map(({ phi, lines, width }) => {
+  return pieces.map(({ phi, lines, width, area }) => {
     const [midX, midY] = centroid(lines, width);
     distance += Math.hypot(midX - px, midY - py);
     px = midX;
     py = midY;
     const [x1, y1, x2, y2] = farthestEnds(lines, midX, midY);
-    const meanSpeedRatio = input.conductance / width / input.inletMeanSpeed;
+    const meanSpeedRatio = input.conductance / area / input.inletMeanSpeed;
     const judged = deck === null || lengthPastDeck(deck, lines) <= 0.5 * width;
-    return { phi, lines, width, meanSpeedRatio, midX, midY, distanceFromInlet: distance, x1, y1, x2, y2, judged };
+    return { phi, lines, width, area, meanSpeedRatio, midX, midY, distanceFromInlet: distance, x1, y1, x2, y2, judged };
   });
 }
 

@@ -58,7 +58,12 @@ export interface Station {
   readonly lines: readonly Float64Array[];
   /** Length of the equipotential within the fluid, document units (per unit depth model). */
   readonly width: number;
-  /** Station mean speed over the mean inlet speed: (flux / width) / inlet mean speed. */
+  /**
+   * Integral of the passage depth along the lines (FlowDomain.depth), document units squared: the station's
+   * cross-section area. Without a depth it is the width (unit depth).
+   */
+  readonly area: number;
+  /** Station mean speed over the mean inlet speed: (flux / area) / inlet mean speed. */
   readonly meanSpeedRatio: number;
   /** Length-weighted centroid of the station's lines, document units. */
   readonly midX: number;

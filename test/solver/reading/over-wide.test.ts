@@ -7,7 +7,7 @@ import type { Station } from '../../../src/solver/reading/types.ts';
 function stationsOf(widths: readonly number[]): Station[] {
   return widths.map((width, k) => ({
     phi: 1 - (k + 0.5) / widths.length, lines: [], width, meanSpeedRatio: 1, midX: k, midY: 0,
-    distanceFromInlet: k, x1: k, y1: 0, x2: k, y2: width, judged: true,
+    distanceFromInlet: k, x1: k, y1: 0, x2: k, y2: width, judged: true, area: width,
   }));
 }
 
