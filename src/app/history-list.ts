@@ -3,6 +3,7 @@
  * current position marked. A click on a step undoes or redoes to it, one store undo or redo per step.
  */
 import type { DocumentStore } from './document-store.ts';
+import { textButton } from './text-button.ts';
 
 /** Steps listed on each side of the current position. */
 export const HISTORY_LISTED = 12;
@@ -17,10 +18,7 @@ export interface HistoryList {
 
 /** Puts the History button after `anchor`; `say` puts a sentence in the status line. */
 export function mountHistoryList(anchor: HTMLElement, store: DocumentStore, say: (message: string) => void): HistoryList {
-  const button = document.createElement('button');
-  button.type = 'button';
-  button.id = 'history-button';
-  button.textContent = 'History';
+  const button = textButton('History', 'history-button');
   button.title = 'The last changes: undo or redo several at once';
   button.setAttribute('aria-haspopup', 'true');
   button.setAttribute('aria-controls', 'history-list');

@@ -1,5 +1,6 @@
 /** Notices under the top bar about kept work: the offer to keep working on it, and a copy set aside. */
 import type { KeptWork } from './records.ts';
+import { textButton } from '../text-button.ts';
 
 /** When something changed, in words: "today at 21:40" or "3 Dec 2026 at 21:40" (the browser's own time format). */
 export function whenChanged(at: number, now: number): string {
@@ -20,8 +21,8 @@ export function offerText(work: KeptWork, now: number): string {
  */
 export function offerKeptWork(host: HTMLElement, work: KeptWork, now: number, choices: { keep: () => void; sample: () => void }): () => void {
   const notice = noticeElement('kept-offer', offerText(work, now));
-  const keep = noticeButton('Keep', 'kept-keep');
-  const sample = noticeButton('Start from the sample', 'kept-sample');
+  const keep = textButton('Keep', 'kept-keep');
+  const sample = textButton('Start from the sample', 'kept-sample');
   notice.append(keep, sample);
   const dismiss = () => notice.remove();
   keep.addEventListener('click', () => {
@@ -41,11 +42,11 @@ export function showSetAside(host: HTMLElement, message: string, download: (() =
   const notice = noticeElement('set-aside-notice', message);
   notice.dataset.level = 'warn';
   if (download) {
-    const save = noticeButton('Download the set-aside copy', 'set-aside-download');
+    const save = textButton('Download the set-aside copy', 'set-aside-download');
     save.addEventListener('click', download);
     notice.append(save);
   }
-  const close = noticeButton('Close', 'set-aside-close');
+  const close = textButton('Close', 'set-aside-close');
   close.addEventListener('click', () => notice.remove());
   notice.append(close);
   host.append(notice);
@@ -61,12 +62,4 @@ function noticeElement(id: string, text: string): HTMLElement {
   words.textContent = text;
   notice.append(words);
   return notice;
-}
-
-function noticeButton(label: string, id: string): HTMLButtonElement {
-  const button = document.createElement('button');
-  button.type = 'button';
-  button.id = id;
-  button.textContent = label;
-  return button;
 }

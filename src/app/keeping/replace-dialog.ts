@@ -1,5 +1,7 @@
 /** A small in-page question before unsaved work is replaced (window.confirm is blocked in some kiosks and headless browsers). */
 
+import { textButton } from '../text-button.ts';
+
 /** The question's words: the sentence(s) asked, and the two buttons. */
 export interface ReplaceQuestion {
   readonly text: string;
@@ -24,8 +26,8 @@ export function askToReplace(question: ReplaceQuestion, host: HTMLElement = docu
     text.id = 'replace-dialog-text';
     text.textContent = question.text;
     dialog.setAttribute('aria-describedby', text.id);
-    const replace = button(question.replace ?? 'Replace', 'replace-confirm');
-    const keep = button(question.keep ?? 'Keep my work', 'replace-keep');
+    const replace = textButton(question.replace ?? 'Replace', 'replace-confirm');
+    const keep = textButton(question.keep ?? 'Keep my work', 'replace-keep');
     const buttons = document.createElement('div');
     buttons.className = 'replace-buttons';
     buttons.append(keep, replace);
@@ -51,12 +53,4 @@ export function askToReplace(question: ReplaceQuestion, host: HTMLElement = docu
     host.append(backdrop);
     keep.focus();
   });
-}
-
-function button(label: string, id: string): HTMLButtonElement {
-  const element = document.createElement('button');
-  element.type = 'button';
-  element.id = id;
-  element.textContent = label;
-  return element;
 }
