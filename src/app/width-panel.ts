@@ -96,7 +96,7 @@ export class WidthPanel {
   private obstructionTable(profile: WidthProfile, units: Units): HTMLElement {
     const list = profile.obstructions ?? [];
     const table = document.createElement('table');
-    table.className = 'width-table';
+    table.className = 'width-table width-obstructions';
     if (list.length === 0) return table;
     const unit = lengthLabel(units);
     headRow(table, ['name', `Ø, ${unit}`, 'from', 'to', '']);

@@ -53,7 +53,7 @@ export function stripMarkup(p: StripPicture, s: StripScale, height: number, acti
     lower.push(`${x},${toY(s, -p.outline[k + 1] / 2).toFixed(1)}`);
   }
   const passage = upper.length > 1 ? `<polygon class="strip-passage" points="${upper.join(' ')} ${lower.reverse().join(' ')}"/>` : '';
-  return [axes(p, s, height), passage, ...p.notches.map((n) => notch(n, s)), ...p.marks.map((m) => mark(m, s, height)), ...stationHandles(p, s, active),
+  return [axes(p, s, height), passage, ...notches(p.notches, s), ...p.marks.map((m) => mark(m, s, height)), ...stationHandles(p, s, active),
     `<text class="strip-title" x="${s.left}" y="12">${escapeText(p.title)}</text>`].join('');
 }
 
@@ -73,12 +73,18 @@ function axes(p: StripPicture, s: StripScale, height: number): string {
   return `<line class="strip-centre" x1="${s.left}" x2="${s.right}" y1="${s.midY}" y2="${s.midY}"/>` + labels.join('') + widths.join('') + unit;
 }
 
-/** An obstruction: a hatched bar of its diameter across the middle of the passage, over its stretch along. */
-function notch(n: StripPicture['notches'][number], s: StripScale): string {
-  const x = toX(s, n.start), w = Math.max(2, (n.end - n.start) * s.pxAlong);
-  const y = toY(s, n.diameter / 2), h = Math.max(2, n.diameter * s.pxAcross);
-  return `<g class="strip-notch"><title>${escapeText(n.name)}</title><rect x="${x.toFixed(1)}" y="${y.toFixed(1)}" width="${w.toFixed(1)}" height="${h.toFixed(1)}"/>` +
-    `<text class="strip-tick" x="${(x + w / 2).toFixed(1)}" y="${(y - 3).toFixed(1)}" text-anchor="middle">${escapeText(n.name)}</text></g>`;
+/**
+ * Obstructions: a bar of each one's diameter across the middle of the passage, over its stretch along; the names
+ * stacked above the widest bar, so a stem inside a guide boss keeps its label clear.
+ */
+function notches(list: StripPicture['notches'], s: StripScale): string[] {
+  const top = toY(s, Math.max(0, ...list.map((n) => n.diameter)) / 2);
+  return list.map((n, k) => {
+    const x = toX(s, n.start), w = Math.max(2, (n.end - n.start) * s.pxAlong);
+    const y = toY(s, n.diameter / 2), h = Math.max(2, n.diameter * s.pxAcross);
+    return `<g class="strip-notch"><title>${escapeText(n.name)}</title><rect x="${x.toFixed(1)}" y="${y.toFixed(1)}" width="${w.toFixed(1)}" height="${h.toFixed(1)}"/>` +
+      `<text class="strip-tick" x="${(x + w / 2).toFixed(1)}" y="${(top - 3 - 11 * k).toFixed(1)}" text-anchor="middle">${escapeText(n.name)}</text></g>`;
+  });
 }
 
 function mark(m: StripPicture['marks'][number], s: StripScale, height: number): string {
