@@ -28,6 +28,8 @@ export function modelWords(profile: WidthProfile | undefined): string {
 
 export class WidthPanel {
   private doc: PortDocument | null = null;
+  /** What the drawn table's rows and buttons depend on; the same layout is refreshed in place, keeping the focus. */
+  private layout = '';
 
   constructor(private readonly host: HTMLElement, private readonly hooks: WidthPanelHooks) {}
 
@@ -40,11 +42,25 @@ export class WidthPanel {
     model.className = 'width-model';
     model.dataset.reading = 'width-model';
     model.textContent = `Model: ${modelWords(profile)}.`;
+    const valve = variant.parts?.valve;
+    const layout = `${doc.units} ${profile?.stations.length ?? 'none'} ${profile?.obstructions?.length ?? 0} ${valve !== undefined}`;
+    // The same rows: only the values change, so a porter tabbing from box to box keeps the box they moved to.
+    if (layout === this.layout && profile) return this.refresh(profile, doc.units);
+    this.layout = layout;
     const title = heading('Width profile');
     if (!profile) return this.host.replaceChildren(title, model, this.startBox(doc.units));
-    const valve = variant.parts?.valve;
     this.host.replaceChildren(title, model, this.stationTable(profile, doc.units), this.stationButtons(profile),
       this.obstructionTable(profile, doc.units), this.obstructionButtons(profile, doc.units, valve ? valveHint(valve) : null));
+  }
+
+  /** Every box shows the document's value again (rounded), the one being typed in included. */
+  private refresh(profile: WidthProfile, units: Units): void {
+    for (const input of this.host.querySelectorAll<HTMLInputElement>('input[data-field]')) {
+      const [kind, field, index] = (input.dataset.field ?? '').split('-');
+      const k = Number(index);
+      const value = kind === 'width' ? profile.stations[k]?.[field as StationField] : profile.obstructions?.[k]?.[field as ObstructionField];
+      input.value = typeof value === 'number' ? boxText(value, units) : (value ?? '');
+    }
   }
 
   private startBox(units: Units): HTMLElement {
@@ -70,7 +86,7 @@ export class WidthPanel {
       const row = table.insertRow();
       row.insertCell().textContent = String(k + 1);
       for (const field of ['along', 'width'] as const satisfies readonly StationField[]) {
-        const box = numberBox(station[field], units, (v) => this.commit((p) => setStationValue(p, k, field, v, units)));
+        const box = numberBox(() => this.profile()?.stations[k]?.[field] ?? station[field], units, (v) => this.commit((p) => setStationValue(p, k, field, v, units)));
         box.dataset.field = `width-${field}-${k}`;
         row.insertCell().append(box);
       }
@@ -108,7 +124,7 @@ export class WidthPanel {
       name.addEventListener('change', () => this.commit((p) => setObstructionValue(p, k, 'name', name.value, units)));
       row.insertCell().append(name);
       for (const field of ['diameter', 'from', 'to'] as const satisfies readonly ObstructionField[]) {
-        const box = numberBox(o[field], units, (v) => this.commit((p) => setObstructionValue(p, k, field, v, units)));
+        const box = numberBox(() => this.profile()?.obstructions?.[k]?.[field] ?? o[field], units, (v) => this.commit((p) => setObstructionValue(p, k, field, v, units)));
         box.dataset.field = `obstruction-${field}-${k}`;
         if (field !== 'diameter') box.removeAttribute('min');
         row.insertCell().append(box);
@@ -136,6 +152,10 @@ export class WidthPanel {
     return row;
   }
 
+  private profile(): WidthProfile | undefined {
+    return this.doc ? activeVariant(this.doc).width : undefined;
+  }
+
   /** Apply a change to the shown profile; a refused one is said and the table shows the document again. */
   private commit(change: (profile: WidthProfile) => WidthProfile): void {
     const doc = this.doc;
@@ -159,18 +179,18 @@ function valveHint(valve: NonNullable<NonNullable<PortDocument['variants'][numbe
   return { stemDiameter: valve.stemDiameter, stemFrom: back, stemTo: Math.max(back + valve.stemDiameter, valve.stemLength - valve.lift) };
 }
 
-/** A number box showing `exact` rounded to the unit; a committed other number is sent as typed (NaN when emptied). */
-function numberBox(exact: number, units: Units, onChange: (v: number) => void): HTMLInputElement {
+/** A number box showing the value `exact` reads now, rounded to the unit; a committed other number is sent as typed (NaN when emptied). */
+function numberBox(exact: () => number, units: Units, onChange: (v: number) => void): HTMLInputElement {
   const input = document.createElement('input');
   input.type = 'number';
   input.step = 'any';
   input.min = '0';
-  input.value = boxText(exact, units);
+  input.value = boxText(exact(), units);
   input.addEventListener('change', () => {
     const typed = input.value.trim() === '' ? Number.NaN : Number(input.value);
     if (Number.isNaN(typed)) return onChange(Number.NaN);
-    const change = typedChange(typed, exact, units);
-    if (change === null) input.value = boxText(exact, units);
+    const change = typedChange(typed, exact(), units);
+    if (change === null) input.value = boxText(exact(), units);
     else onChange(change);
   });
   return input;

@@ -47,8 +47,10 @@ describe('the width profile', () => {
       full = await solveCount(page, 'full');
       const box = page.locator('[data-field="width-width-1"]');
       await box.fill('45');
-      await box.press('Enter');
+      await box.press('Tab');
       await expect.poll(async () => (await profileOf(page))?.stations[1].width).toBe(45);
+      // The table keeps its rows, so Tab lands on the next control as in any form.
+      expect(await page.evaluate(() => (document.activeElement as HTMLElement | null)?.dataset.action)).toBe('width-add-station');
       await waitForFullSolves(page, full + 1);
       const widthConductance = await page.evaluate(() => (window as unknown as { portwright: { lastReply: { conductance: number } } }).portwright.lastReply.conductance);
       // Per unit depth the flux is that of a 1 mm deep passage; 32 to 45 mm deep it carries tens of times more [derived].
