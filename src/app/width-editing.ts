@@ -5,13 +5,13 @@
 import { lengthLabel } from '../breathing/units.ts';
 import type { PortDocument, WidthProfile } from '../document/types.ts';
 import { activeVariant } from '../editor/index.ts';
+import { monotoneCubic } from '../study/monotone-cubic.ts';
 import { WidthStrip, type StripPicture } from '../view/width-strip.ts';
 import type { DocumentStore } from './document-store.ts';
 import { plainMessage } from './document-check.ts';
 import { obstructionSpans, seatAlong, type StationMark } from './width-along.ts';
 import { modelWords, WidthPanel } from './width-panel.ts';
 import { dragStation, typicalPortWidth } from './width-table.ts';
-import { widthAlongPort } from './width-curve.ts';
 
 export interface WidthEditingHosts {
   readonly panel: HTMLElement;
@@ -80,11 +80,13 @@ export function stripPicture(doc: PortDocument, stations: readonly StationMark[]
   const seat = seatAlong(valve, stations);
   const lastStation = profile.stations[profile.stations.length - 1].along;
   const alongMax = 1.08 * Math.max(lastStation, seat ?? 0) || 1;
+  // The solve's own interpolation (monotone cubic, held beyond the end stations), so the strip draws what is solved.
+  const widthAt = monotoneCubic(profile.stations.map((s) => s.along), profile.stations.map((s) => s.width));
   const outline = new Float64Array(2 * (OUTLINE_SAMPLES + 1));
   for (let k = 0; k <= OUTLINE_SAMPLES; k++) {
     const along = (alongMax * k) / OUTLINE_SAMPLES;
     outline[2 * k] = along;
-    outline[2 * k + 1] = widthAlongPort(profile, along);
+    outline[2 * k + 1] = widthAt(along);
   }
   return {
     title: `Plan view, ${modelWords(profile)}`,

@@ -20,7 +20,7 @@ describe('stripPicture', () => {
     expect(stripPicture(SAMPLE, path)).toBeNull();
   });
 
-  it('names the model, draws the width held at the ends and straight between stations, and marks the seat', () => {
+  it('names the model, draws the width held at the ends and straight between two stations (the monotone cubic through two points), and marks the seat', () => {
     const doc = withProfile({ stations: [{ along: 10, width: 30 }, { along: 60, width: 50 }] });
     const picture = stripPicture(doc, path);
     expect(picture?.title).toBe('Plan view, width profile (width-weighted flow)');
