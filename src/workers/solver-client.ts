@@ -218,9 +218,14 @@ function canShareMemory(): boolean {
 /** A private copy whose buffers can be transferred without detaching the caller's arrays. */
 function copyDomain(domain: FlowDomain): FlowDomain {
   const ring = (r: FlowDomain['outer']) => ({ xy: r.xy.slice(), marks: r.marks.slice(), wallIds: r.wallIds.slice() });
-  return { outer: ring(domain.outer), islands: domain.islands.map(ring), wallNames: [...domain.wallNames] };
+  const copy = { outer: ring(domain.outer), islands: domain.islands.map(ring), wallNames: [...domain.wallNames] };
+  // The passage depth crosses too (the study keeps its sampled values for later cases, so they are copied, not moved).
+  const { depth } = domain;
+  if (depth === undefined) return copy;
+  return { ...copy, depth: depth.kind === 'sampled' ? { ...depth, values: depth.values.slice() } : { ...depth, axis: { ...depth.axis } } };
 }
 
 function domainBuffers(domain: FlowDomain): ArrayBuffer[] {
-  return [domain.outer, ...domain.islands].flatMap((r) => [r.xy.buffer, r.marks.buffer, r.wallIds.buffer] as ArrayBuffer[]);
+  const rings = [domain.outer, ...domain.islands].flatMap((r) => [r.xy.buffer, r.marks.buffer, r.wallIds.buffer] as ArrayBuffer[]);
+  return domain.depth?.kind === 'sampled' ? [...rings, domain.depth.values.buffer as ArrayBuffer] : rings;
 }
