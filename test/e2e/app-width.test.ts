@@ -90,4 +90,28 @@ describe('the width profile', () => {
       expect(problems).toEqual([]);
     });
   }, CHECK_MS);
+
+  it('an obstruction added from the panel is drawn as a notch; Escape mid-drag puts the station back and leaves no step', async () => {
+    await withApp(async ({ page, problems }) => {
+      await page.click('[data-action="width-start"]');
+      await page.click('[data-action="width-add-obstruction"]');
+      const stem = activeVariant(await appDocument(page)).parts?.valve?.stemDiameter;
+      await expect.poll(async () => (await profileOf(page))?.obstructions?.[0]).toMatchObject({ name: 'valve stem', diameter: stem });
+      await expect.poll(() => page.locator('#width-strip-host .strip-notch').count()).toBe(1);
+
+      const before = await appDocument(page);
+      const steps = () => page.evaluate(() => (window as unknown as { portwright: { store: { steps(n: number): { undo: string[] } } } }).portwright.store.steps(50).undo.length);
+      const stepsBefore = await steps();
+      const grip = await stripHandle(page, 0);
+      await page.mouse.move(grip.x, grip.y);
+      await page.mouse.down();
+      for (let k = 1; k <= 5; k++) await page.mouse.move(grip.x + 4 * k, grip.y - 3 * k);
+      await expect.poll(async () => (await profileOf(page))?.stations[0].width).toBeGreaterThan(32);
+      await page.keyboard.press('Escape');
+      await page.mouse.up();
+      await expect.poll(() => appDocument(page)).toEqual(before);
+      expect(await steps()).toBe(stepsBefore);
+      expect(problems).toEqual([]);
+    });
+  }, CHECK_MS);
 });
