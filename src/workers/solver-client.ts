@@ -215,14 +215,13 @@ function canShareMemory(): boolean {
   return scope.crossOriginIsolated !== false;
 }
 
-/** A private copy whose buffers can be transferred without detaching the caller's arrays. */
+/** A private copy whose buffers can be transferred without detaching the caller's arrays (the passage depth's too). */
 function copyDomain(domain: FlowDomain): FlowDomain {
   const ring = (r: FlowDomain['outer']) => ({ xy: r.xy.slice(), marks: r.marks.slice(), wallIds: r.wallIds.slice() });
   const copy = { outer: ring(domain.outer), islands: domain.islands.map(ring), wallNames: [...domain.wallNames] };
-  // The passage depth crosses too (the study keeps its sampled values for later cases, so they are copied, not moved).
   const { depth } = domain;
   if (depth === undefined) return copy;
-  return { ...copy, depth: depth.kind === 'sampled' ? { ...depth, values: depth.values.slice() } : { ...depth, axis: { ...depth.axis } } };
+  return { ...copy, depth: depth.kind === 'sampled' ? { ...depth, values: depth.values.slice() } : depth };
 }
 
 function domainBuffers(domain: FlowDomain): ArrayBuffer[] {

@@ -1,7 +1,7 @@
 /** fast-check generators of valid section documents (valid by the schema; the geometry need not make sense). */
 
 import fc from 'fast-check';
-import type { BenchInputs, Edge, Island, Outline, Parts, PortDocument, Section, Variant, Vertex } from '../../src/document/types.ts';
+import type { BenchInputs, Edge, Island, Outline, Parts, PortDocument, Section, Variant, Vertex, WidthProfile } from '../../src/document/types.ts';
 import { FORMAT_VERSION } from '../../src/document/types.ts';
 import {
   BENCH_BOUNDS, type BenchBound, MAX_COORDINATE, MAX_FILLET_RADIUS, MAX_NAME_LENGTH, MAX_PART_LENGTH, MAX_PORT_AREA, MAX_VALVE_INCLINATION_DEG,
@@ -86,8 +86,15 @@ const benchArb: fc.Arbitrary<BenchInputs> = fc.record(
   { requiredKeys: [], noNullPrototype: true },
 );
 
+/** A width profile of 2 to 6 stations at distinct distances along the port, in order (no obstructions: they need a valve). */
+const widthArb: fc.Arbitrary<WidthProfile> = fc
+  .uniqueArray(fc.double({ min: 0, max: 1e6, noNaN: true }), { minLength: 2, maxLength: 6 })
+  .chain((alongs) => fc.array(positive, { minLength: alongs.length, maxLength: alongs.length }).map((widths) => ({
+    stations: [...alongs].sort((a, b) => a - b).map((along, k) => ({ along: along + 0, width: widths[k] })),
+  })));
+
 const variantArb: fc.Arbitrary<Variant> = fc.record(
-  { name: labelArb(), note: fc.string({ maxLength: 200 }), parts: partsArb, bench: benchArb, section: sectionArb },
+  { name: labelArb(), note: fc.string({ maxLength: 200 }), parts: partsArb, bench: benchArb, width: widthArb, section: sectionArb },
   { requiredKeys: ['name', 'section'], noNullPrototype: true },
 );
 

@@ -6,7 +6,7 @@ import { loadDocument, saveDocument } from '../../src/document/load.ts';
 import { documentArb } from './arbitraries.ts';
 import * as m from './mutations.ts';
 
-const SAMPLES = ['street-tight-short-side.json', 'short-side-compare.json'].map((name) =>
+const SAMPLES = ['street-tight-short-side.json', 'short-side-compare.json', 'street-port-widths.json'].map((name) =>
   readFileSync(new URL(`../../samples/${name}`, import.meta.url), 'utf8'),
 );
 

@@ -38,8 +38,15 @@ export function setAt(root: Json, path: Path, value: Json): void {
 /** Fields the schema lets a file leave out. */
 const OPTIONAL = new Set([
   'filletRadius', 'wallName', 'note', 'anchor', 'parts', 'valve', 'seat', 'bore', 'port', 'bench', ...Object.keys(BENCH_BOUNDS),
-  'humidityModel', 'referenceArea', 'flowScale',
+  'humidityModel', 'referenceArea', 'flowScale', 'obstructions',
 ]);
+
+/** Whether a file may leave out the field at `path`: "width" is optional on a variant, required in a width station. */
+function isOptional(path: Path): boolean {
+  const key = path[path.length - 1];
+  if (key === 'width') return path.length === 3 && path[0] === 'variants';
+  return typeof key === 'string' && OPTIONAL.has(key);
+}
 
 /** `path:` as the message writes it, so "variants[1]" does not match "variants[1].name". */
 export const named = (path: Path): string => `${formatPath(path)}:`;
@@ -58,6 +65,13 @@ function outOfRange(path: Path, pick: number): Json | undefined {
   if (typeof key === 'string' && parentKey === 'bench' && Object.hasOwn(BENCH_BOUNDS, key)) {
     const bound: BenchBound = BENCH_BOUNDS[key as keyof typeof BENCH_BOUNDS];
     return choose([bound.aboveMin ? bound.min : bound.min - 1e-6, bound.max * 1.001 + 1e-9, -1e300]);
+  }
+  if (path.length >= 3 && path[path.length - 3] === 'stations' && (key === 'along' || key === 'width')) {
+    return key === 'along' ? choose([-1, 1e6 + 1, -1e300]) : choose([0, -3, 100001]);
+  }
+  if (path.length >= 3 && path[path.length - 3] === 'obstructions') {
+    if (key === 'diameter') return choose([0, -8, 100001]);
+    if (key === 'from' || key === 'to') return choose([100000.5, -100001]);
   }
   switch (key) {
     case 'filletRadius': return choose([-1e-9, -4, 100001]);
@@ -79,7 +93,7 @@ function outOfRange(path: Path, pick: number): Json | undefined {
 
 /** Deletes a required field. */
 export function deleteField(doc: Json, pick: number): Mutant | undefined {
-  const fields = places(doc).filter((p) => typeof p.path[p.path.length - 1] === 'string' && !OPTIONAL.has(p.path[p.path.length - 1] as string));
+  const fields = places(doc).filter((p) => typeof p.path[p.path.length - 1] === 'string' && !isOptional(p.path));
   const { path } = fields[pick % fields.length];
   const parent = getAt(doc, path.slice(0, -1)) as Record<string, Json>;
   delete parent[path[path.length - 1] as string];
