@@ -64,7 +64,12 @@ function axes(p: StripPicture, s: StripScale, height: number): string {
   const labels = along.values.map((v) => `<text class="strip-tick" x="${toX(s, v).toFixed(1)}" y="${y}" text-anchor="middle">${String(v)}</text>`);
   // Width ticks are whole widths (a line at +w/2 and one at -w/2), labelled on the upper one.
   const widest = (2 * (s.midY - STRIP_PAD.top)) / s.pxAcross;
-  const widths = ticks(0, widest, 2).values.filter((w) => w > 0).map((w) => {
+  // Widest first, and none whose label would sit within 14 px of the one above it.
+  const shown: number[] = [];
+  for (const w of ticks(0, widest, 3).values.filter((v) => v > 0).reverse()) {
+    if (shown.length === 0 || ((shown[shown.length - 1] - w) / 2) * s.pxAcross >= 14) shown.push(w);
+  }
+  const widths = shown.map((w) => {
     const up = toY(s, w / 2).toFixed(1), down = toY(s, -w / 2).toFixed(1);
     return `<text class="strip-tick" x="${s.left - 4}" y="${(Number(up) + 4).toFixed(1)}" text-anchor="end">${String(w)}</text>` +
       `<line class="strip-grid" x1="${s.left}" x2="${s.right}" y1="${up}" y2="${up}"/><line class="strip-grid" x1="${s.left}" x2="${s.right}" y1="${down}" y2="${down}"/>`;
