@@ -5,7 +5,7 @@ import { loadDocument } from '../../src/document/load.ts';
 import { sectionToDomain } from '../../src/geometry/index.ts';
 import { depthFunction, type SampledDepth } from '../../src/solver/index.ts';
 import { solveFlow } from '../../src/solver/solve.ts';
-import { alongFlowMap } from '../../src/study/along-flow.ts';
+import { alongAt, alongFlowMap } from '../../src/study/along-flow.ts';
 import { caseSetup, solveCase, StudyError } from '../../src/study/index.ts';
 import { widthDepth } from '../../src/study/width-depth.ts';
 import { channelFile, forEachSolved, relativeError } from './width-shapes.ts';
@@ -134,5 +134,22 @@ describe('the case set-up with a width profile', () => {
     const attempt = () => caseSetup(loadDocument(JSON.stringify(file)), { targetCells: 20_000 });
     expect(attempt).toThrow(StudyError);
     expect(attempt).toThrow(/^The width profile cannot be laid along the port, because the section does not solve\. [A-Z].*\.$/);
+  });
+});
+
+describe('alongAt: distance along the port at a potential', () => {
+  // Stations at potentials 1 (the inlet), 0.75 and 0.5, at 0, 10 and 30 mm along.
+  const phis = [1, 0.75, 0.5], alongs = [0, 10, 30];
+
+  it('is linear between stations, 0 at and above the inlet potential', () => {
+    expect(alongAt(0.875, phis, alongs)).toBeCloseTo(5, 12);
+    expect(alongAt(0.625, phis, alongs)).toBeCloseTo(20, 12);
+    expect(alongAt(1, phis, alongs)).toBe(0);
+    expect(alongAt(1.2, phis, alongs)).toBe(0);
+  });
+
+  it('carries on past the last station at the last two stations\' rate', () => {
+    expect(alongAt(0.25, phis, alongs)).toBeCloseTo(50, 12);
+    expect(alongAt(0, phis, alongs)).toBeCloseTo(70, 12);
   });
 });
