@@ -3,8 +3,10 @@
  * obstructions (valve stem, guide boss), typed; each committed change is one setWidthProfile edit.
  */
 import { lengthLabel } from '../breathing/units.ts';
-import type { PortDocument, Units, WidthProfile } from '../document/types.ts';
-import { activeVariant } from '../editor/index.ts';
+import type { PortDocument, Section, Units, ValvePart, WidthProfile } from '../document/types.ts';
+import { activeSection, activeVariant } from '../editor/index.ts';
+import { sectionBounds } from '../geometry/index.ts';
+import { pointUpAxis } from './width-along.ts';
 import { boxText, typedChange } from './box-precision.ts';
 import { heading } from './panel-table.ts';
 import {
@@ -50,7 +52,7 @@ export class WidthPanel {
     const title = heading('Width profile');
     if (!profile) return this.host.replaceChildren(title, model, this.startBox(doc.units));
     this.host.replaceChildren(title, model, this.stationTable(profile, doc.units), this.stationButtons(profile),
-      this.obstructionTable(profile, doc.units), this.obstructionButtons(profile, doc.units, valve ? valveHint(valve) : null));
+      this.obstructionTable(profile, doc.units), this.obstructionButtons(profile, doc.units, valve ? valveHint(valve, activeSection(doc)) : null));
   }
 
   /** Every box shows the document's value again (rounded), the one being typed in included. */
@@ -173,10 +175,18 @@ export class WidthPanel {
   }
 }
 
-function valveHint(valve: NonNullable<NonNullable<PortDocument['variants'][number]['parts']>['valve']>): ValveHint {
+/**
+ * What an added stem takes from the valve: its diameter, from the valve's back up the axis to past the section's
+ * box, so the stem runs on through the roof into the metal (one that stops on a wall leaves the cells along it wider).
+ */
+function valveHint(valve: ValvePart, section: Section): ValveHint {
   // Up the axis from the gauge line: the valve's back sits about a head thickness above its face, the face `lift` below.
   const back = Math.max(0, valve.headThickness - valve.lift);
-  return { stemDiameter: valve.stemDiameter, stemFrom: back, stemTo: Math.max(back + valve.stemDiameter, valve.stemLength - valve.lift) };
+  const box = sectionBounds(section);
+  const [upX, upY] = pointUpAxis(valve, 1).map((v, k) => v - (k === 0 ? valve.axis.x : valve.axis.y));
+  const corners = [[box.minX, box.minY], [box.minX, box.maxY], [box.maxX, box.minY], [box.maxX, box.maxY]];
+  const top = Math.max(...corners.map(([x, y]) => (x - valve.axis.x) * upX + (y - valve.axis.y) * upY));
+  return { stemDiameter: valve.stemDiameter, stemFrom: back, stemTo: Math.max(back + valve.stemDiameter, top) };
 }
 
 /** A number box showing the value `exact` reads now, rounded to the unit; a committed other number is sent as typed (NaN when emptied). */
