@@ -20,6 +20,7 @@ import { adoptKeptBench } from './app/bench-panel/adopt.ts';
 import { showPartsNumbers } from './app/breathing-panel.ts';
 import { PartsPanel } from './app/parts-panel.ts';
 import { PlotsPanel } from './app/plots-panel.ts';
+import { mountWidthEditing } from './app/width-editing.ts';
 import { SelectionPanel } from './app/selection-panel.ts';
 import { SolveIndicator } from './app/solve-indicator.ts';
 import { ReadingsPanel } from './app/readings-panel.ts';
@@ -62,6 +63,8 @@ const readings = new ReadingsPanel(byId('readings'), {
   onFinding: (f) => view.fitToView({ minX: f.x - f.radius, minY: f.y - f.radius, maxX: f.x + f.radius, maxY: f.y + f.radius }),
 });
 const plots = new PlotsPanel(byId('plots'));
+// The width table and the plan-view strip under the section: their own edits, drags and store listener.
+const widthEditing = mountWidthEditing({ panel: byId('width'), strip: byId('width-strip-host') }, store, (m, level) => status.show(m, level));
 const picture = new FlowPicture(view, settings, () => store.doc.units);
 let lastReply: FieldReply | null = null;
 let editTime = 0;
@@ -79,6 +82,7 @@ const live = new LiveSolve(pool.live, {
     if (kind === 'full') {
       readings.show(reply, store.doc.units, ms);
       if (reply.reading) plots.show(reply.reading, store.doc.units);
+      if (reply.reading) widthEditing.solved(reply.reading.stations);
       readings.clearStale();
       status.clearErrors();
       showThinWalls(reply);
@@ -296,5 +300,5 @@ if (adopted) status.show(adopted);
 // For browser tests and the interaction benchmark: read-only handles on the running app.
 // `stopSolverWorker` ends the live solver worker as a crash would, for the check that it is replaced.
 Object.assign(window, {
-  portwright: { store, view, timings, keeping, get lastReply() { return lastReply; }, stopSolverWorker: () => newestWorker?.terminate() },
+  portwright: { store, view, timings, widthStrip: widthEditing.strip, keeping, get lastReply() { return lastReply; }, stopSolverWorker: () => newestWorker?.terminate() },
 });
