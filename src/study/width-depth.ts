@@ -19,24 +19,27 @@ export const WIDTH_MAP_CELLS = DRAG_CELLS;
 /**
  * The depth of `variant` (its section already regenerated, `section`) from its width profile, or undefined when it
  * has none. The lattice is the map grid's cell centres, the same whatever grid the case is then solved on, so every
- * grid detail solves one problem. Same input, same output; the last few are kept (a drag step sets up its case twice:
- * once to check it, once to solve it). Throws StudyError when the plane flow cannot be solved.
+ * grid detail solves one problem. Same input, same output. The along-port map (the plane solve) is kept for the last
+ * few shapes of each stored section, so a change of the profile alone (a typed width, a strip drag) costs a pass over
+ * the lattice, not a solve. Throws StudyError when the plane flow cannot be solved.
  */
 export function variantWidthDepth(variant: Variant, section: Section, units: string): SampledDepth | undefined {
   const profile = variant.width;
   if (profile === undefined) return undefined;
-  const key = JSON.stringify([units, variant.parts ?? null, profile]);
-  const kept = recent.get(variant.section)?.find((entry) => entry.key === key);
-  if (kept) return kept.depth;
-  const domain = sectionToDomain(section, solveFlattenTolerance(section, WIDTH_MAP_CELLS), units);
-  const depth = widthDepth(alongFlowMap(domain, WIDTH_MAP_CELLS), profile, variant.parts?.valve?.axis);
-  const entries = recent.get(variant.section) ?? [];
-  recent.set(variant.section, [{ key, depth }, ...entries].slice(0, KEPT));
-  return depth;
+  return widthDepth(alongMapOf(variant, section, units), profile, variant.parts?.valve?.axis);
 }
 
-/** Depths kept per stored section object (documents are immutable, so the object stands for its geometry). */
-const recent = new WeakMap<Section, { key: string; depth: SampledDepth }[]>();
+/** The along-port map of `variant`'s shape: kept per stored section object (documents are immutable, so the object stands for its geometry) and its parts and units. */
+function alongMapOf(variant: Variant, section: Section, units: string): AlongFlowMap {
+  const key = JSON.stringify([units, variant.parts ?? null]);
+  const kept = recent.get(variant.section)?.find((entry) => entry.key === key);
+  if (kept) return kept.map;
+  const map = alongFlowMap(sectionToDomain(section, solveFlattenTolerance(section, WIDTH_MAP_CELLS), units), WIDTH_MAP_CELLS);
+  recent.set(variant.section, [{ key, map }, ...(recent.get(variant.section) ?? [])].slice(0, KEPT));
+  return map;
+}
+
+const recent = new WeakMap<Section, { key: string; map: AlongFlowMap }[]>();
 const KEPT = 4;
 
 /**
