@@ -20,7 +20,7 @@ import { adoptKeptBench } from './app/bench-panel/adopt.ts';
 import { showPartsNumbers } from './app/breathing-panel.ts';
 import { PartsPanel } from './app/parts-panel.ts';
 import { PlotsPanel } from './app/plots-panel.ts';
-import { mountWidthEditing } from './app/width-editing.ts';
+import { mountWidthEditing } from './app/width/editing.ts';
 import { SelectionPanel } from './app/selection-panel.ts';
 import { SolveIndicator } from './app/solve-indicator.ts';
 import { ReadingsPanel } from './app/readings-panel.ts';

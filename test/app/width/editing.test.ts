@@ -1,12 +1,12 @@
 /** What the plan-view strip is given: nothing without a profile; with one, the outline, handles, seat and notches. */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { stripPicture } from '../../src/app/width-editing.ts';
-import { loadDocument } from '../../src/document/load.ts';
-import type { PortDocument, WidthProfile } from '../../src/document/types.ts';
-import { applyEdit, activeVariant } from '../../src/editor/index.ts';
+import { stripPicture } from '../../../src/app/width/editing.ts';
+import { loadDocument } from '../../../src/document/load.ts';
+import type { PortDocument, WidthProfile } from '../../../src/document/types.ts';
+import { applyEdit, activeVariant } from '../../../src/editor/index.ts';
 
-const SAMPLE = loadDocument(readFileSync(new URL('../../samples/short-side-compare.json', import.meta.url), 'utf8'));
+const SAMPLE = loadDocument(readFileSync(new URL('../../../samples/short-side-compare.json', import.meta.url), 'utf8'));
 const valve = activeVariant(SAMPLE).parts?.valve;
 /** A straight path of stations along +x through the valve axis point: along = x - (axis x - 100) [derived]. */
 const ax = valve?.axis.x ?? 0, ay = valve?.axis.y ?? 0;

@@ -2,16 +2,16 @@
  * Wires the width table and the plan-view strip to the document store: typed values are edits, a strip drag is one
  * undo step (drag steps, then endDrag), and both show the active variant's profile after every change.
  */
-import { lengthLabel } from '../breathing/units.ts';
-import type { PortDocument, WidthProfile } from '../document/types.ts';
-import { activeVariant } from '../editor/index.ts';
-import { monotoneCubic } from '../study/monotone-cubic.ts';
-import { WidthStrip, type StripPicture } from '../view/width-strip.ts';
-import type { DocumentStore } from './document-store.ts';
-import { plainMessage } from './document-check.ts';
-import { obstructionSpans, seatAlong, type StationMark } from './width-along.ts';
-import { modelWords, WidthPanel } from './width-panel.ts';
-import { dragStation, typicalPortWidth } from './width-table.ts';
+import { lengthLabel } from '../../breathing/units.ts';
+import type { PortDocument, WidthProfile } from '../../document/types.ts';
+import { activeVariant } from '../../editor/index.ts';
+import { monotoneCubic } from '../../study/monotone-cubic.ts';
+import { WidthStrip, type StripPicture } from '../../view/width-strip.ts';
+import type { DocumentStore } from '../document-store.ts';
+import { plainMessage } from '../document-check.ts';
+import { obstructionSpans, seatAlong, type StationMark } from './along.ts';
+import { modelWords, WidthPanel } from './panel.ts';
+import { dragStation, typicalPortWidth } from './table.ts';
 
 export interface WidthEditingHosts {
   readonly panel: HTMLElement;

@@ -2,7 +2,7 @@
  * Where things lie along the port for the plan-view strip: a point of the section mapped to its distance from the
  * manifold face along the path through the reading's station centroids (the path Station.distanceFromInlet follows).
  */
-import type { ValvePart, WidthObstruction } from '../document/types.ts';
+import type { ValvePart, WidthObstruction } from '../../document/types.ts';
 
 /** What the mapping needs of a station: its centroid and its distance along, document units. */
 export interface StationMark {

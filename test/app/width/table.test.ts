@@ -1,11 +1,11 @@
 /** The width table's changes: typed values kept or refused in whole sentences, stations kept in order, drags held. */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import type { WidthProfile } from '../../src/document/types.ts';
+import type { WidthProfile } from '../../../src/document/types.ts';
 import {
   addObstruction, addStation, dragStation, removeObstruction, removeStation, setObstructionValue, setStationValue,
   startProfile, WidthTableError,
-} from '../../src/app/width-table.ts';
+} from '../../../src/app/width/table.ts';
 
 const profile: WidthProfile = { stations: [{ along: 0, width: 32 }, { along: 40, width: 30 }, { along: 90, width: 50 }] };
 const wholeSentences = (message: string) => message.split(/(?<=\.) /).every((s) => /^[A-Z"].*\.$/.test(s));

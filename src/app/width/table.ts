@@ -2,10 +2,10 @@
  * The width table's changes as pure functions on a variant's width profile: each returns the new profile, or throws
  * WidthTableError with a whole-sentence message when the typed value cannot stand. Lengths in document units.
  */
-import { lengthLabel } from '../breathing/units.ts';
-import { MAX_PART_LENGTH, MAX_WIDTH_ALONG, MAX_WIDTH_OBSTRUCTIONS, MAX_WIDTH_STATIONS } from '../document/limits.ts';
-import type { Units, WidthObstruction, WidthProfile, WidthStation } from '../document/types.ts';
-import { boxText } from './box-precision.ts';
+import { lengthLabel } from '../../breathing/units.ts';
+import { MAX_PART_LENGTH, MAX_WIDTH_ALONG, MAX_WIDTH_OBSTRUCTIONS, MAX_WIDTH_STATIONS } from '../../document/limits.ts';
+import type { Units, WidthObstruction, WidthProfile, WidthStation } from '../../document/types.ts';
+import { boxText } from '../box-precision.ts';
 
 /** A typed or dragged value the table refuses; `message` is one or more whole sentences a porter reads. */
 export class WidthTableError extends Error {

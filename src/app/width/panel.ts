@@ -2,17 +2,17 @@
  * The width table in the side panel: the active variant's passage width at stations along the port and its
  * obstructions (valve stem, guide boss), typed; each committed change is one setWidthProfile edit.
  */
-import { lengthLabel } from '../breathing/units.ts';
-import type { PortDocument, Section, Units, ValvePart, WidthProfile } from '../document/types.ts';
-import { activeSection, activeVariant } from '../editor/index.ts';
-import { sectionBounds } from '../geometry/index.ts';
-import { pointUpAxis } from './width-along.ts';
-import { boxText, typedChange } from './box-precision.ts';
-import { heading } from './panel-table.ts';
+import { lengthLabel } from '../../breathing/units.ts';
+import type { PortDocument, Section, Units, ValvePart, WidthProfile } from '../../document/types.ts';
+import { activeSection, activeVariant } from '../../editor/index.ts';
+import { sectionBounds } from '../../geometry/index.ts';
+import { pointUpAxis } from './along.ts';
+import { boxText, typedChange } from '../box-precision.ts';
+import { heading } from '../panel-table.ts';
 import {
   addObstruction, addStation, removeObstruction, removeStation, setObstructionValue, setStationValue, startProfile,
   typicalPortWidth, WidthTableError, type ObstructionField, type StationField, type ValveHint,
-} from './width-table.ts';
+} from './table.ts';
 
 export interface WidthPanelHooks {
   /** Commit a new profile (null: none) as one edit; false when the store refused it (it has said why). */

@@ -1,7 +1,7 @@
 /** Places along the port for the strip: points projected onto the path through the station centroids. */
 import { describe, expect, it } from 'vitest';
-import type { ValvePart } from '../../src/document/types.ts';
-import { alongOfPoint, obstructionSpans, pointUpAxis, seatAlong } from '../../src/app/width-along.ts';
+import type { ValvePart } from '../../../src/document/types.ts';
+import { alongOfPoint, obstructionSpans, pointUpAxis, seatAlong } from '../../../src/app/width/along.ts';
 
 /** An L-shaped path [derived]: 0 at (0, 0), 10 along at (10, 0), 20 along at (10, -10). */
 const path = [
