@@ -8,6 +8,13 @@ export function lengthText(value: number, units: LengthUnits): string {
   return `${value.toFixed(size >= 100 ? 0 : 1)} mm`;
 }
 
+/** An area in document units squared with its unit: "1240 mm²", "1.92 in²". */
+export function areaText(value: number, units: LengthUnits): string {
+  const size = Math.abs(value);
+  if (units === 'inch') return `${value.toFixed(size >= 10 ? 1 : size >= 1 ? 2 : 3)} in²`;
+  return `${value.toFixed(size >= 100 ? 0 : 1)} mm²`;
+}
+
 /** A speed ratio: "1.92". */
 export function ratioText(value: number): string {
   return value.toFixed(2);
