@@ -19,6 +19,7 @@ export type * from './types.ts';
 export { ReadingSettingError } from './errors.ts';
 export { readingSummary, type ReadingSummary } from './summary.ts';
 export { passageModel } from './port-volume.ts';
+export { MODEL_WORDS } from './wording.ts';
 
 /**
  * Reads a solved flow: equipotential stations (with their areas under the domain's depth) and the one of least area

@@ -1,5 +1,12 @@
 /** Numbers in porter's words: lengths with units, speed ratios and percentages. */
-import type { LengthUnits } from './types.ts';
+import type { LengthUnits, PassageModel } from './types.ts';
+
+/** The model in words, as the app's readings and the command's report name it. */
+export const MODEL_WORDS: Readonly<Record<PassageModel, string>> = {
+  plane: 'plane, per unit depth',
+  width: 'width profile',
+  axisymmetric: 'axisymmetric, round about the axis',
+};
 
 /** A length in document units with its unit: "23.1 mm", "0.91 in". */
 export function lengthText(value: number, units: LengthUnits): string {
