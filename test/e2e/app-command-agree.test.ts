@@ -16,6 +16,9 @@ interface SolvedJson {
   readonly conductance: number;
   readonly slowShare: number;
   readonly tightest: { readonly width: number } | null;
+  readonly model: string;
+  readonly leastArea: { readonly area: number } | null;
+  readonly portVolume: number;
   readonly findings: readonly string[];
   readonly walls: readonly { readonly name: string; readonly peakSpeedRatio: number }[];
 }
@@ -41,7 +44,7 @@ async function commandJson(): Promise<SolvedJson> {
 const slug = (name: string) => name.toLowerCase().replace(/[^a-z0-9]+/g, '-');
 
 describe('app and command on the same file', () => {
-  it('show the same conductance, wall peaks, tightest section, slow share and findings', async () => {
+  it('show the same model, conductance, wall peaks, tightest section, least area, port volume, slow share and findings', async () => {
     const json = await commandJson();
     const { page } = app;
     const cell = (key: string) => page.locator(`[data-reading="${key}"]`).innerText();
@@ -59,6 +62,13 @@ describe('app and command on the same file', () => {
     }
     const findings = await page.locator('#readings .findings button').allInnerTexts();
     expect(findings).toEqual(json.findings);
+    // the model in words, and the least area and port volume per unit depth (no width profile: the plane model)
+    const sig4 = (v: number) => String(Number(v.toPrecision(4)));
+    expect(json.model).toBe('plane');
+    expect(await cell('model')).toBe('plane, per unit depth');
+    expect(await cell('least-area')).toBe(`${sig4(json.leastArea!.area)} mm² per mm of depth`);
+    expect(await cell('port-volume')).toBe(`${sig4(json.portVolume)} mm³ per mm of depth`);
+    expect(await page.locator('#plots canvas[data-plot="csa"]').count()).toBe(1);
     expect(app.problems).toEqual([]);
   }, CHECK_MS);
 });
