@@ -10,7 +10,9 @@
 
 import { writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
-import { FORMAT_VERSION, type BenchInputs, type Edge, type Parts, type PortDocument, type Section, type Variant, type Vertex } from '../src/document/types.ts';
+import {
+  FORMAT_VERSION, type BenchInputs, type Edge, type Parts, type PortDocument, type Section, type Variant, type Vertex, type WidthProfile,
+} from '../src/document/types.ts';
 import { saveDocument } from '../src/document/load.ts';
 import { applyParts } from '../src/parts/apply.ts';
 import { cfmToM3s, inH2OToPa } from '../src/breathing/units.ts';
@@ -126,6 +128,25 @@ function benchInputs(cfm: number): BenchInputs {
   };
 }
 
+/**
+ * An invented width profile for the tight street port (distances along the port as its reading measures them, from
+ * the manifold face): 34 mm at the gasket, 30.5 mm past a head-bolt boss before the turn, the bowl opening to 50 mm
+ * round the valve guide, down to the 41.9 mm throat and out to the 46 mm valve, then the 88 mm test bore. The 8 mm
+ * stem crosses the bowl from the top of its drawn stub into the roof; the 14 mm guide boss stands 13 mm proud of the
+ * roof (about 61 mm up the axis from the gauge line there).
+ */
+const WIDTHS: WidthProfile = {
+  stations: [
+    { along: 0, width: 34 }, { along: 30, width: 32 }, { along: 58, width: 30.5 }, { along: 75, width: 36 },
+    { along: 92, width: 50 }, { along: 108, width: 50 }, { along: 120, width: 42 }, { along: 132, width: 46 },
+    { along: 150, width: 88 },
+  ],
+  obstructions: [
+    { name: 'valve stem', diameter: 8, from: 9, to: 75 },
+    { name: 'guide boss', diameter: 14, from: 48, to: 75 },
+  ],
+};
+
 /** File name (in samples/) -> document. */
 export function buildSamples(): Record<string, PortDocument> {
   return {
@@ -133,6 +154,9 @@ export function buildSamples(): Record<string, PortDocument> {
     'street-generous-short-side.json': document('Street intake, 46 mm valve: generous short side', [GENEROUS]),
     'short-side-compare.json': document('Street intake, 46 mm valve: short-side radius compared', [
       { ...TIGHT, bench: benchInputs(238) }, { ...GENEROUS, bench: benchInputs(251) },
+    ]),
+    'street-port-widths.json': document('Street intake, 46 mm valve: tight short side with the port widths', [
+      { ...TIGHT, name: 'tight short side, widths', width: WIDTHS },
     ]),
   };
 }

@@ -5,6 +5,7 @@ export { loadDocument, readDocument, saveDocument, type ReadResult } from './loa
 export { DocumentError, type DocumentProblem } from './errors.ts';
 export { documentSchema, sectionSchema, variantSchema } from './schema.ts';
 export { benchInputsSchema } from './bench-schema.ts';
+export { widthProfileSchema } from './width-schema.ts';
 export { partsSchema, valvePartSchema, seatPartSchema, borePartSchema, portPartSchema } from './parts-schema.ts';
 export { DEFAULT_SETTINGS, MIGRATIONS, V1_VARIANT_NAME } from './migrations.ts';
 export * from './limits.ts';

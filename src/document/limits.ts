@@ -53,6 +53,15 @@ export const MAX_PORT_AREA = MAX_COORDINATE * MAX_COORDINATE;
 /** Largest lean of the valve axis from straight down, degrees (real heads lean well under this). */
 export const MAX_VALVE_INCLINATION_DEG = 75;
 
+/** Most stations in one width profile. */
+export const MAX_WIDTH_STATIONS = 200;
+/** Most obstructions (stems, guide bosses) in one width profile. */
+export const MAX_WIDTH_OBSTRUCTIONS = 20;
+/** Largest distance of a width station along the port, document units (a path may wind far longer than the box). */
+export const MAX_WIDTH_ALONG = 10 * MAX_COORDINATE;
+/** Narrowest the passage is left where an obstruction stands, as a fraction of the width there. */
+export const OBSTRUCTED_WIDTH_FLOOR = 0.1;
+
 /** Bounds of one bench input: from `min` (excluded when `aboveMin`) to `max`, a whole number when `integer`. */
 export interface BenchBound {
   readonly min: number;

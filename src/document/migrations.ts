@@ -5,7 +5,7 @@
 
 import { z } from 'zod';
 import { FORMAT_NAME, type Section, type Settings, type Units } from './types.ts';
-import { documentV2Schema, documentV3Schema, sectionSchemaBeforeParts, titleSchema, unitsSchema } from './schema.ts';
+import { documentV2Schema, documentV3Schema, documentV4Schema, sectionSchemaBeforeParts, titleSchema, unitsSchema } from './schema.ts';
 
 /** Format version 1: one section at the top level, no variants, no settings. */
 export const documentV1Schema = z.strictObject(
@@ -60,10 +60,18 @@ function v2ToV3(doc: z.output<typeof documentV2Schema>): unknown {
  * already a version-4 one once its version says so. The grid detail has been saved in `settings` since version 2.
  *
  * Later steps follow the same pattern, one optional key each with its own version and an identity lift like this one:
- * `variants[].width` (width profile), `variants[].benchSheet` (bench rows) and a document-level `underlay` (photo).
+ * `variants[].benchSheet` (bench rows) and a document-level `underlay` (photo).
  */
 function v3ToV4(doc: z.output<typeof documentV3Schema>): unknown {
   return { ...doc, version: 4 };
+}
+
+/**
+ * Version 4 to 5: variants may carry a width profile (`width`), optional, so a version-4 document is already a
+ * version-5 one (every variant solved per unit depth, as before) once its version says so.
+ */
+function v4ToV5(doc: z.output<typeof documentV4Schema>): unknown {
+  return { ...doc, version: 5 };
 }
 
 /** One step: the schema of version `from` and the lift to version `from + 1`. */
@@ -78,4 +86,5 @@ export const MIGRATIONS: readonly Migration[] = [
   { from: 1, schema: documentV1Schema, up: v1ToV2 },
   { from: 2, schema: documentV2Schema, up: v2ToV3 },
   { from: 3, schema: documentV3Schema, up: v3ToV4 },
+  { from: 4, schema: documentV4Schema, up: v4ToV5 },
 ];

@@ -1,5 +1,5 @@
 /**
- * The zod schema of the current section file (format version 4), mirroring types.ts field for field.
+ * The zod schema of the current section file (format version 5), mirroring types.ts field for field.
  * Unknown fields are refused, not stripped: a misspelt "filetRadius" silently dropped would load a section
  * that differs from the file without a word, and a field this version does not know belongs to a newer format.
  * Every message is a plain requirement ("must be ..."); errors are worded from it by issues.ts.
@@ -10,6 +10,7 @@ import { FORMAT_NAME, FORMAT_VERSION, type PortDocument } from './types.ts';
 import { benchInputsSchema } from './bench-schema.ts';
 import { checkParts, partsSchema } from './parts-schema.ts';
 import { boundedNumber, coordinateSchema } from './schema-numbers.ts';
+import { checkWidthObstructions, widthProfileSchema } from './width-schema.ts';
 import {
   CONTROL_CHARACTER, MAX_FILLET_RADIUS, MAX_ISLANDS, MAX_NAME_LENGTH, MAX_NOTE_LENGTH, MAX_SECTION_VERTICES,
   MAX_TITLE_LENGTH, MAX_VARIANTS, MAX_VIA_POINTS,
@@ -143,8 +144,22 @@ const checkVariantParts = (variant: { parts?: z.output<typeof partsSchema>; sect
   if (variant.parts) checkParts(variant.parts, variant.section.outline, ctx);
 };
 
-/** A variant of the current format: key order here is the order saveDocument writes (the short bench before the long section). */
+/**
+ * A variant of the current format: key order here is the order saveDocument writes (the short bench and width
+ * profile before the long section).
+ */
 export const variantSchema = z
+  .strictObject(
+    { name, note: noteSchema, parts: partsSchema.optional(), bench: benchInputsSchema.optional(), width: widthProfileSchema.optional(), section: sectionSchema },
+    variantError,
+  )
+  .superRefine((variant, ctx) => {
+    checkVariantParts(variant, ctx);
+    checkWidthObstructions(variant, ctx);
+  });
+
+/** The variant of format version 4: parts and bench inputs, but no width profile. */
+export const variantSchemaBeforeWidth = z
   .strictObject({ name, note: noteSchema, parts: partsSchema.optional(), bench: benchInputsSchema.optional(), section: sectionSchema }, variantError)
   .superRefine(checkVariantParts);
 
@@ -195,6 +210,8 @@ function documentSchemaOf<V extends z.ZodType<{ name: string }>, N extends numbe
 
 /** The whole file, current version. */
 export const documentSchema = documentSchemaOf(FORMAT_VERSION, variantSchema);
+/** Format version 4: variants without a width profile. */
+export const documentV4Schema = documentSchemaOf(4, variantSchemaBeforeWidth);
 /** Format version 3: variants without bench inputs. */
 export const documentV3Schema = documentSchemaOf(3, variantSchemaBeforeBench);
 /** Format version 2: variants without parts, outlines without anchor corners. */

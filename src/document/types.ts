@@ -195,12 +195,43 @@ export interface BenchInputs {
   readonly flowScale?: BenchFlowScale;
 }
 
+/** The passage width at one place along the port. */
+export interface WidthStation {
+  /** Distance from the manifold (inlet) face along the flow, document units: the reading's Station.distanceFromInlet. */
+  readonly along: number;
+  /** Passage width normal to the section, document units, > 0. */
+  readonly width: number;
+}
+
+/**
+ * A valve stem or guide boss in the bowl: inside the stretch [from, to] of the valve axis, within diameter/2 of the
+ * axis line, the width is reduced by the diameter (never below 10% of the local width). Needs `parts.valve`.
+ */
+export interface WidthObstruction {
+  /** What it is, e.g. "valve stem" or "guide boss". */
+  readonly name: string;
+  /** Document units. */
+  readonly diameter: number;
+  /** Extent along the valve axis measured up from the valve's gauge-line centre (parts.valve.axis), document units, from < to. */
+  readonly from: number;
+  readonly to: number;
+}
+
+/**
+ * The port's width normal to the section along its length (format version 5): widths at stations along the flow,
+ * interpolated smoothly along it and constant across it, less any obstructions. No profile means unit depth.
+ */
+export interface WidthProfile {
+  /** At least 2, strictly ascending `along`. */
+  readonly stations: readonly WidthStation[];
+  readonly obstructions?: readonly WidthObstruction[];
+}
+
 /**
  * A named alternative of the section, e.g. "tight short side" and "generous short side".
  *
  * Room left for later data, each an optional key added with a format version step of its own and an identity
  * migration (older files simply lack it); none is written as an empty placeholder now:
- * - `width`: the variant's width profile (port width across the section along its length);
  * - `benchSheet`: the variant's flow-bench sheet (measured rows of lift and flow);
  * - the document-level `underlay` (a photo of the sectioned casting traced over) sits beside `settings`.
  */
@@ -211,6 +242,8 @@ export interface Variant {
   readonly parts?: Parts;
   /** The air-and-bench panel's inputs for this variant (format version 4); left out when none were typed. */
   readonly bench?: BenchInputs;
+  /** The passage width along the port (format version 5); left out for a section solved per unit depth. */
+  readonly width?: WidthProfile;
   readonly section: Section;
 }
 
@@ -222,7 +255,7 @@ export interface Settings {
 }
 
 export const FORMAT_NAME = 'portwright-section';
-export const FORMAT_VERSION = 4;
+export const FORMAT_VERSION = 5;
 
 /**
  * The saved file, current version. A later format step adds an optional `underlay` here (the photo of the sectioned

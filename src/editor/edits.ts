@@ -21,6 +21,7 @@ import {
 } from './edits-variants.ts';
 import { setUnits, setUnitsArgs } from './edits-units.ts';
 import { setBench, setBenchArgs } from './edits-bench.ts';
+import { setWidthProfile, setWidthProfileArgs } from './edits-width.ts';
 
 /** A key that runs an edit on the current selection. */
 export interface EditShortcut {
@@ -95,6 +96,7 @@ export const EDITS = {
   setLift: spec({ name: 'setLift', label: 'Set lift', args: setLiftArgs, run: setLift, regeneratesParts: true }),
   removeParts: spec({ name: 'removeParts', label: 'Remove parts', args: removePartsArgs, run: removeParts, regeneratesParts: true }),
   setBench: spec({ name: 'setBench', label: 'Set bench inputs', args: setBenchArgs, run: setBench }),
+  setWidthProfile: spec({ name: 'setWidthProfile', label: 'Set width profile', args: setWidthProfileArgs, run: setWidthProfile }),
 } as const;
 
 export type EditName = keyof typeof EDITS;

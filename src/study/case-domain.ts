@@ -1,12 +1,14 @@
 /** One case pipeline: (document, variant, lift, grid) -> the flow domain the solver solves, for the app and the command alike. */
 
 import type { PortDocument, Section, Variant } from '../document/types.ts';
-import { sectionBounds, sectionToDomain } from '../geometry/index.ts';
+import { sectionToDomain } from '../geometry/index.ts';
 import { deckLine, sectionForSolver } from '../parts/index.ts';
 import type { ReadingOptions } from '../solver/reading/index.ts';
-import { gridFrame } from '../solver/rasterise/frame.ts';
 import type { FlowDomain } from '../solver/types.ts';
 import { StudyError } from './errors.ts';
+import { solveFlattenTolerance } from './flatten-tolerance.ts';
+import { variantWidthDepth } from './width-depth.ts';
+
 
 /** What to solve. */
 export interface CaseSpec {
@@ -24,7 +26,10 @@ export interface CaseSetup {
   readonly variant: Variant;
   /** Its section with the parts regenerated from their numbers. */
   readonly section: Section;
+  /** With a width profile, `domain.depth` is the sampled width (src/study/width-depth.ts). */
   readonly domain: FlowDomain;
+  /** 'plane': per unit depth; 'width': the variant's width profile gives the passage depth. */
+  readonly model: 'plane' | 'width';
   readonly targetCells: number;
   /** Chordal tolerance the curved edges were flattened within, document units. */
   readonly flattenTolerance: number;
@@ -37,31 +42,20 @@ export interface CaseSetup {
  * Sets up one case. Parts are always regenerated from their numbers (a hand-edited file's stored geometry may no
  * longer match them), and curved edges are flattened within a tolerance tied to this grid's cell size, so
  * the same file on the same grid is the same problem wherever it is solved.
- * Throws StudyError (no such variant), GeometryError or PartsError: all the porter's to fix.
+ * With a width profile the depth is built from a plane solve of the section on a coarse grid (width-depth.ts).
+ * Throws StudyError (no such variant, or a width profile on a section that does not solve), GeometryError or
+ * PartsError: all the porter's to fix.
  */
 export function caseSetup(doc: PortDocument, spec: CaseSpec): CaseSetup {
   const variant = withLift(findVariant(doc, spec.variant ?? doc.activeVariant), spec.lift);
   const section = sectionForSolver(variant);
   const flattenTolerance = solveFlattenTolerance(section, spec.targetCells);
-  const domain = sectionToDomain(section, flattenTolerance, doc.units);
+  const plane = sectionToDomain(section, flattenTolerance, doc.units);
+  const depth = variantWidthDepth(variant, section, doc.units);
+  const domain: FlowDomain = depth === undefined ? plane : { ...plane, depth };
+  const model = depth === undefined ? 'plane' : 'width';
   const reading: ReadingOptions = { units: doc.units, deck: deckLine(variant) ?? undefined };
-  return { variant, section, domain, targetCells: spec.targetCells, flattenTolerance, reading };
-}
-
-/**
- * The chordal tolerance for solving `section` on about `targetCells` cells: h^2 / D, with h the cell size and D the
- * box's diagonal. The chords lie inside an arc, so a tolerance in proportion to h would shift curved walls by a
- * first-order amount and spoil the scheme's second order; h^2 / D shrinks as fast as the discretisation error
- * (on the standard grid of a 100 mm port it is about h / 700, and an arc a few cells in radius still gets
- * hundreds of chords a turn).
- */
-export function solveFlattenTolerance(section: Section, targetCells: number): number {
-  const b = sectionBounds(section);
-  const { h } = gridFrame([b.minX, b.minY, b.maxX, b.maxY], targetCells);
-  const diagonal = Math.hypot(b.maxX - b.minX, b.maxY - b.minY);
-  const tolerance = (h * h) / (10 * diagonal);
-  // An empty or degenerate box gives no cell size; sectionToDomain then reports the real problem.
-  return Number.isFinite(tolerance) && tolerance > 0 ? tolerance : 1;
+  return { variant, section, domain, model, targetCells: spec.targetCells, flattenTolerance, reading };
 }
 
 function findVariant(doc: PortDocument, name: string): Variant {

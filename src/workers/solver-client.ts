@@ -215,12 +215,16 @@ function canShareMemory(): boolean {
   return scope.crossOriginIsolated !== false;
 }
 
-/** A private copy whose buffers can be transferred without detaching the caller's arrays. */
+/** A private copy whose buffers can be transferred without detaching the caller's arrays (the passage depth's too). */
 function copyDomain(domain: FlowDomain): FlowDomain {
   const ring = (r: FlowDomain['outer']) => ({ xy: r.xy.slice(), marks: r.marks.slice(), wallIds: r.wallIds.slice() });
-  return { outer: ring(domain.outer), islands: domain.islands.map(ring), wallNames: [...domain.wallNames] };
+  const copy = { outer: ring(domain.outer), islands: domain.islands.map(ring), wallNames: [...domain.wallNames] };
+  const { depth } = domain;
+  if (depth === undefined) return copy;
+  return { ...copy, depth: depth.kind === 'sampled' ? { ...depth, values: depth.values.slice() } : depth };
 }
 
 function domainBuffers(domain: FlowDomain): ArrayBuffer[] {
-  return [domain.outer, ...domain.islands].flatMap((r) => [r.xy.buffer, r.marks.buffer, r.wallIds.buffer] as ArrayBuffer[]);
+  const rings = [domain.outer, ...domain.islands].flatMap((r) => [r.xy.buffer, r.marks.buffer, r.wallIds.buffer] as ArrayBuffer[]);
+  return domain.depth?.kind === 'sampled' ? [...rings, domain.depth.values.buffer as ArrayBuffer] : rings;
 }

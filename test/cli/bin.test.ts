@@ -72,7 +72,7 @@ describe('portwright check (the real bin, in a child process)', () => {
     symlinkSync(BIN, link);
     const ran = runBin(['check', join(REPO, 'test/fixtures/section-v1.json')], { command: link, prefix: [], cwd: tmp.dir });
     expect(ran.code).toBe(0);
-    expect(ran.stdout).toContain('format version 1, upgraded to 4 on reading');
+    expect(ran.stdout).toContain('format version 1, upgraded to 5 on reading');
     expect(ran.stdout).toContain('units: inch');
     expect(ran.stdout).toMatch(/fluid area: \d+\.\d{4} inch\^2/);
   });

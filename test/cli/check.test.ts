@@ -28,13 +28,13 @@ describe('check (in process)', () => {
     expect(out.match(/fluid area: \d+\.\d mm\^2/g)).toHaveLength(2);
   });
 
-  it('accepts a version-3 file (upgraded on reading) and a version-4 one with bench inputs', async () => {
+  it('accepts a version-3 file and a version-4 one with bench inputs (both upgraded on reading)', async () => {
     const v3 = await check(join(REPO, 'test/fixtures/section-v3.json'));
     expect(v3.code).toBe(0);
-    expect(v3.out).toContain('(format version 3, upgraded to 4 on reading)');
+    expect(v3.out).toContain('(format version 3, upgraded to 5 on reading)');
     const v4 = await check(join(REPO, 'test/fixtures/section-v3-as-v4.json'));
     expect(v4.code).toBe(0);
-    expect(v4.out).toContain('(format version 4)');
+    expect(v4.out).toContain('(format version 4, upgraded to 5 on reading)');
     expect(v4.out).toContain('OK: 1 variant checked, no problems');
   });
 

@@ -8,16 +8,17 @@ import { documentErrorOf } from './document-error.ts';
 const fixture = (name: string): string => readFileSync(new URL(`../fixtures/${name}`, import.meta.url), 'utf8');
 
 describe('format version 1', () => {
-  it('migrates through versions 2 and 3 to the expected current document (golden files)', () => {
+  it('migrates through versions 2, 3 and 4 to the expected current document (golden files)', () => {
     const { document, fileVersion } = readDocument(fixture('section-v1.json'));
     expect(fileVersion).toBe(1);
     expect(document).toStrictEqual(loadDocument(fixture('section-v1-as-v2.json')));
     expect(document).toStrictEqual(loadDocument(fixture('section-v1-as-v3.json')));
     expect(document).toStrictEqual(loadDocument(fixture('section-v1-as-v4.json')));
+    expect(document).toStrictEqual(loadDocument(fixture('section-v1-as-v5.json')));
   });
 
-  it('saves as version 4, byte for byte the golden file', () => {
-    expect(saveDocument(loadDocument(fixture('section-v1.json')))).toBe(fixture('section-v1-as-v4.json'));
+  it('saves as version 5, byte for byte the golden file', () => {
+    expect(saveDocument(loadDocument(fixture('section-v1.json')))).toBe(fixture('section-v1-as-v5.json'));
   });
 
   it('names problems by their place in the version-1 file', () => {
@@ -36,12 +37,12 @@ describe('format version 1', () => {
 });
 
 describe('format version 2', () => {
-  it('migrates through version 3 unchanged but for the version (golden files)', () => {
+  it('migrates through versions 3 and 4 unchanged but for the version (golden files)', () => {
     const { document, fileVersion } = readDocument(fixture('section-v1-as-v2.json'));
     expect(fileVersion).toBe(2);
-    expect(document.version).toBe(4);
-    expect(document.variants.every((v) => v.parts === undefined && v.bench === undefined)).toBe(true);
-    expect(saveDocument(document)).toBe(fixture('section-v1-as-v4.json'));
+    expect(document.version).toBe(5);
+    expect(document.variants.every((v) => v.parts === undefined && v.bench === undefined && v.width === undefined)).toBe(true);
+    expect(saveDocument(document)).toBe(fixture('section-v1-as-v5.json'));
   });
 
   it('is refused when it has version-3 fields mixed in, naming each', () => {
@@ -55,13 +56,12 @@ describe('format version 2', () => {
 });
 
 describe('format version 3', () => {
-  it('migrates to version 4 unchanged but for the version (golden files: a sample as version 3 wrote it)', () => {
+  it('migrates to version 5 unchanged but for the version (golden files: a sample as version 3 wrote it)', () => {
     const { document, fileVersion } = readDocument(fixture('section-v3.json'));
     expect(fileVersion).toBe(3);
     expect(document).toStrictEqual(loadDocument(fixture('section-v3-as-v4.json')));
-    expect(saveDocument(document)).toBe(fixture('section-v3-as-v4.json'));
     const asWritten = JSON.parse(fixture('section-v3.json'));
-    expect({ ...document }).toStrictEqual({ ...asWritten, version: 4 });
+    expect({ ...document }).toStrictEqual({ ...asWritten, version: 5 });
   });
 
   it('keeps its grid detail', () => {
@@ -74,6 +74,24 @@ describe('format version 3', () => {
     const v3 = JSON.parse(fixture('section-v3.json'));
     v3.variants[0].bench = { testPressurePa: 6974.4892 };
     expect(documentErrorOf(() => loadDocument(JSON.stringify(v3))).message).toContain('variants[0].bench: is not a field');
+  });
+});
+
+describe('format version 4', () => {
+  it('migrates to version 5 unchanged but for the version (golden files: a sample as version 4 wrote it)', () => {
+    const { document, fileVersion } = readDocument(fixture('section-v4.json'));
+    expect(fileVersion).toBe(4);
+    expect(document).toStrictEqual(loadDocument(fixture('section-v4-as-v5.json')));
+    expect(saveDocument(document)).toBe(fixture('section-v4-as-v5.json'));
+    const asWritten = JSON.parse(fixture('section-v4.json'));
+    expect({ ...document }).toStrictEqual({ ...asWritten, version: 5 });
+    expect(document.variants.every((v) => v.width === undefined)).toBe(true);
+  });
+
+  it('is refused when it has a width profile mixed in, naming the field', () => {
+    const v4 = JSON.parse(fixture('section-v4.json'));
+    v4.variants[0].width = { stations: [{ along: 0, width: 32 }, { along: 60, width: 34 }] };
+    expect(documentErrorOf(() => loadDocument(JSON.stringify(v4))).message).toContain('variants[0].width: is not a field');
   });
 });
 

@@ -36,7 +36,7 @@ export function boxSection(): Section {
 export function boxDocument(): PortDocument {
   return deepFreeze({
     format: 'portwright-section',
-    version: 4,
+    version: 5,
     title: 'Test box',
     units: 'mm',
     variants: [

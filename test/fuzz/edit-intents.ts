@@ -16,6 +16,7 @@ export const DRAWN: readonly string[] = [
   'movePoint', 'movePoint', 'movePoint', 'insertVertex', 'insertVertex', 'deleteVertex', 'setFilletRadius', 'setFilletRadius',
   'setEdgeRole', 'setWallName', 'makeArc', 'makeCurve', 'makeLine', 'addVariant', 'renameVariant', 'setActiveVariant',
   'deleteVariant', 'setUnits', 'setPart', 'setPart', 'setLift', 'setLift', 'setParts', 'removeParts', 'setBench',
+  'setWidthProfile',
 ].filter(isEditName);
 
 /** The edits a pointer drags: their steps go through the store with cause 'drag'. */
@@ -144,6 +145,7 @@ function resolveDocumentEdit(doc: PortDocument, intent: Intent, step: number, st
     case 'setParts': return { name: edit, args: { parts: pick(doc.variants, n).parts ?? (m % 2 === 0 ? {} : undefined) } };
     case 'removeParts': return { name: edit, args: {} };
     case 'setBench': return { name: edit, args: benchChange(doc, n, m, u) };
+    case 'setWidthProfile': return { name: edit, args: widthChange(doc, n, m, u) };
     default: throw new Error(`no resolver for the edit "${edit}"`);
   }
 }
@@ -157,6 +159,19 @@ function benchChange(doc: PortDocument, n: number, m: number, u: number): unknow
   if (numeric.length === 0) return { bench: undefined };
   const key = pick(numeric, n);
   return { bench: { ...own, [key]: (own[key] as number) * (1 + 0.2 * u) } };
+}
+
+/** The active variant's width profile with one station's width scaled by up to 20%, another variant's, a fresh one or none. */
+function widthChange(doc: PortDocument, n: number, m: number, u: number): unknown {
+  const own = activeVariant(doc).width;
+  if (m % 5 === 0) return { width: null };
+  if (own === undefined || m % 4 === 0) {
+    const other = pick(doc.variants, n).width;
+    return { width: other ?? { stations: [{ along: 0, width: 30 * (1 + 0.2 * u) }, { along: 50, width: 34 }] } };
+  }
+  const k = n % own.stations.length;
+  const stations = own.stations.map((s, i) => (i === k ? { ...s, width: s.width * (1 + 0.2 * u) } : s));
+  return { width: { ...own, stations } };
 }
 
 /** One number of one existing part scaled by up to 20% (the valve's axis moved instead, now and then). */

@@ -42,6 +42,22 @@ describe('solver worker API over a MessageChannel', () => {
     expect(domain.outer.xy.length).toBeGreaterThan(0);
   });
 
+  it('carries the passage depth to the worker and leaves the caller\'s depth lattice usable', async () => {
+    const { client, close } = channelClient();
+    open.push(close);
+    const plane = sampleDomain();
+    const values = new Float64Array(4).fill(32);
+    const domain: FlowDomain = { ...plane, depth: { kind: 'sampled', x0: 0, y0: 0, dx: 1, dy: 1, nx: 2, ny: 2, values } };
+    const flat = await client.solveLatest({ domain: plane, targetCells: 20_000, reading: null });
+    const deep = await client.solveLatest({ domain, targetCells: 20_000, reading: null });
+    expect(flat?.ok && deep?.ok).toBe(true);
+    if (!flat?.ok || !deep?.ok) return;
+    // A constant depth of 32 multiplies the conductance by 32 [derived].
+    expect(deep.conductance / flat.conductance).toBeCloseTo(32, 6);
+    expect(values.length).toBe(4);
+    expect(values[3]).toBe(32);
+  });
+
   it('carries the walls thinner than a cell: none on the sample, the divider on a divided channel', async () => {
     const { client, close } = channelClient();
     open.push(close);
