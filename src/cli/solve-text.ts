@@ -35,7 +35,8 @@ export function solveReportLines(report: SolveReport): string[] {
     `  tightest section ahead of the valve: ${tightestText(report, f)}`,
     `  least area ahead of the valve: ${leastAreaText(report, f)}`,
     `  port volume: ${volumeText(report)} (the port and bowl above the deck)`,
-    `  slow share: ${percent(report.slowShare)} of the port and bowl, ${percent(report.portSlowShare)} ahead of the valve (the test bore is not judged)`,
+    `  slow share${report.model === 'plane' ? '' : ' by volume'}: ${percent(report.slowShare)} of the port and bowl, ` +
+      `${percent(report.portSlowShare)} ahead of the valve (the test bore is not judged)`,
     ...report.thinWalls.map((wall) => `  warning: ${wall.note}`),
     '',
     'walls (fastest wall flow, as a speed ratio; where the flow likely leaves the wall, measured from its upstream end):',
@@ -143,6 +144,7 @@ function breathingLines(b: NonNullable<SolveReport['breathing']>, units: string)
     `breathing at ${len(b.lift)} lift (valve ${len(b.valveDiameter)}, L/D ${sig(b.ld, 3)}):`,
     `  curtain area ${area(b.curtainArea)}, least valve flow area ${area(b.minValveArea)} (stage ${b.stage}), ` +
       `throat ${area(b.throatArea)} (${sig(b.throatPct, 3)}% of the valve)`,
+    ...(b.port === null ? [] : [`  port area ranked: ${area(b.port.area)} (${b.port.source})`]),
     `  greatest restriction at this lift: ${b.greatest}` +
       (b.crossoverLift === null ? '' : `; it passes from the valve to the port side at ${len(b.crossoverLift)} lift`),
   ];

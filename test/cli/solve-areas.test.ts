@@ -66,3 +66,36 @@ describe('solve --json on a sample without a width profile', () => {
     expect(json.breathing.port).toBeNull();
   }, 30_000);
 });
+
+describe('solve on the sample with a width profile (samples/street-port-widths.json), through the file', () => {
+  const file = join(REPO, 'samples/street-port-widths.json');
+
+  it('is the width model: station areas, the least area ranked as the port area, the port volume in mm³', async () => {
+    const io = captureIO();
+    expect(await run(['solve', file, '--cells', '60000', '--json'], io)).toBe(0);
+    const json = JSON.parse(io.stdout.join('\n'));
+    expect(json.model).toBe('width');
+    expect(nonFinite(json)).toEqual([]);
+    // The runner's profile is 30-34 mm wide [the sample's own numbers], so the least area is its width across the
+    // section times about that; no station's mean depth passes the profile's widest, the 88 mm bore.
+    const ratio = json.leastArea.area / json.tightest.width;
+    expect(ratio).toBeGreaterThan(29);
+    expect(ratio).toBeLessThan(35);
+    for (const s of json.stations) expect(s.area / s.width).toBeLessThanOrEqual(88.001);
+    expect(Math.min(...json.stations.map((s: { area: number }) => s.area))).toBeLessThanOrEqual(json.leastArea.area);
+    expect(json.breathing.port).toEqual({ name: 'port (least area, width profile)', area: json.leastArea.area, source: 'solved least area of the width profile' });
+    expect(json.portVolume).toBeGreaterThan(30 * 4000); // more than the runner's plan area alone at its least width [rough]
+  }, 30_000);
+
+  it('names the model and prints the least area, the port volume and the port area ranked', async () => {
+    const io = captureIO();
+    expect(await run(['solve', file, '--cells', '60000'], io)).toBe(0);
+    const out = io.stdout.join('\n');
+    expect(io.stdout[2]).toBe('  model: width profile');
+    expect(out).toMatch(/\n {2}least area ahead of the valve: \d{4} mm², from /);
+    expect(out).toMatch(/\n {2}port volume: \d+ mm³ \(the port and bowl above the deck\)/);
+    expect(out).toMatch(/\n {2}slow share by volume: /);
+    expect(out).toMatch(/\n {2}port area ranked: \d+\.\d mm\^2 \(solved least area of the width profile\)/);
+    expect(io.stdout.at(-1)).toBe(WIDTH_FLOW_CAUTION);
+  }, 30_000);
+});
