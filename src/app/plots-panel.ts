@@ -70,7 +70,8 @@ export class PlotsPanel {
         { label: `width (${this.units})`, xy: width, colour: '#5ec8e5' },
         { label: 'mean speed ratio', xy: speed, colour: '#e8a33d', axis: 'right' },
       ],
-      marks: t ? [{ x: t.distanceFromInlet, label: 'tightest' }] : [],
+      // with a depth the station marked is the one of least area, not always the narrowest in the section
+      marks: t ? [{ x: t.distanceFromInlet, label: this.reading?.model === 'plane' ? 'tightest' : 'least area' }] : [],
     });
   }
 
