@@ -7,7 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { run } from '../../src/cli/main.ts';
 import { captureIO, REPO } from '../cli/helpers.ts';
 import { uBendFile } from '../study/drawn-shapes.ts';
-import { CHECK_MS, openApp, startApp, waitForFullSolves, type AppPage, type AppSession } from './app-session.ts';
+import { CHECK_MS, openApp, solveCount, startApp, waitForFullSolves, type AppPage, type AppSession } from './app-session.ts';
 
 /** The app opens on this file (src/main.ts) at its own grid detail, the command's default grid too. */
 const SAMPLE = join(REPO, 'samples/short-side-compare.json');
@@ -69,6 +69,32 @@ describe('app and command on the same file', () => {
     expect(await cell('least-area')).toBe(`${sig4(json.leastArea!.area)} mm² per mm of depth`);
     expect(await cell('port-volume')).toBe(`${sig4(json.portVolume)} mm³ per mm of depth`);
     expect(await page.locator('#plots canvas[data-plot="csa"]').count()).toBe(1);
+    expect(app.problems).toEqual([]);
+  }, CHECK_MS);
+});
+
+describe('app and command on the sample with a width profile', () => {
+  it('name the width model and show the same conductance, least area, port volume and ranked port area', async () => {
+    const file = join(REPO, 'samples/street-port-widths.json');
+    const io = captureIO();
+    expect(await run(['solve', file, '--json'], io), io.stderr.join('\n')).toBe(0);
+    const json = JSON.parse(io.stdout.join('\n')) as SolvedJson & { breathing: { port: { name: string; area: number } } };
+    const { page } = app;
+    const solved = await solveCount(page, 'full');
+    const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.click('#open-button')]);
+    await chooser.setFiles({ name: 'street-port-widths.json', mimeType: 'application/json', buffer: readFileSync(file) });
+    await waitForFullSolves(page, solved + 1);
+    const cell = (key: string) => page.locator(`#readings [data-reading="${key}"]`).innerText();
+    const sig4 = (v: number) => String(Number(v.toPrecision(4)));
+    expect(json.model).toBe('width');
+    expect(await cell('model')).toBe('width profile');
+    expect(await cell('conductance')).toBe(`${sig4(json.conductance)} mm (width profile)`);
+    expect(await cell('least-area')).toBe(`${sig4(json.leastArea!.area)} mm²`);
+    expect(await cell('port-volume')).toBe(`${sig4(json.portVolume)} mm³`);
+    // the breathing panel ranks the same solved least area as the command (to the panel's 0.1 mm²)
+    const breathing = await page.locator('#breathing tr').allInnerTexts();
+    const port = breathing.find((r) => r.startsWith(json.breathing.port.name));
+    expect(port, breathing.join('\n')).toBe(`${json.breathing.port.name}\t${json.breathing.port.area.toFixed(1)} mm²`);
     expect(app.problems).toEqual([]);
   }, CHECK_MS);
 });
