@@ -75,7 +75,8 @@ const valve = median(() => valvePotential(domain, grid, phi.value, settings.valv
 const paths = median(() => downstreamWalls(result.walls, grid, phi.value));
 const valvePhi = valve.value;
 const valveWall = valvePhi === null ? null : { phi: valvePhi, name: settings.valveIslandName };
-const slow = median(() => slowZones(grid, result.phi, result.speedRatio, stations.value, settings.slowFraction, valvePhi, settings.deck));
+const depthAtCells = cellDepths(grid, domain.depth);
+const slow = median(() => slowZones(grid, result.phi, result.speedRatio, stations.value, settings.slowFraction, valvePhi, settings.deck, depthAtCells));
 const overWide = median(() => overWideStations(stations.value, valvePhi, settings.overWideThreshold, settings.overWideWindow));
 const walls = median(() => paths.value.map((p) => readWall(p, valveWall)).filter((w): w is WallReading => w !== null));
 const detach = median(() => wallDetachments(paths.value, settings));
