@@ -104,16 +104,17 @@ function conductanceText(report: SolveReport): string {
 function leastAreaText(report: SolveReport, f: PlaceFormat): string {
   const a = report.leastArea;
   if (a === null) return 'none found';
-  const unit = report.units === 'mm' ? 'mm²' : 'in²';
-  const per = report.model === 'plane' ? ` per ${report.units === 'mm' ? 'mm' : 'in'} of depth` : '';
-  return `${sig(a.area, 4)} ${unit}${per}, from ${f.at(a.x1, a.y1)} to ${f.at(a.x2, a.y2)}`;
+  return `${sig(a.area, 4)} ${report.units === 'mm' ? 'mm²' : 'in²'}${perDepth(report)}, from ${f.at(a.x1, a.y1)} to ${f.at(a.x2, a.y2)}`;
 }
 
 /** mm³ or in³, read per unit depth in the plane model. */
 function volumeText(report: SolveReport): string {
-  const unit = report.units === 'mm' ? 'mm³' : 'in³';
-  const per = report.model === 'plane' ? ` per ${report.units === 'mm' ? 'mm' : 'in'} of depth` : '';
-  return `${sig(report.portVolume, 4)} ${unit}${per}`;
+  return `${sig(report.portVolume, 4)} ${report.units === 'mm' ? 'mm³' : 'in³'}${perDepth(report)}`;
+}
+
+/** " per mm of depth" (or in) in the plane model, where an area is a width and a volume an area; else nothing. */
+function perDepth(report: SolveReport): string {
+  return report.model === 'plane' ? ` per ${report.units === 'mm' ? 'mm' : 'in'} of depth` : '';
 }
 
 function probeText(probe: ProbeReport): string {

@@ -50,6 +50,15 @@ describe('a hand-built width model: channel 40 x 10 mm, width 20 mm at the inlet
     expect(lines.find((l) => l.startsWith('  conductance'))).toMatch(/^ {2}conductance: \d+(\.\d+)? mm \(flux per unit potential drop\)$/);
     expect(lines.at(-1)).toBe(WIDTH_FLOW_CAUTION);
   });
+
+  it('prints in² and in³ for an inch file, and per inch of depth in the plane model', () => {
+    const inch = solveReportLines({ ...report, units: 'inch' });
+    expect(inch).toContain('  port volume: 6000 in³ (the port and bowl above the deck)');
+    const plane = solveReportLines({ ...report, units: 'inch', model: 'plane' });
+    expect(plane).toContain('  port volume: 6000 in³ per in of depth (the port and bowl above the deck)');
+    expect(plane.find((l) => l.startsWith('  least area'))).toMatch(/ in² per in of depth, from /);
+    expect(plane[2]).toBe('  model: plane, per unit depth');
+  });
 });
 
 describe('solve --json on a sample without a width profile', () => {
