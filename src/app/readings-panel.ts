@@ -4,6 +4,7 @@ import type { Units } from '../document/types.ts';
 import { MODEL_WORDS, type Finding, type FlowReading } from '../solver/reading/index.ts';
 import type { FieldReply } from '../workers/protocol.ts';
 import { heading, readingTable, type ReadingRow } from './panel-table.ts';
+import { stationAreas } from './station-areas.ts';
 
 export interface ReadingsHooks {
   /** A finding was clicked: zoom the view to its place. */
@@ -32,7 +33,10 @@ export class ReadingsPanel {
     const model = reading?.model ?? 'plane';
     if (reading) rows.push(['slow share', `${(100 * reading.slow.share).toFixed(1)}% of the port and bowl${model === 'plane' ? '' : ' by volume'}`, 'slow-share']);
     rows.push(['conductance', model === 'plane' ? `${reply.conductance.toFixed(4)} (per unit depth)` : `${sig(reply.conductance)} ${label} (${MODEL_WORDS[model]})`, 'conductance']);
-    this.host.replaceChildren(heading('Readings'), readingTable(rows), ...this.findings(reading?.findings ?? []));
+    // the stations' table stays open across solves once opened
+    const open = this.host.querySelector('details[data-reading="station-areas"]')?.hasAttribute('open') ?? false;
+    const stations = reading && reading.stations.length > 0 ? [stationAreas(reading, units, open)] : [];
+    this.host.replaceChildren(heading('Readings'), readingTable(rows), ...stations, ...this.findings(reading?.findings ?? []));
   }
 
   showStale(message: string): void {

@@ -18,6 +18,7 @@ interface SolvedJson {
   readonly tightest: { readonly width: number } | null;
   readonly model: string;
   readonly leastArea: { readonly area: number } | null;
+  readonly stations: readonly { readonly area: number }[];
   readonly portVolume: number;
   readonly findings: readonly string[];
   readonly walls: readonly { readonly name: string; readonly peakSpeedRatio: number }[];
@@ -91,6 +92,12 @@ describe('app and command on the sample with a width profile', () => {
     expect(await cell('conductance')).toBe(`${sig4(json.conductance)} mm (width profile)`);
     expect(await cell('least-area')).toBe(`${sig4(json.leastArea!.area)} mm²`);
     expect(await cell('port-volume')).toBe(`${sig4(json.portVolume)} mm³`);
+    // the stations' table: one row a station, the least area marked with the command's number
+    const table = page.locator('#readings details[data-reading="station-areas"]');
+    await table.locator('summary').click();
+    const stationRows = await table.locator('tbody tr').allInnerTexts();
+    expect(stationRows).toHaveLength(json.stations.length);
+    expect(stationRows.filter((r) => r.includes('least'))).toEqual([expect.stringContaining(`least ${sig4(json.leastArea!.area)}`)]);
     // the breathing panel ranks the same solved least area as the command (to the panel's 0.1 mm²)
     const breathing = await page.locator('#breathing tr').allInnerTexts();
     const port = breathing.find((r) => r.startsWith(json.breathing.port.name));
