@@ -20,6 +20,7 @@ import { extendedPhi } from '../src/solver/reading/field.ts';
 import { findings } from '../src/solver/reading/findings.ts';
 import { readingSettings } from '../src/solver/reading/options.ts';
 import { overWideStations } from '../src/solver/reading/over-wide.ts';
+import { cellDepths, passageModel, portVolume } from '../src/solver/reading/port-volume.ts';
 import { RingIndex } from '../src/solver/reading/ring-index.ts';
 import { slowZones } from '../src/solver/reading/slow-zones.ts';
 import { buildStations, evenLevels, tightestStation } from '../src/solver/reading/stations.ts';
@@ -74,13 +75,15 @@ const valve = median(() => valvePotential(domain, grid, phi.value, settings.valv
 const paths = median(() => downstreamWalls(result.walls, grid, phi.value));
 const valvePhi = valve.value;
 const valveWall = valvePhi === null ? null : { phi: valvePhi, name: settings.valveIslandName };
-const slow = median(() => slowZones(grid, result.phi, result.speedRatio, stations.value, settings.slowFraction, valvePhi, settings.deck));
+const depthAtCells = cellDepths(grid, domain.depth);
+const slow = median(() => slowZones(grid, result.phi, result.speedRatio, stations.value, settings.slowFraction, valvePhi, settings.deck, depthAtCells));
 const overWide = median(() => overWideStations(stations.value, valvePhi, settings.overWideThreshold, settings.overWideWindow));
 const walls = median(() => paths.value.map((p) => readWall(p, valveWall)).filter((w): w is WallReading => w !== null));
 const detach = median(() => wallDetachments(paths.value, settings));
 const lines = median(() => traceStreamlines(domain, grid, result.phi, index.value, settings.streamlineCount));
+const volume = median(() => portVolume(grid, cellDepths(grid, domain.depth), settings.deck));
 const partial = {
-  stations: stations.value, valvePhi, tightest: tightestStation(stations.value, valvePhi), slow: slow.value, overWide: overWide.value,
+  model: passageModel(domain.depth), portVolume: volume.value, stations: stations.value, valvePhi, tightest: tightestStation(stations.value, valvePhi), slow: slow.value, overWide: overWide.value,
   walls: walls.value, detachments: detach.value, streamlines: lines.value,
 };
 const told = median(() => findings(partial, settings, grid.h));
@@ -94,6 +97,6 @@ console.log(`readFlow        ${fmt(whole.ms)}${fmt(whole.cpuMs)}`);
 console.log(`  first call    ${fmt(firstMs)}${fmt(firstCpuMs)}`);
 for (const [name, t] of [
   ['extended phi', phi], ['ring index', index], ['stations', stations], ['valve level', valve], ['wall paths', paths],
-  ['slow zones', slow], ['over-wide', overWide], ['wall readings', walls], ['detachment', detach],
+  ['slow zones', slow], ['port volume', volume], ['over-wide', overWide], ['wall readings', walls], ['detachment', detach],
   ['streamlines', lines], ['findings', told],
 ] as const) console.log(`  ${name.padEnd(14)}${fmt(t.ms)}${fmt(t.cpuMs)}`);

@@ -67,6 +67,8 @@ const plots = new PlotsPanel(byId('plots'));
 const widthEditing = mountWidthEditing({ panel: byId('width'), strip: byId('width-strip-host') }, store, (m, level) => status.show(m, level));
 const picture = new FlowPicture(view, settings, () => store.doc.units);
 let lastReply: FieldReply | null = null;
+/** Least area ahead of the valve of the last full solve under a width profile (document units squared): the port area ranked. */
+let solvedLeastArea: number | undefined;
 let editTime = 0;
 /** True from the first drag step until the next edit of another kind (the release). */
 let dragging = false;
@@ -83,6 +85,7 @@ const live = new LiveSolve(pool.live, {
       readings.show(reply, store.doc.units, ms);
       if (reply.reading) plots.show(reply.reading, store.doc.units);
       if (reply.reading) widthEditing.solved(reply.reading.stations);
+      showSolvedPortArea(reply);
       readings.clearStale();
       status.clearErrors();
       showThinWalls(reply);
@@ -97,6 +100,14 @@ const live = new LiveSolve(pool.live, {
   },
   onWorkerNote: (message, level) => status.show(message, level),
 });
+
+/** Under a width profile the least area just solved is the port area the breathing ranking uses: show it when it changes. */
+function showSolvedPortArea(reply: FieldReply): void {
+  const area = reply.reading?.model === 'width' ? reply.reading.tightest?.area : undefined;
+  if (area === solvedLeastArea) return;
+  solvedLeastArea = area;
+  showPartsNumbers(byId('breathing'), bench, store.doc, solvedLeastArea);
+}
 
 /** A wall thinner than a cell is solved as a wall one cell thick: say so after each full solve (previews may not resolve what the full grid does). */
 function showThinWalls(reply: FieldReply): void {
@@ -156,6 +167,7 @@ store.subscribe((doc, cause) => {
     settings.units = doc.units;
     settings.gridDetail = doc.settings.gridDetail;
   }
+  if (!benchOnly) solvedLeastArea = undefined; // until the new shape is solved
   if (!benchOnly) solve(doc, cause);
   // Mid-drag only the field and the handles follow the pointer; panels catch up when the drag ends.
   if (cause === 'drag') return;
@@ -165,7 +177,7 @@ store.subscribe((doc, cause) => {
   showDocument(doc);
   selectionPanel.show(doc, editor.selection);
   partsPanel.update(doc);
-  showPartsNumbers(byId('breathing'), bench, doc);
+  showPartsNumbers(byId('breathing'), bench, doc, solvedLeastArea);
   bench.showInputs(activeVariant(doc).bench, doc.activeVariant);
   if (cause === 'history' && unitsChanged) {
     refreshSettingsPanel();

@@ -11,12 +11,13 @@ type BenchPanel = ReturnType<typeof mountBenchPanel>;
 
 /**
  * Shows the active variant's breathing numbers and hands the bench calculator its areas, from one computation.
- * Only a measured port area is ranked: a round port guessed from the 2D width would decide the crossover on a guess
- * (the headless command does the same).
+ * The port area ranked is the least area the last full solve found under the variant's width profile
+ * (`solvedLeastArea`, document units squared), else a measured one; a round port guessed from the 2D width is never
+ * ranked, it would decide the crossover on a guess (the headless command does the same).
  */
-export function showPartsNumbers(host: HTMLElement, bench: BenchPanel, doc: PortDocument): void {
+export function showPartsNumbers(host: HTMLElement, bench: BenchPanel, doc: PortDocument, solvedLeastArea?: number): void {
   const parts = activeVariant(doc).parts;
-  const b = parts?.valve && parts.seat ? partsBreathing(parts, doc.units) : null;
+  const b = parts?.valve && parts.seat ? partsBreathing(parts, doc.units, { solvedLeastArea }) : null;
   feedBench(bench, doc, b);
   if (!parts || !b) return host.replaceChildren();
   const notes = partsNotes(parts, doc.units).map((n) => {

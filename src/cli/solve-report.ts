@@ -5,7 +5,7 @@ import { pointInRegion } from '../geometry/index.ts';
 import type { BreathingSummary } from '../parts/index.ts';
 import { probeFlow } from '../solver/probe.ts';
 import { thinWallNote } from '../solver/thin-wall-note.ts';
-import type { ReadingSummary } from '../solver/reading/index.ts';
+import type { PassageModel, ReadingSummary } from '../solver/reading/index.ts';
 import type { FlowDomain, SolveResult, ThinWall, WallSpeeds } from '../solver/types.ts';
 
 type Detachment = ReadingSummary['walls'][number]['detachment'];
@@ -53,12 +53,14 @@ export interface SolveReport {
   readonly title: string;
   readonly variant: string;
   readonly units: Units;
+  /** "plane" (per unit depth) or "width" (the variant's width profile as the passage depth). */
+  readonly model: PassageModel;
   readonly grid: { readonly nx: number; readonly ny: number; readonly cells: number; readonly solvedCells: number; readonly spacing: number };
   /** False when the iteration cap came before the tolerance. */
   readonly converged: boolean;
   readonly iterations: number;
   readonly residual: number;
-  /** Flux per unit potential drop, per unit depth (dimensionless in 2D). */
+  /** Flux per unit potential drop: per unit depth (dimensionless) in the plane model, document units with a width profile. */
   readonly conductance: number;
   readonly fluxImbalance: number;
   /** Walls thinner than a grid cell, one per wall name; empty when there are none. */
@@ -68,6 +70,10 @@ export interface SolveReport {
   readonly peak: SolveResult['peak'];
   readonly probes: readonly ProbeReport[];
   readonly tightest: ReadingSummary['tightest'];
+  /** The station of least area ahead of the valve: document units squared (per unit depth in the plane model). */
+  readonly leastArea: ReadingSummary['leastArea'];
+  /** Depth integrated over the port and bowl above the deck: document units cubed (per unit depth in the plane model). */
+  readonly portVolume: number;
   readonly slowShare: number;
   readonly portSlowShare: number;
   readonly findings: readonly string[];
@@ -83,6 +89,7 @@ export interface SolvedVariant {
   readonly title: string;
   readonly variant: string;
   readonly units: Units;
+  readonly model: PassageModel;
   readonly domain: FlowDomain;
   readonly result: SolveResult;
   readonly summary: ReadingSummary;
@@ -99,6 +106,7 @@ export function buildSolveReport(solved: SolvedVariant, probes: readonly (readon
     title: solved.title,
     variant: solved.variant,
     units: solved.units,
+    model: solved.model,
     grid: { nx: grid.nx, ny: grid.ny, cells: grid.nx * grid.ny, solvedCells: countFinite(result.phi), spacing: grid.h },
     converged: solved.converged,
     iterations: result.iterations,
@@ -110,6 +118,8 @@ export function buildSolveReport(solved: SolvedVariant, probes: readonly (readon
     peak: result.peak,
     probes: probes.map(([x, y]) => probeReport(solved.domain, result, x, y)),
     tightest: summary.tightest,
+    leastArea: summary.leastArea,
+    portVolume: summary.portVolume,
     slowShare: summary.slowShare,
     portSlowShare: summary.portSlowShare,
     findings: summary.findings,

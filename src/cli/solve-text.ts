@@ -1,11 +1,15 @@
 /** The readable summary `portwright solve` prints: the solve, the flow reading, each wall, findings and probes. */
 
-import type { DetachmentMethod } from '../solver/reading/index.ts';
+import { MODEL_WORDS, type DetachmentMethod } from '../solver/reading/index.ts';
 import type { ProbeReport, SolveReport, WallReport } from './solve-report.ts';
 
 /** Printed last, every time: what the numbers are and are not. */
 export const IDEAL_FLOW_CAUTION =
   'Caution: ideal 2D flow (no viscosity, per unit depth); confirm on a flow bench before removing metal.';
+
+/** The caution for a variant solved through its width profile. */
+export const WIDTH_FLOW_CAUTION =
+  'Caution: ideal flow (no viscosity) through the section weighted by its width profile; confirm on a flow bench before removing metal.';
 
 const METHOD_WORDS: Readonly<Record<DetachmentMethod, string>> = {
   thwaites: 'laminar layer, Thwaites',
@@ -20,15 +24,19 @@ export function solveReportLines(report: SolveReport): string[] {
   const lines = [
     report.title,
     `  variant: "${report.variant}", units: ${report.units}`,
+    `  model: ${MODEL_WORDS[report.model]}`,
     `  grid: ${g.nx} x ${g.ny} (${g.cells.toLocaleString('en-US')} cells, ${g.solvedCells.toLocaleString('en-US')} in the flow), ` +
       `spacing ${sig(g.spacing, 3)} ${report.units}`,
     `  solve: ${report.iterations} iterations, relative residual ${report.residual.toExponential(1)}` +
       (report.converged ? '' : ' (stopped at the iteration cap before reaching the tolerance)'),
-    `  conductance: ${sig(report.conductance, 4)} per unit depth (flux per unit potential drop)`,
+    `  conductance: ${conductanceText(report)} (flux per unit potential drop)`,
     `  flux imbalance: ${report.fluxImbalance.toExponential(1)} (worst station against the total)`,
     `  peak speed ratio: ${peakText(report.peak, f)}`,
     `  tightest section ahead of the valve: ${tightestText(report, f)}`,
-    `  slow share: ${percent(report.slowShare)} of the port and bowl, ${percent(report.portSlowShare)} ahead of the valve (the test bore is not judged)`,
+    `  least area ahead of the valve: ${leastAreaText(report, f)}`,
+    `  port volume: ${volumeText(report)} (the port and bowl above the deck)`,
+    `  slow share${report.model === 'plane' ? '' : ' by volume'}: ${percent(report.slowShare)} of the port and bowl, ` +
+      `${percent(report.portSlowShare)} ahead of the valve (the test bore is not judged)`,
     ...report.thinWalls.map((wall) => `  warning: ${wall.note}`),
     '',
     'walls (fastest wall flow, as a speed ratio; where the flow likely leaves the wall, measured from its upstream end):',
@@ -43,7 +51,7 @@ export function solveReportLines(report: SolveReport): string[] {
     lines.push('', 'probes (potential 1 at the inlet, 0 at the outlet):');
     for (const probe of report.probes) lines.push(`  ${f.at(probe.x, probe.y)}: ${probeText(probe)}`);
   }
-  lines.push('', IDEAL_FLOW_CAUTION);
+  lines.push('', report.model === 'plane' ? IDEAL_FLOW_CAUTION : WIDTH_FLOW_CAUTION);
   return lines;
 }
 
@@ -87,6 +95,28 @@ function tightestText(report: SolveReport, f: PlaceFormat): string {
   return `${f.dist(t.width)} wide, ${f.dist(t.distanceFromInlet)} from the inlet, from ${f.at(t.x1, t.y1)} to ${f.at(t.x2, t.y2)}`;
 }
 
+/** Plane: per unit depth (a number); with a depth the flux per unit potential drop is a length. */
+function conductanceText(report: SolveReport): string {
+  return report.model === 'plane' ? `${sig(report.conductance, 4)} per unit depth` : `${sig(report.conductance, 4)} ${report.units}`;
+}
+
+/** Areas in mm² or in², read per unit depth in the plane model. */
+function leastAreaText(report: SolveReport, f: PlaceFormat): string {
+  const a = report.leastArea;
+  if (a === null) return 'none found';
+  return `${sig(a.area, 4)} ${report.units === 'mm' ? 'mm²' : 'in²'}${perDepth(report)}, from ${f.at(a.x1, a.y1)} to ${f.at(a.x2, a.y2)}`;
+}
+
+/** mm³ or in³, read per unit depth in the plane model. */
+function volumeText(report: SolveReport): string {
+  return `${sig(report.portVolume, 4)} ${report.units === 'mm' ? 'mm³' : 'in³'}${perDepth(report)}`;
+}
+
+/** " per mm of depth" (or in) in the plane model, where an area is a width and a volume an area; else nothing. */
+function perDepth(report: SolveReport): string {
+  return report.model === 'plane' ? ` per ${report.units === 'mm' ? 'mm' : 'in'} of depth` : '';
+}
+
 function probeText(probe: ProbeReport): string {
   if (!probe.inFluid) return 'outside the fluid';
   if (probe.potential === undefined || probe.speedRatio === undefined) return 'no solved flow here (a pocket the flow does not reach)';
@@ -115,6 +145,7 @@ function breathingLines(b: NonNullable<SolveReport['breathing']>, units: string)
     `breathing at ${len(b.lift)} lift (valve ${len(b.valveDiameter)}, L/D ${sig(b.ld, 3)}):`,
     `  curtain area ${area(b.curtainArea)}, least valve flow area ${area(b.minValveArea)} (stage ${b.stage}), ` +
       `throat ${area(b.throatArea)} (${sig(b.throatPct, 3)}% of the valve)`,
+    ...(b.port === null ? [] : [`  port area ranked: ${area(b.port.area)} (${b.port.source})`]),
     `  greatest restriction at this lift: ${b.greatest}` +
       (b.crossoverLift === null ? '' : `; it passes from the valve to the port side at ${len(b.crossoverLift)} lift`),
   ];

@@ -3,7 +3,7 @@
 import { GeometryError } from '../geometry/index.ts';
 import { DEFAULT_MAX_ITERATIONS, DEFAULT_TOLERANCE, FlowSetupError } from '../solver/index.ts';
 import { PartsError, breathingSummary, partsNotes } from '../parts/index.ts';
-import { readingSummary } from '../solver/reading/index.ts';
+import { readingSummary, type FlowReading, type PassageModel } from '../solver/reading/index.ts';
 import { caseSetup, solveCase, StudyError, type CaseSetup, type SolvedCase } from '../study/index.ts';
 import { EXIT_OK, type CliIO, type Command } from './command.ts';
 import { UserError } from './errors.ts';
@@ -46,9 +46,17 @@ function solveVariant(options: SolveArgs, io: CliIO): SolvedVariant {
   const summary = readingSummary(reading);
   // Converged unless the cap came first with the residual still above the tolerance.
   const converged = result.iterations < DEFAULT_MAX_ITERATIONS || result.residual <= tolerance;
-  const breathing = breathingSummary(variant, document.units);
+  const model = solvedModel(setup, reading);
+  // Under a width profile the port area ranked is the least area the solve found (the breathing block names it).
+  const solvedLeastArea = model === 'width' && reading.tightest ? reading.tightest.area : undefined;
+  const breathing = breathingSummary(variant, document.units, { solvedLeastArea });
   const notes = variant.parts ? partsNotes(variant.parts, document.units).map((n) => n.message) : [];
-  return { title: document.title, variant: variant.name, units: document.units, domain, result, summary, converged, breathing, notes };
+  return { title: document.title, variant: variant.name, units: document.units, model, domain, result, summary, converged, breathing, notes };
+}
+
+/** The model the case was set up in, as the study names it; the reading's own (from the domain's depth) until it does. */
+function solvedModel(setup: CaseSetup & { readonly model?: PassageModel }, reading: FlowReading): PassageModel {
+  return setup.model ?? reading.model;
 }
 
 /** The case set up, or the porter's problem with it as a UserError naming the file (and the variant, for its geometry). */

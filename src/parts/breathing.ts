@@ -2,8 +2,9 @@
  * The breathing numbers of a variant's parts at its lift, in the document's units: head, throat and curtain areas,
  * the minimum valve flow area and its stage (Heywood 1988, sec. 6.3.1), the port area where known, the ranking of
  * restrictions and the lift where the greatest one passes from the valve to the port side. Computed in SI by
- * src/breathing. A 2D section gives a width, not an area: the port area is the porter's measured value, or else a
- * round port as wide as the section's tightest station, pi w^2 / 4, which is an assumption and is labelled so.
+ * src/breathing. A 2D section alone gives a width, not an area: the port area is the least area the solve found under
+ * the variant's width profile, else the porter's measured value, else a round port as wide as the section's tightest
+ * station, pi w^2 / 4, which is an assumption and is labelled so.
  */
 
 import type { Parts, Units } from '../document/types.ts';
@@ -14,7 +15,7 @@ import {
 import { metresPerUnit, seatCutSI, valveHeadSI } from './si.ts';
 
 /** Where the port area came from. */
-export type PortAreaSource = 'measured' | 'round-port assumption';
+export type PortAreaSource = 'solved least area of the width profile' | 'measured' | 'round-port assumption';
 
 /** A port area and how it was had; `area` in document units squared. */
 export interface PortAreaUsed {
@@ -53,6 +54,12 @@ export interface PartsBreathing {
 }
 
 export interface BreathingOptions {
+  /**
+   * Least area ahead of the valve the solve found under the variant's width profile, document units squared (the
+   * reading's tightest station's area). Give it only when the variant has a width profile: it then is the port area
+   * ranked, before a measured one.
+   */
+  readonly solvedLeastArea?: number;
   /** Width of the tightest station of the solved section, document units: used for the round-port assumption. */
   readonly tightestWidth?: number;
   /** Lift to read at instead of the valve's own, document units. */
@@ -61,9 +68,16 @@ export interface BreathingOptions {
 
 export const MEASURED_PORT_NAME = 'port (measured)';
 export const ROUND_PORT_NAME = 'port (round-port assumption)';
+export const SOLVED_PORT_NAME = 'port (least area, width profile)';
 
-/** The port area used in the ranking: measured if given, else a round port of the tightest width, else none. */
-export function portAreaUsed(parts: Parts, tightestWidth?: number): PortAreaUsed | null {
+/**
+ * The port area used in the ranking: the solved least area under a width profile if given, else the measured one,
+ * else a round port of the tightest width, else none.
+ */
+export function portAreaUsed(parts: Parts, tightestWidth?: number, solvedLeastArea?: number): PortAreaUsed | null {
+  if (solvedLeastArea !== undefined && solvedLeastArea > 0) {
+    return { name: SOLVED_PORT_NAME, area: solvedLeastArea, source: 'solved least area of the width profile' };
+  }
   if (parts.port) return { name: MEASURED_PORT_NAME, area: parts.port.tightestArea, source: 'measured' };
   if (tightestWidth !== undefined && tightestWidth > 0) {
     return { name: ROUND_PORT_NAME, area: circleArea(tightestWidth), source: 'round-port assumption' };
@@ -79,7 +93,7 @@ export function partsBreathing(parts: Parts, units: Units, options: BreathingOpt
   const head = valveHeadSI(valve, units), cut = seatCutSI(valve, seat, units);
   const lift = options.lift ?? valve.lift;
   const liftM = lift * k;
-  const port = portAreaUsed(parts, options.tightestWidth);
+  const port = portAreaUsed(parts, options.tightestWidth, options.solvedLeastArea);
   const portAreasM2 = port ? { [port.name]: port.area * k2 } : {};
   const flow = minValveFlowArea(liftM, head, cut);
   const stages = stageBoundaries(head, cut);

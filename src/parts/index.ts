@@ -10,7 +10,7 @@ export { deckLine, type DeckLine } from './deck.ts';
 export { anchorIndices, pocketAnchors, type PocketAnchors } from './anchors.ts';
 export { partsNotes, SHROUD_CLEARANCE_SHARE, type PartsNote, type PartsNoteOptions } from './notes.ts';
 export {
-  partsBreathing, portAreaUsed, MEASURED_PORT_NAME, ROUND_PORT_NAME,
+  partsBreathing, portAreaUsed, MEASURED_PORT_NAME, ROUND_PORT_NAME, SOLVED_PORT_NAME,
   type BreathingOptions, type PartsBreathing, type PortAreaUsed, type PortAreaSource,
 } from './breathing.ts';
 export { breathingSummary, type BreathingSummary } from './summary.ts';

@@ -8,7 +8,7 @@ import {
   crossoverLift, curtainArea, greatestRestriction, liftOverDiameter, minValveFlowArea, netThroatArea, stageBoundaries,
   throatArea, valveHeadArea,
 } from '../../src/breathing/index.ts';
-import { partsBreathing, ROUND_PORT_NAME, MEASURED_PORT_NAME } from '../../src/parts/breathing.ts';
+import { partsBreathing, ROUND_PORT_NAME, MEASURED_PORT_NAME, SOLVED_PORT_NAME } from '../../src/parts/breathing.ts';
 import { breathingSummary } from '../../src/parts/summary.ts';
 import { PARTS_40, SEAT_91, VALVE_40, assertInDelta } from './helpers.ts';
 
@@ -88,6 +88,19 @@ describe('breathing numbers of the parts', () => {
     expect(partsBreathing({ valve: VALVE_40 }, 'mm')).toBeNull();
   });
 
+  it('rank the least area solved under a width profile before a measured area, and say so', () => {
+    const solved = partsBreathing({ ...PARTS_40, port: { tightestArea: 2000 } }, 'mm', { lift: 12, solvedLeastArea: 700 })!;
+    expect(solved.port).toEqual({ name: SOLVED_PORT_NAME, area: 700, source: 'solved least area of the width profile' });
+    expect(solved.greatest).toBe(SOLVED_PORT_NAME);
+    expect(solved.ranking.map((r) => r.name)).not.toContain(MEASURED_PORT_NAME);
+    // the same number typed as a measured area ranks the same: only the name and source differ
+    const typed = partsBreathing({ ...PARTS_40, port: { tightestArea: 700 } }, 'mm', { lift: 12 })!;
+    expect(solved.crossoverLift).toBe(typed.crossoverLift);
+    const summary = breathingSummary({ name: 'v', section: sample().section, parts: PARTS_40 }, 'mm', { solvedLeastArea: 700 })!;
+    expect(summary.port).toEqual(solved.port);
+    expect(summary.greatest).toBe(partsBreathing(PARTS_40, 'mm', { solvedLeastArea: 700 })!.greatest);
+  });
+
   it('find the lift where the greatest restriction leaves the valve: the valve area equals the port side there', () => {
     const port = { tightestArea: 800 };
     const b = partsBreathing({ ...PARTS_40, port }, 'mm')!;
@@ -114,7 +127,8 @@ describe('the street samples', () => {
 
   it('summarise for solve --json in the document units, as plain JSON', () => {
     const summary = breathingSummary(sample(), 'mm')!;
-    expect(Object.keys(summary)).toEqual(['valveDiameter', 'lift', 'ld', 'curtainArea', 'minValveArea', 'stage', 'throatArea', 'throatPct', 'greatest', 'crossoverLift']);
+    expect(Object.keys(summary)).toEqual(['valveDiameter', 'lift', 'ld', 'curtainArea', 'minValveArea', 'stage', 'throatArea', 'throatPct', 'port', 'greatest', 'crossoverLift']);
+    expect(summary.port).toBeNull();
     expect(JSON.parse(JSON.stringify(summary))).toEqual(summary);
     expect(summary.valveDiameter).toBe(46);
     expect(summary.lift).toBe(10);

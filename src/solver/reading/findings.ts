@@ -1,7 +1,7 @@
 /** Findings: the reading boiled down to a ranked list of plain sentences, each with a place to look. */
 import type { ReadingSettings } from './options.ts';
 import type { Finding, FlowReading, WallDetachmentReading, WallReading } from './types.ts';
-import { lengthText, opening, percentText, ratioText } from './wording.ts';
+import { areaText, lengthText, opening, percentText, ratioText } from './wording.ts';
 
 /** Slow zones smaller than this share of the port are not worth a line. */
 const SLOW_SHARE_WORTH_TELLING = 0.01;
@@ -38,14 +38,19 @@ export function findings(reading: Omit<FlowReading, 'findings'>, settings: Readi
 
 type PartReading = Omit<FlowReading, 'findings'>;
 
-function tightestFinding({ tightest, valvePhi }: PartReading, settings: ReadingSettings, h: number): Finding[] {
+/** Plane: the narrowest section by its width; with a depth, the least area, with its width in the section beside it. */
+function tightestFinding({ tightest, valvePhi, model }: PartReading, settings: ReadingSettings, h: number): Finding[] {
   if (!tightest) return [];
   const u = settings.units;
-  const where = valvePhi !== null ? 'Tightest section ahead of the valve' : 'Tightest section';
+  const ahead = valvePhi !== null ? ' ahead of the valve' : '';
+  const from = `${lengthText(tightest.distanceFromInlet, u)} from the manifold face`;
+  const text = model === 'plane'
+    ? `Tightest section${ahead}: ${lengthText(tightest.width, u)} wide, ${from}`
+    : `Least area${ahead}: ${areaText(tightest.area, u)} (${lengthText(tightest.width, u)} across the section), ${from}`;
   return [{
     score: 0.6,
     kind: 'tightest',
-    text: `${where}: ${lengthText(tightest.width, u)} wide, ${lengthText(tightest.distanceFromInlet, u)} from the manifold face`,
+    text,
     x: 0.5 * (tightest.x1 + tightest.x2),
     y: 0.5 * (tightest.y1 + tightest.y2),
     radius: Math.max(0.75 * tightest.width, 4 * h),

@@ -5,6 +5,7 @@ import { extendedPhi } from './field.ts';
 import { findings } from './findings.ts';
 import { readingSettings } from './options.ts';
 import { overWideStations } from './over-wide.ts';
+import { cellDepths, passageModel, portVolume } from './port-volume.ts';
 import { RingIndex } from './ring-index.ts';
 import { slowZones } from './slow-zones.ts';
 import { buildStations, evenLevels, tightestStation } from './stations.ts';
@@ -17,9 +18,12 @@ import type { FlowReading, ReadingOptions, WallReading } from './types.ts';
 export type * from './types.ts';
 export { ReadingSettingError } from './errors.ts';
 export { readingSummary, type ReadingSummary } from './summary.ts';
+export { passageModel } from './port-volume.ts';
+export { MODEL_WORDS } from './wording.ts';
 
 /**
- * Reads a solved flow: equipotential stations and the tightest one ahead of the valve, slow zones, over-wide
+ * Reads a solved flow: equipotential stations (with their areas under the domain's depth) and the one of least area
+ * ahead of the valve, the port volume, slow zones, over-wide
  * stations, the speed peak and fall on every wall, where the boundary layer likely leaves each wall, equal-flux
  * streamlines and a ranked list of findings. Pure computation, same input same output.
  * Throws ReadingSettingError for an option out of range (see ReadingOptions for every default).
@@ -34,11 +38,14 @@ export function readFlow(domain: FlowDomain, result: SolveResult, options: Readi
   const valvePhi = valvePotential(domain, grid, phi, settings.valveIslandName);
   const paths = downstreamWalls(result.walls, grid, phi);
   const valve = valvePhi === null ? null : { phi: valvePhi, name: settings.valveIslandName };
+  const depth = cellDepths(grid, domain.depth);
   const partial = {
+    model: passageModel(domain.depth),
     stations,
     valvePhi,
     tightest: tightestStation(stations, valvePhi),
-    slow: slowZones(grid, result.phi, result.speedRatio, stations, settings.slowFraction, valvePhi, settings.deck),
+    portVolume: portVolume(grid, depth, settings.deck),
+    slow: slowZones(grid, result.phi, result.speedRatio, stations, settings.slowFraction, valvePhi, settings.deck, depth),
     overWide: overWideStations(stations, valvePhi, settings.overWideThreshold, settings.overWideWindow),
     walls: paths.map((path) => readWall(path, valve)).filter((w): w is WallReading => w !== null),
     detachments: wallDetachments(paths, settings),

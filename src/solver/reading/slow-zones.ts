@@ -6,15 +6,16 @@ import type { DeckLine, SlowZones, Station } from './types.ts';
 /**
  * Marks solved cells whose speed ratio is below `slowFraction` times their station's mean speed ratio. A cell's
  * station mean comes from its potential, linear between the two stations around it (held constant beyond the first
- * and last). Shares are fluid-area weighted (cell fraction); the port share counts only cells with potential above
- * `valvePhi` (every cell when it is null). Cells whose centre lies past `deck` (the test bore) are not judged: never
- * marked and left out of both shares.
+ * and last). Shares are fluid-area weighted (cell fraction), times the depth at the cell centre when there is one
+ * (shares of the volume); the port share counts only cells with potential above `valvePhi` (every cell when it is
+ * null). Cells whose centre lies past `deck` (the test bore) are not judged: never marked and left out of both shares.
  * @param phi cell potential, row-major i + j * nx, NaN where not solved
  * @param speedRatio cell speed ratio, row-major i + j * nx, NaN where not solved
+ * @param depth passage depth at cell centres (cellDepths), row-major i + j * nx; null for unit depth
  */
 export function slowZones(
   grid: CutGrid, phi: Float64Array, speedRatio: Float64Array, stations: readonly Station[], slowFraction: number, valvePhi: number | null,
-  deck: DeckLine | null = null,
+  deck: DeckLine | null = null, depth: Float64Array | null = null,
 ): SlowZones {
   const { nx, ny, h, x0, y0 } = grid;
   const mask = new Uint8Array(nx * ny);
@@ -28,9 +29,10 @@ export function slowZones(
   for (let j = 0; j < ny; j++) {
     for (let i = 0; i < nx; i++) {
       const c = i + j * nx;
-      const f = grid.cellFraction[c];
+      const fraction = grid.cellFraction[c];
+      const f = depth === null ? fraction : fraction * depth[c];
       const u = speedRatio[c], p = phi[c];
-      if (!(f > 0) || !Number.isFinite(p) || !Number.isFinite(u)) continue;
+      if (!(fraction > 0) || !Number.isFinite(p) || !Number.isFinite(u)) continue;
       if (deck !== null && pastDeck(deck, x0 + (i + 0.5) * h, y0 + (j + 0.5) * h) > 0) continue;
       const inPort = valvePhi === null || p > valvePhi;
       area += f;

@@ -55,15 +55,18 @@ export function evenLevels(count: number): number[] {
   return Array.from({ length: count }, (_, k) => 1 - (k + 0.5) / count);
 }
 
-/** The narrowest judged station with potential above `valvePhi` (any when it is null); null when there is none. */
+/**
+ * The judged station of least area with potential above `valvePhi` (any when it is null); null when there is none.
+ * Without a depth a station's area is its width, so this is the narrowest.
+ */
 export function tightestStation(stations: readonly Station[], valvePhi: number | null): TightestStation | null {
   let best = -1;
   stations.forEach((s, k) => {
-    if (s.judged && (valvePhi === null || s.phi > valvePhi) && (best < 0 || s.width < stations[best].width)) best = k;
+    if (s.judged && (valvePhi === null || s.phi > valvePhi) && (best < 0 || s.area < stations[best].area)) best = k;
   });
   if (best < 0) return null;
-  const { width, x1, y1, x2, y2, distanceFromInlet } = stations[best];
-  return { index: best, width, x1, y1, x2, y2, distanceFromInlet };
+  const { width, area, x1, y1, x2, y2, distanceFromInlet } = stations[best];
+  return { index: best, width, area, x1, y1, x2, y2, distanceFromInlet };
 }
 
 /** Length-weighted centre of the inlet segments, document units. */

@@ -1,10 +1,17 @@
 /** A JSON-ready digest of a flow reading, for the headless command's --json output. */
-import type { DetachmentMethod, FlowReading } from './types.ts';
+import type { DetachmentMethod, FlowReading, PassageModel } from './types.ts';
 
 /** Plain numbers and strings only; every number rounded to six significant figures so that output is stable. */
 export interface ReadingSummary {
-  readonly stations: { phi: number; width: number; meanSpeedRatio: number; distanceFromInlet: number }[];
+  /** 'plane' (per unit depth) or the passage depth the flow was solved with */
+  readonly model: PassageModel;
+  /** area: the depth integrated across the station, document units squared (the width times 1 in the plane model) */
+  readonly stations: { phi: number; width: number; area: number; meanSpeedRatio: number; distanceFromInlet: number }[];
   readonly tightest: { width: number; x1: number; y1: number; x2: number; y2: number; distanceFromInlet: number } | null;
+  /** The station of least area ahead of the valve (the tightest), its area (document units squared) and span ends. */
+  readonly leastArea: { area: number; x1: number; y1: number; x2: number; y2: number } | null;
+  /** Depth integrated over the port and bowl above the deck, document units cubed (squared in the plane model). */
+  readonly portVolume: number;
   /** slow share of the judged section: all of it, or the part above the deck when the reading was given one */
   readonly slowShare: number;
   /** slow share of the port ahead of the valve */
@@ -23,10 +30,13 @@ export interface ReadingSummary {
 export function readingSummary(reading: FlowReading): ReadingSummary {
   const t = reading.tightest;
   return {
+    model: reading.model,
     stations: reading.stations.map((s) => ({
-      phi: round(s.phi), width: round(s.width), meanSpeedRatio: round(s.meanSpeedRatio), distanceFromInlet: round(s.distanceFromInlet),
+      phi: round(s.phi), width: round(s.width), area: round(s.area), meanSpeedRatio: round(s.meanSpeedRatio), distanceFromInlet: round(s.distanceFromInlet),
     })),
     tightest: t ? { width: round(t.width), x1: round(t.x1), y1: round(t.y1), x2: round(t.x2), y2: round(t.y2), distanceFromInlet: round(t.distanceFromInlet) } : null,
+    leastArea: t ? { area: round(t.area), x1: round(t.x1), y1: round(t.y1), x2: round(t.x2), y2: round(t.y2) } : null,
+    portVolume: round(reading.portVolume),
     slowShare: round(reading.slow.share),
     portSlowShare: round(reading.slow.portShare),
     walls: reading.detachments.map((d) => {

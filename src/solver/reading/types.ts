@@ -82,8 +82,11 @@ export interface Station {
   readonly judged: boolean;
 }
 
-/** The narrowest station upstream of the valve: its width, span ends and distance from the inlet (see Station). */
-export interface TightestStation extends Pick<Station, 'width' | 'x1' | 'y1' | 'x2' | 'y2' | 'distanceFromInlet'> {
+/**
+ * The station of least area upstream of the valve (the narrowest without a depth, where area = width): its width,
+ * area, span ends and distance from the inlet (see Station).
+ */
+export interface TightestStation extends Pick<Station, 'width' | 'area' | 'x1' | 'y1' | 'x2' | 'y2' | 'distanceFromInlet'> {
   /** index into FlowReading.stations */
   readonly index: number;
 }
@@ -94,7 +97,10 @@ export interface SlowZones {
    * Cells whose centre lies past the deck (see ReadingOptions.deck) are never marked.
    */
   readonly mask: Uint8Array;
-  /** Slow fluid area / solved fluid area over the judged section (all of it without a deck; cell fraction weighted), 0..1. */
+  /**
+   * Slow fluid area / solved fluid area over the judged section (all of it without a deck; cell fraction weighted;
+   * with a passage depth, cell fraction times the depth at the cell centre: a share of the volume), 0..1.
+   */
   readonly share: number;
   /** The same share over the port only (judged cells upstream of the valve; all judged cells when there is no valve). */
   readonly portShare: number;
@@ -174,11 +180,22 @@ export interface Finding {
   readonly radius: number;
 }
 
+/** The model the flow was solved in: plane (per unit depth), a width profile (sampled depth), or round about an axis. */
+export type PassageModel = 'plane' | 'width' | 'axisymmetric';
+
 export interface FlowReading {
+  /** Which passage depth the solve had (FlowDomain.depth): none is 'plane', sampled is 'width'. */
+  readonly model: PassageModel;
   readonly stations: readonly Station[];
   /** Potential above which a station lies upstream of the valve (the valve head's highest wall potential), or null without a valve. */
   readonly valvePhi: number | null;
+  /** The station of least area ahead of the valve (judged stations only); with a depth, chosen by area. */
   readonly tightest: TightestStation | null;
+  /**
+   * Integral of the depth over the fluid above the deck (the port and bowl, not the test bore): document units cubed;
+   * without a depth the fluid area times a unit depth, document units squared.
+   */
+  readonly portVolume: number;
   readonly slow: SlowZones;
   readonly overWide: readonly OverWideStation[];
   readonly walls: readonly WallReading[];

@@ -1,11 +1,25 @@
 /** Numbers in porter's words: lengths with units, speed ratios and percentages. */
-import type { LengthUnits } from './types.ts';
+import type { LengthUnits, PassageModel } from './types.ts';
+
+/** The model in words, as the app's readings and the command's report name it. */
+export const MODEL_WORDS: Readonly<Record<PassageModel, string>> = {
+  plane: 'plane, per unit depth',
+  width: 'width profile',
+  axisymmetric: 'axisymmetric, round about the axis',
+};
 
 /** A length in document units with its unit: "23.1 mm", "0.91 in". */
 export function lengthText(value: number, units: LengthUnits): string {
   const size = Math.abs(value);
   if (units === 'inch') return `${value.toFixed(size >= 10 ? 1 : size >= 1 ? 2 : 3)} in`;
   return `${value.toFixed(size >= 100 ? 0 : 1)} mm`;
+}
+
+/** An area in document units squared with its unit: "1240 mm²", "1.92 in²". */
+export function areaText(value: number, units: LengthUnits): string {
+  const size = Math.abs(value);
+  if (units === 'inch') return `${value.toFixed(size >= 10 ? 1 : size >= 1 ? 2 : 3)} in²`;
+  return `${value.toFixed(size >= 100 ? 0 : 1)} mm²`;
 }
 
 /** A speed ratio: "1.92". */

@@ -47,7 +47,11 @@ describe('depth b = 1 on the existing references', () => {
       expectRelative(s.area, a.stations[k].width, 1e-12);
       expectRelative(s.meanSpeedRatio, a.stations[k].meanSpeedRatio, 1e-12);
     });
-    expect(b.findings.map((f) => f.text)).toEqual(a.findings.map((f) => f.text));
+    // the same findings, except that a reading with a depth tells the tightest section by its area
+    const told = (r: typeof a) => r.findings.filter((f) => f.kind !== 'tightest').map((f) => f.text);
+    expect(told(b)).toEqual(told(a));
+    expect(b.findings.map((f) => f.kind)).toEqual(a.findings.map((f) => f.kind));
+    expect(b.tightest!.index).toBe(a.tightest!.index);
     expect(b.streamlines).toEqual(a.streamlines);
   });
 

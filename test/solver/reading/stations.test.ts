@@ -57,7 +57,8 @@ describe('stations', () => {
   it('picks the narrowest station upstream of a given potential as the tightest', () => {
     const domain = channel(4, 1);
     const stations = stationsOf(domain, exactResult(domain, 10_000, channelFlow(4, 1)), 10);
-    const widths = stations.map((s, k) => ({ ...s, width: 1 + Math.abs(k - 6) }));
+    // without a depth a station's area is its width (unit depth), and the tightest is the one of least area
+    const widths = stations.map((s, k) => ({ ...s, width: 1 + Math.abs(k - 6), area: 1 + Math.abs(k - 6) }));
     expect(tightestStation(widths, null)?.index).toBe(6);
     expect(tightestStation(widths, widths[3].phi - 1e-9)?.index).toBe(3);
     expect(tightestStation(widths, 2)).toBeNull();
