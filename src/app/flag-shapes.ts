@@ -1,5 +1,5 @@
 /** Turns a flow reading into the view's flag overlays: slow cells hatched, the tightest station, over-wide stations, detachment. */
-import { lengthLabel } from '../breathing/units.ts';
+import { areaLabel, lengthLabel } from '../breathing/units.ts';
 import type { Units } from '../document/types.ts';
 import type { FieldReply } from '../workers/protocol.ts';
 import type { FlagLine, FlagMarker, FlagShapes } from '../view/types.ts';
@@ -12,7 +12,10 @@ export function flagShapes(reply: FieldReply, units: Units): FlagShapes {
   const lines: FlagLine[] = [];
   const markers: FlagMarker[] = [];
   const t = reading.tightest;
-  if (t) lines.push({ xy: new Float64Array([t.x1, t.y1, t.x2, t.y2]), label: `tightest ${t.width.toFixed(digits)} ${label}` });
+  // With a width profile or round model the tightest station is the one of least area, so its area is the label.
+  const tightestText = (area: number, width: number) =>
+    reading.model === 'plane' ? `tightest ${width.toFixed(digits)} ${label}` : `least area ${area.toFixed(units === 'mm' ? 0 : 3)} ${areaLabel(units)}`;
+  if (t) lines.push({ xy: new Float64Array([t.x1, t.y1, t.x2, t.y2]), label: tightestText(t.area, t.width) });
   for (const w of reading.overWide) {
     lines.push({ xy: new Float64Array([w.x1, w.y1, w.x2, w.y2]), label: `over-wide +${w.excess.toFixed(digits)} ${label}` });
   }
