@@ -7,7 +7,7 @@ import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { cfmToM3s } from '../../src/breathing/index.ts';
-import type { PortDocument } from '../../src/document/types.ts';
+import { FORMAT_VERSION, type PortDocument } from '../../src/document/types.ts';
 import { appDocument } from './app-fillet.ts';
 import { CHECK_MS, solveCount } from './app-session.ts';
 import { appSuite } from './app-suite.ts';
@@ -171,7 +171,7 @@ describe('bench inputs in the app: kept per variant in the document', () => {
 
       const [download] = await Promise.all([app.waitForEvent('download'), app.click('#save-button')]);
       const saved = JSON.parse(readFileSync(await download.path(), 'utf8')) as PortDocument;
-      expect(saved.version).toBe(4);
+      expect(saved.version).toBe(FORMAT_VERSION);
       expect(benchOf(saved, 'tight short side')?.boreM).toBe(0.086);
       expect(benchOf(saved, 'generous short side')?.measuredFlowM3PerS).toBeCloseTo(cfmToM3s(260), 12);
 
