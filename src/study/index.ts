@@ -1,5 +1,5 @@
 /** One case pipeline shared by the app, the command and later the sweeps. */
-export { caseSetup, type CaseSetup, type CaseSpec } from './case-domain.ts';
+export { caseSetup, type CaseModel, type CaseSetup, type CaseSpec } from './case-domain.ts';
 export { solveFlattenTolerance } from './flatten-tolerance.ts';
 export { WIDTH_MAP_CELLS } from './width-depth.ts';
 export { solveCase, type SolvedCase } from './solve-case.ts';
