@@ -40,15 +40,22 @@ describe('a round pipe drawn whole and marked round about its axis [derived]', (
   });
 });
 
-const tight = loadDocument(readFileSync(new URL('../../samples/street-tight-short-side.json', import.meta.url), 'utf8'));
+const read = (name: string) => loadDocument(readFileSync(new URL(`../../samples/${name}`, import.meta.url), 'utf8'));
+const tight = read('street-tight-short-side.json');
+const roundSample = read('street-valve-round.json');
 
 function round(doc: PortDocument, keep: 'left' | 'right'): PortDocument {
   return { ...doc, variants: doc.variants.map((v) => ({ ...v, axisymmetric: { keep } })) };
 }
 
-describe('the tight street port marked round about its valve axis', () => {
+describe('the tight street port marked round about its valve axis (samples/street-valve-round.json)', () => {
+  it('is the tight street port with the round model on the manifold side of the valve axis', () => {
+    expect(roundSample.variants[0].section).toStrictEqual(tight.variants[0].section);
+    expect(roundSample.variants[0].axisymmetric).toStrictEqual({ keep: 'left' });
+  });
+
   it('solves on the manifold side of the axis: finite, model axisymmetric, the least station area of the order of the curtain pi D L', () => {
-    const setup = caseSetup(round(tight, 'left'), { targetCells: cells });
+    const setup = caseSetup(roundSample, { targetCells: cells });
     expect(setup.model).toBe('axisymmetric');
     // The valve head straddles its axis, so its kept half joins the outer boundary: no island is left.
     expect(setup.domain.islands).toHaveLength(0);
