@@ -31,14 +31,14 @@ interface Chain {
 /**
  * The region inside `outer` and outside `islands` (outer counter-clockwise, islands clockwise, so the fluid lies left
  * of every ring), cut by the line of `plane` and kept on its positive side. Every segment keeps its mark and wall id;
- * the new segments along the line are unnamed walls (mark MARK_WALL, id -1). A line of symmetry carries no flux, and
+ * the new segments along the line are walls (mark MARK_WALL) with wall id `lineWallId` (unnamed, -1, by default). A line of symmetry carries no flux, and
  * with the round depth b = 2 pi r, which is zero on the axis, a wall there is what the solver makes of it anyway.
  * A ring wholly on the kept side stays as it is, one wholly on the other side is dropped, and a ring the line cuts
  * joins the pieces the line gives: a valve head cut in half by its axis becomes part of the outer boundary, which then
  * runs along the axis, round the half valve and on along the axis. Points on the line count as outside.
  * Example: the square (-1, -1) .. (1, 1) kept above y = 0 is the rectangle (-1, 0) .. (1, 1), its lower side a wall.
  */
-export function clipToHalfPlane(outer: Ring, islands: readonly Ring[], plane: HalfPlane): ClippedRings {
+export function clipToHalfPlane(outer: Ring, islands: readonly Ring[], plane: HalfPlane, lineWallId = -1): ClippedRings {
   const length = Math.hypot(plane.normalX, plane.normalY);
   const nx = plane.normalX / length, ny = plane.normalY / length;
   const side = (x: number, y: number) => (x - plane.x) * nx + (y - plane.y) * ny;
@@ -51,7 +51,7 @@ export function clipToHalfPlane(outer: Ring, islands: readonly Ring[], plane: Ha
     if (cut === 'inside') rings.push(ring);
     else chains.push(...cut);
   }
-  rings.push(...joinChains(chains));
+  rings.push(...joinChains(chains, lineWallId));
   return {
     outers: rings.filter((r) => signedArea(r.xy) > 0),
     holes: rings.filter((r) => signedArea(r.xy) < 0),
@@ -99,7 +99,7 @@ function pushPoint(chain: { xy: number[]; marks: number[]; wallIds: number[] }, 
  * Closes the runs into rings along the line: walking the line with the kept side on the left, each place a run
  * leaves is followed by the next place one comes in (for a region, leaving and coming in alternate along the line).
  */
-function joinChains(chains: readonly Chain[]): Ring[] {
+function joinChains(chains: readonly Chain[], lineWallId: number): Ring[] {
   const ends = chains.flatMap((c, i) => [{ at: c.exitAt, chain: i, leaving: true }, { at: c.entryAt, chain: i, leaving: false }]);
   ends.sort((p, q) => p.at - q.at || (p.leaving === q.leaving ? 0 : p.leaving ? -1 : 1));
   const next = new Map<number, number>();
@@ -116,12 +116,12 @@ function joinChains(chains: readonly Chain[]): Ring[] {
       used.add(c);
       const chain = chains[c];
       if (ring.xy.length === 0) ring.xy.push(chain.xy[0], chain.xy[1]);
-      else pushPoint(ring, chain.xy[0], chain.xy[1], MARK_WALL, -1);
+      else pushPoint(ring, chain.xy[0], chain.xy[1], MARK_WALL, lineWallId);
       for (let s = 0; s < chain.marks.length; s++) pushPoint(ring, chain.xy[2 * s + 2], chain.xy[2 * s + 3], chain.marks[s], chain.wallIds[s]);
     }
     // The closing segment, from the last run's exit back along the line to the first run's entry.
     ring.marks.push(MARK_WALL);
-    ring.wallIds.push(-1);
+    ring.wallIds.push(lineWallId);
     if (ring.xy[0] === ring.xy[ring.xy.length - 2] && ring.xy[1] === ring.xy[ring.xy.length - 1]) {
       ring.xy.length -= 2;
       ring.marks.pop();

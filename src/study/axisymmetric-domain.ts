@@ -5,11 +5,14 @@ import { clipToHalfPlane } from '../geometry/half-plane-clip.ts';
 import { MARK_INLET, MARK_OUTLET, type FlowDomain, type Ring } from '../solver/types.ts';
 import { StudyError } from './errors.ts';
 
+/** The wall name of the cut along the axis (a line of symmetry, not metal). */
+export const AXIS_WALL_NAME = 'axis';
+
 /**
  * `plane` (the variant's flattened domain) cut along the variant's axis (its own, or the valve's) and kept on the
  * side its round model names, with `depth` the round depth about that axis. The clip runs on the flattened rings, so
- * it is exact to the grid's flattening tolerance; the cut along the axis is a wall (the solver's b = 0 there carries
- * no flux either way). Returns `plane` itself for a variant without a round model.
+ * it is exact to the grid's flattening tolerance; the cut along the axis is a wall named AXIS_WALL_NAME (the solver's
+ * b = 0 there carries no flux either way). Returns `plane` itself for a variant without a round model.
  * Throws StudyError (code 'axis-side') when there is no axis, nothing lies on the kept side, the kept side falls in
  * separate pieces, or the inlet or the outlet lies wholly on the other side.
  */
@@ -25,7 +28,10 @@ export function axisymmetricDomain(variant: Variant, plane: FlowDomain): FlowDom
   // The valve's right (SeatPart.throatOffsetPct's +x side when it opens down) is the opening direction turned a quarter
   // turn counter-clockwise.
   const sign = model.keep === 'right' ? 1 : -1;
-  const clipped = clipToHalfPlane(plane.outer, plane.islands, { x: axis.x, y: axis.y, normalX: -openY * sign, normalY: openX * sign });
+  const found = plane.wallNames.indexOf(AXIS_WALL_NAME);
+  const wallNames = found >= 0 ? plane.wallNames : [...plane.wallNames, AXIS_WALL_NAME];
+  const half = { x: axis.x, y: axis.y, normalX: -openY * sign, normalY: openX * sign };
+  const clipped = clipToHalfPlane(plane.outer, plane.islands, half, wallNames.indexOf(AXIS_WALL_NAME));
   const outer = onePiece(clipped.outers, model.keep);
   for (const [mark, name] of [[MARK_INLET, 'inlet (the manifold face)'], [MARK_OUTLET, 'outlet (the far end of the bore)']] as const) {
     if (!outer.marks.includes(mark)) {
@@ -35,7 +41,7 @@ export function axisymmetricDomain(variant: Variant, plane: FlowDomain): FlowDom
   return {
     outer,
     islands: clipped.holes,
-    wallNames: plane.wallNames,
+    wallNames,
     depth: { kind: 'axisymmetric', axis: { x: axis.x, y: axis.y, dirX: openX, dirY: openY } },
   };
 }

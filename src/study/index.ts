@@ -6,3 +6,4 @@ export { solveCase, type SolvedCase } from './solve-case.ts';
 export { CELLS_BY_DETAIL, DRAG_CELLS } from './grid-detail.ts';
 export { StudyError, type StudyErrorCode } from './errors.ts';
 export { missingEnds } from './open-ends.ts';
+export { AXIS_WALL_NAME } from './axisymmetric-domain.ts';

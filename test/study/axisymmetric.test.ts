@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { loadDocument } from '../../src/document/load.ts';
 import type { PortDocument } from '../../src/document/types.ts';
 import { partsBreathing } from '../../src/parts/index.ts';
-import { caseSetup, solveCase, StudyError } from '../../src/study/index.ts';
+import { AXIS_WALL_NAME, caseSetup, solveCase, StudyError } from '../../src/study/index.ts';
 import { runBin, tempDir } from '../cli/helpers.ts';
 import { pipeFile } from './axisymmetric-shapes.ts';
 import { relativeError } from './width-shapes.ts';
@@ -59,6 +59,9 @@ describe('the tight street port marked round about its valve axis (samples/stree
     expect(setup.model).toBe('axisymmetric');
     // The valve head straddles its axis, so its kept half joins the outer boundary: no island is left.
     expect(setup.domain.islands).toHaveLength(0);
+    // The cut runs along the axis in two pieces (above and below the valve), each a wall named "axis".
+    const axisId = setup.domain.wallNames.indexOf(AXIS_WALL_NAME);
+    expect(Array.from(setup.domain.outer.wallIds).filter((id) => id === axisId)).toHaveLength(2);
     const { result, reading } = solveCase(setup.domain, { targetCells: cells }, setup.reading);
     expect(Number.isFinite(result.conductance) && result.conductance > 0).toBe(true);
     const valve = setup.variant.parts!.valve!;
