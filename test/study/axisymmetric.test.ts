@@ -28,6 +28,16 @@ describe('a round pipe drawn whole and marked round about its axis [derived]', (
     });
   }
 
+  it('turned to lean 120 degrees from straight down: the right side kept is the one the axis turns to counter-clockwise, and the conductance holds', () => {
+    const setup = caseSetup(loadDocument(pipeFile(lengthL, radiusR, 'right', 120)), { targetCells: cells });
+    const lean = (120 * Math.PI) / 180;
+    const right = [Math.cos(lean), Math.sin(lean)];
+    const xy = setup.domain.outer.xy;
+    for (let k = 0; k < xy.length; k += 2) expect(xy[k] * right[0] + xy[k + 1] * right[1]).toBeGreaterThan(-1e-9);
+    const { result } = solveCase(setup.domain, { targetCells: cells }, null);
+    expect(relativeError(result.conductance, exact)).toBeLessThan(0.005);
+  });
+
   it('solves the same through `portwright solve --json`: conductance pi R^2 / L within 0.5%', () => {
     const files = tempDir();
     try {
