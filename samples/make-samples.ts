@@ -158,6 +158,10 @@ export function buildSamples(): Record<string, PortDocument> {
     'street-port-widths.json': document('Street intake, 46 mm valve: tight short side with the port widths', [
       { ...TIGHT, name: 'tight short side, widths', width: WIDTHS },
     ]),
+    // The valve, seat and bore region solved round about the valve axis, on the manifold side of it (README, "Round").
+    'street-valve-round.json': document('Street intake, 46 mm valve: tight short side, round about the valve axis', [
+      { ...TIGHT, name: 'tight short side, round', axisymmetric: { keep: 'left' } },
+    ]),
   };
 }
 

@@ -267,10 +267,16 @@ const bench = mountBenchPanel(byId('bench-host'), {
   onInputs: (inputs) => tryEdit('setBench', { bench: inputs }, false),
 });
 
-const partsPanel = new PartsPanel(gui, (part, values) => {
-  // A refused value leaves the document as it was; show its numbers again over what was typed.
-  if (!tryEdit('setPart', { part, values }, false)) partsPanel.update(store.doc);
-});
+const partsPanel = new PartsPanel(
+  gui,
+  (part, values) => {
+    // A refused value leaves the document as it was; show its numbers again over what was typed.
+    if (!tryEdit('setPart', { part, values }, false)) partsPanel.update(store.doc);
+  },
+  (axisymmetric) => {
+    if (!tryEdit('setAxisymmetric', { axisymmetric }, false)) partsPanel.update(store.doc);
+  },
+);
 partsPanel.update(store.doc);
 
 fillHelp(helpOverlay);

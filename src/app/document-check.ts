@@ -43,9 +43,11 @@ export function checkDocument(doc: PortDocument, before?: PortDocument): void {
   const same = before !== undefined && before.units === doc.units && before.settings.gridDetail === doc.settings.gridDetail;
   // A variant is built from its section and parts alone (not its name, note or bench inputs): a pair already checked
   // need not be built again, so a change of bench inputs costs no build.
-  const known = new Map<Variant['section'], Variant['parts']>(same ? before.variants.map((v) => [v.section, v.parts]) : []);
+  // A round model cuts the section along its axis, so it is part of what is built.
+  const known = new Map<Variant['section'], Variant>(same ? before.variants.map((v) => [v.section, v]) : []);
   for (const variant of doc.variants) {
-    if (known.has(variant.section) && known.get(variant.section) === variant.parts) continue;
+    const kept = known.get(variant.section);
+    if (kept !== undefined && kept.parts === variant.parts && kept.axisymmetric === variant.axisymmetric) continue;
     const problem = variantProblem(doc, variant);
     if (problem !== null) throw new DocumentCheckError(variant.name, problem.message, problem.fault);
   }

@@ -1,7 +1,7 @@
-/** Typed values of the active variant's valve, seat and test bore (lil-gui), each change sent as one edit. */
+/** Typed values of the active variant's valve, seat and test bore, and its round model (lil-gui), each change sent as one edit. */
 import type GUI from 'lil-gui';
 import type { Controller } from 'lil-gui';
-import type { PortDocument } from '../document/types.ts';
+import type { AxisymmetricModel, PortDocument } from '../document/types.ts';
 import { lengthLabel } from '../breathing/units.ts';
 import { activeVariant } from '../editor/index.ts';
 import { metresPerUnit } from '../parts/index.ts';
@@ -9,6 +9,8 @@ import { showRounded, typedChange, type BoxUnit } from './box-precision.ts';
 
 type PartName = 'valve' | 'seat' | 'bore';
 type Send = (part: PartName, values: Record<string, unknown>) => void;
+/** Sends the round model (setAxisymmetric), or null for a plane section again. */
+type SendRound = (axisymmetric: AxisymmetricModel | null) => void;
 
 interface Field {
   readonly part: PartName;
@@ -51,9 +53,15 @@ export class PartsPanel {
   private units: PortDocument['units'] = 'mm';
   private readonly controllers: Array<{ field: Field; controller: Controller }> = [];
   private readonly folder: GUI;
+  /** The round toggle's state, as the document has it until the porter changes it. */
+  private readonly round = { on: false, side: 'left' as AxisymmetricModel['keep'] };
+  private model: AxisymmetricModel | undefined;
+  private readonly roundControllers: Controller[] = [];
 
-  constructor(gui: GUI, private readonly send: Send) {
+  /** Without `sendRound` the panel has no round toggle. */
+  constructor(gui: GUI, private readonly send: Send, sendRound?: SendRound) {
     this.folder = gui.addFolder('Valve, seat and test bore');
+    if (sendRound) this.addRoundToggle(sendRound);
     for (const field of FIELDS) {
       const id = `${field.part}.${field.key}`;
       this.values[id] = 0;
@@ -75,6 +83,10 @@ export class PartsPanel {
     const parts = activeVariant(doc).parts;
     this.units = doc.units;
     this.folder.show(parts?.valve !== undefined);
+    this.model = activeVariant(doc).axisymmetric;
+    this.round.on = this.model !== undefined;
+    this.round.side = this.model?.keep ?? this.round.side;
+    for (const controller of this.roundControllers) controller.updateDisplay();
     // FIELDS' limits are in mm.
     const scale = metresPerUnit('mm') / metresPerUnit(doc.units);
     for (const { field, controller } of this.controllers) {
@@ -92,6 +104,19 @@ export class PartsPanel {
       this.exact[`${field.part}.${field.key}`] = value;
       controller.updateDisplay();
     }
+  }
+
+  /**
+   * "round about the valve axis": the valve, seat and bore region solved as round (b = 2 pi r), keeping the side
+   * chosen (left or right looking the way the valve opens). A model with an axis of its own keeps that axis.
+   */
+  private addRoundToggle(sendRound: SendRound): void {
+    const sendNow = () => sendRound(this.round.on ? { ...(this.model?.axis ? { axis: this.model.axis } : {}), keep: this.round.side } : null);
+    const toggle = this.folder.add(this.round, 'on').name('round about the valve axis').onChange(sendNow);
+    const side = this.folder.add(this.round, 'side', ['left', 'right']).name('side solved (looking the way the valve opens)').onChange(() => {
+      if (this.round.on) sendNow();
+    });
+    this.roundControllers.push(toggle, side);
   }
 
   private boxUnit(field: Field): BoxUnit {

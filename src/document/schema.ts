@@ -11,6 +11,7 @@ import { benchInputsSchema } from './bench-schema.ts';
 import { checkParts, partsSchema } from './parts-schema.ts';
 import { boundedNumber, coordinateSchema } from './schema-numbers.ts';
 import { checkWidthObstructions, widthProfileSchema } from './width-schema.ts';
+import { axisymmetricSchema, checkAxisymmetric } from './axisymmetric-schema.ts';
 import {
   CONTROL_CHARACTER, MAX_FILLET_RADIUS, MAX_ISLANDS, MAX_NAME_LENGTH, MAX_NOTE_LENGTH, MAX_SECTION_VERTICES,
   MAX_TITLE_LENGTH, MAX_VARIANTS, MAX_VIA_POINTS,
@@ -145,17 +146,19 @@ const checkVariantParts = (variant: { parts?: z.output<typeof partsSchema>; sect
 };
 
 /**
- * A variant of the current format: key order here is the order saveDocument writes (the short bench and width
- * profile before the long section).
+ * A variant of the current format: key order here is the order saveDocument writes (the short bench, width
+ * profile and round model before the long section).
  */
 export const variantSchema = z
   .strictObject(
-    { name, note: noteSchema, parts: partsSchema.optional(), bench: benchInputsSchema.optional(), width: widthProfileSchema.optional(), section: sectionSchema },
+    { name, note: noteSchema, parts: partsSchema.optional(), bench: benchInputsSchema.optional(), width: widthProfileSchema.optional(),
+      axisymmetric: axisymmetricSchema.optional(), section: sectionSchema },
     variantError,
   )
   .superRefine((variant, ctx) => {
     checkVariantParts(variant, ctx);
     checkWidthObstructions(variant, ctx);
+    checkAxisymmetric(variant, ctx);
   });
 
 /** The variant of format version 4: parts and bench inputs, but no width profile. */

@@ -228,6 +228,27 @@ export interface WidthProfile {
 }
 
 /**
+ * A variant solved as the round thing it is (format version 5): the section is turned about an axis in its plane,
+ * so the passage depth is b = 2 pi r, r the distance from the axis, and only the half-plane on the kept side of the
+ * axis is solved (the axis is a line of symmetry that carries no flux). For the valve, seat and bore region.
+ */
+export interface AxisymmetricModel {
+  /**
+   * The axis: a point on it (document units) and its direction, given as a valve axis is (the direction leans
+   * `inclinationDeg` counter-clockwise from straight down, -y; 90 points along +x). Left out: the valve's own axis
+   * (parts.valve.axis), which the variant then needs.
+   */
+  readonly axis?: { readonly x: number; readonly y: number; readonly inclinationDeg: number };
+  /**
+   * The side of the axis that is solved, named as SeatPart.throatOffsetPct names sides: looking along the axis
+   * direction (the way the valve opens) as drawn, 'right' is the side the direction turns to a quarter turn
+   * counter-clockwise in the section's plane (x right, y up), 'left' the other. With the axis opening straight down
+   * (-y), 'right' is +x and 'left' is -x; with an axis along +x (inclination 90), 'right' is +y.
+   */
+  readonly keep: 'left' | 'right';
+}
+
+/**
  * A named alternative of the section, e.g. "tight short side" and "generous short side".
  *
  * Room left for later data, each an optional key added with a format version step of its own and an identity
@@ -244,6 +265,8 @@ export interface Variant {
   readonly bench?: BenchInputs;
   /** The passage width along the port (format version 5); left out for a section solved per unit depth. */
   readonly width?: WidthProfile;
+  /** Solve the variant as round about an axis (format version 5); never together with `width`. */
+  readonly axisymmetric?: AxisymmetricModel;
   readonly section: Section;
 }
 

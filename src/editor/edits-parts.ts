@@ -93,12 +93,17 @@ export function setLift(doc: PortDocument, { variant, lift }: SetLiftArgs): Port
 export const removePartsArgs = z.strictObject({ variant: variantName });
 export type RemovePartsArgs = z.infer<typeof removePartsArgs>;
 
-/** Drops a variant's parts; their last geometry stays in the section as if drawn by hand. */
+/**
+ * Drops a variant's parts; their last geometry stays in the section as if drawn by hand, and a round model about the
+ * valve's axis keeps that axis as its own.
+ */
 export function removeParts(doc: PortDocument, { variant }: RemovePartsArgs): PortDocument {
   const index = variantIndex(doc, variant ?? doc.activeVariant, 'removeParts');
   const { parts, ...rest } = doc.variants[index];
   if (!parts) return doc;
-  return { ...doc, variants: replaceAt(doc.variants, index, rest) };
+  const round = rest.axisymmetric;
+  const kept = round && !round.axis && parts.valve ? { ...rest, axisymmetric: { axis: { ...parts.valve.axis }, keep: round.keep } } : rest;
+  return { ...doc, variants: replaceAt(doc.variants, index, kept) };
 }
 
 /**

@@ -26,6 +26,9 @@ export function setWidthProfile(doc: PortDocument, { width, variant }: SetWidthP
   if (profile?.obstructions && before.parts?.valve === undefined) {
     throw new EditError(edit, `An obstruction stands on the valve axis, so the variant "${before.name}" needs a valve before it can take one.`);
   }
+  if (profile !== undefined && before.axisymmetric !== undefined) {
+    throw new EditError(edit, `The variant "${before.name}" is solved as round, which takes its depth from the axis. Set it back to a plane section before giving it a width profile.`);
+  }
   if (sameWidthProfile(before.width, profile)) return doc;
   const { width: _old, section, ...rest } = before;
   // Key order as the file writes it: the width before the section.

@@ -22,6 +22,7 @@ import {
 import { setUnits, setUnitsArgs } from './edits-units.ts';
 import { setBench, setBenchArgs } from './edits-bench.ts';
 import { setWidthProfile, setWidthProfileArgs } from './edits-width.ts';
+import { setAxisymmetric, setAxisymmetricArgs } from './edits-axisymmetric.ts';
 
 /** A key that runs an edit on the current selection. */
 export interface EditShortcut {
@@ -97,6 +98,7 @@ export const EDITS = {
   removeParts: spec({ name: 'removeParts', label: 'Remove parts', args: removePartsArgs, run: removeParts, regeneratesParts: true }),
   setBench: spec({ name: 'setBench', label: 'Set bench inputs', args: setBenchArgs, run: setBench }),
   setWidthProfile: spec({ name: 'setWidthProfile', label: 'Set width profile', args: setWidthProfileArgs, run: setWidthProfile }),
+  setAxisymmetric: spec({ name: 'setAxisymmetric', label: 'Set round (axisymmetric) model', args: setAxisymmetricArgs, run: setAxisymmetric }),
 } as const;
 
 export type EditName = keyof typeof EDITS;

@@ -31,6 +31,7 @@ describe('sample files', () => {
     expect(read(GENEROUS).variants.map((v) => v.name)).toEqual(['generous short side']);
     expect(read('short-side-compare.json').variants.map((v) => v.name)).toEqual(['tight short side', 'generous short side']);
     expect(read('street-port-widths.json').variants.map((v) => v.name)).toEqual(['tight short side, widths']);
+    expect(read('street-valve-round.json').variants.map((v) => v.name)).toEqual(['tight short side, round']);
   });
 
   it('carry their valve, seat and test bore as parts, and the section is what the parts generate', () => {

@@ -16,7 +16,7 @@ export const DRAWN: readonly string[] = [
   'movePoint', 'movePoint', 'movePoint', 'insertVertex', 'insertVertex', 'deleteVertex', 'setFilletRadius', 'setFilletRadius',
   'setEdgeRole', 'setWallName', 'makeArc', 'makeCurve', 'makeLine', 'addVariant', 'renameVariant', 'setActiveVariant',
   'deleteVariant', 'setUnits', 'setPart', 'setPart', 'setLift', 'setLift', 'setParts', 'removeParts', 'setBench',
-  'setWidthProfile',
+  'setWidthProfile', 'setAxisymmetric',
 ].filter(isEditName);
 
 /** The edits a pointer drags: their steps go through the store with cause 'drag'. */
@@ -146,6 +146,7 @@ function resolveDocumentEdit(doc: PortDocument, intent: Intent, step: number, st
     case 'removeParts': return { name: edit, args: {} };
     case 'setBench': return { name: edit, args: benchChange(doc, n, m, u) };
     case 'setWidthProfile': return { name: edit, args: widthChange(doc, n, m, u) };
+    case 'setAxisymmetric': return { name: edit, args: roundChange(doc, n, m, u) };
     default: throw new Error(`no resolver for the edit "${edit}"`);
   }
 }
@@ -172,6 +173,15 @@ function widthChange(doc: PortDocument, n: number, m: number, u: number): unknow
   const k = n % own.stations.length;
   const stations = own.stations.map((s, i) => (i === k ? { ...s, width: s.width * (1 + 0.2 * u) } : s));
   return { width: { ...own, stations } };
+}
+
+/** None, either side of the valve's axis, or of an axis of its own near the valve's (it may leave the inlet on the far side). */
+function roundChange(doc: PortDocument, n: number, m: number, u: number): unknown {
+  if (m % 3 === 0) return { axisymmetric: null };
+  const keep = n % 2 === 0 ? 'left' : 'right';
+  const valve = activeVariant(doc).parts?.valve;
+  if (valve === undefined || m % 3 === 1) return { axisymmetric: { keep } };
+  return { axisymmetric: { axis: { ...valve.axis, x: valve.axis.x + 5 * u, inclinationDeg: 10 * u }, keep } };
 }
 
 /** One number of one existing part scaled by up to 20% (the valve's axis moved instead, now and then). */
