@@ -5,7 +5,7 @@ import { pointInRegion } from '../geometry/index.ts';
 import type { BreathingSummary } from '../parts/index.ts';
 import { probeFlow } from '../solver/probe.ts';
 import { thinWallNote } from '../solver/thin-wall-note.ts';
-import type { PassageModel, ReadingSummary } from '../solver/reading/index.ts';
+import { onSymmetryLine, type PassageModel, type ReadingSummary } from '../solver/reading/index.ts';
 import type { FlowDomain, SolveResult, ThinWall, WallSpeeds } from '../solver/types.ts';
 
 type Detachment = ReadingSummary['walls'][number]['detachment'];
@@ -29,6 +29,8 @@ export interface WallReport {
   readonly detachment: Detachment;
   /** Both sides of a closed island wall; undefined for an open wall. */
   readonly sides: readonly WallSideReport[] | undefined;
+  /** True for the axis of a round model: a line of symmetry, not metal (no layer marched, never ranked). */
+  readonly symmetryLine?: true;
   /** [x, y, s, speed ratio] in ring order, s from the wall's first point; lengths in document units. */
   readonly samples: readonly (readonly number[])[];
 }
@@ -126,7 +128,7 @@ export function buildSolveReport(solved: SolvedVariant, probes: readonly (readon
     stations: summary.stations,
     breathing: solved.breathing,
     notes: solved.notes,
-    walls: result.walls.map((wall) => wallReport(wall, summary)),
+    walls: result.walls.map((wall) => wallReport(wall, summary, onSymmetryLine(wall, solved.domain.depth, grid.h))),
   };
 }
 
@@ -142,13 +144,14 @@ function probeReport(domain: FlowDomain, result: SolveResult, x: number, y: numb
  * wall it reads as two paths, "<name>, left of the flow" and "<name>, right of the flow", both measured from the
  * point where the flow divides, so the side with the smaller s leaves the wall first.
  */
-function wallReport(wall: WallSpeeds, summary: ReadingSummary): WallReport {
+function wallReport(wall: WallSpeeds, summary: ReadingSummary, symmetryLine: boolean): WallReport {
   const samples: number[][] = [];
   let peak: number | undefined;
   for (let k = 0; k < wall.samples.length; k += 4) {
     samples.push([wall.samples[k], wall.samples[k + 1], wall.samples[k + 2], wall.samples[k + 3]]);
     if (peak === undefined || wall.samples[k + 3] > peak) peak = wall.samples[k + 3];
   }
+  if (symmetryLine) return { name: wall.name, peakSpeedRatio: peak, pressureRecovered: undefined, detachment: null, sides: undefined, symmetryLine, samples };
   const open = summary.walls.find((w) => w.name === wall.name);
   if (open !== undefined) {
     return { name: wall.name, peakSpeedRatio: peak, pressureRecovered: open.pressureRecovered, detachment: open.detachment, sides: undefined, samples };

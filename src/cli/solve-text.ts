@@ -11,6 +11,12 @@ export const IDEAL_FLOW_CAUTION =
 export const WIDTH_FLOW_CAUTION =
   'Caution: ideal flow (no viscosity) through the section weighted by its width profile; confirm on a flow bench before removing metal.';
 
+/** The caution for a variant solved round about its valve axis. */
+export const ROUND_FLOW_CAUTION =
+  'Caution: ideal flow (no viscosity) solved as round about the valve axis, which the port is not; confirm on a flow bench before removing metal.';
+
+const CAUTIONS = { plane: IDEAL_FLOW_CAUTION, width: WIDTH_FLOW_CAUTION, axisymmetric: ROUND_FLOW_CAUTION } as const;
+
 const METHOD_WORDS: Readonly<Record<DetachmentMethod, string>> = {
   thwaites: 'laminar layer, Thwaites',
   head: 'turbulent layer, Head',
@@ -51,7 +57,7 @@ export function solveReportLines(report: SolveReport): string[] {
     lines.push('', 'probes (potential 1 at the inlet, 0 at the outlet):');
     for (const probe of report.probes) lines.push(`  ${f.at(probe.x, probe.y)}: ${probeText(probe)}`);
   }
-  lines.push('', report.model === 'plane' ? IDEAL_FLOW_CAUTION : WIDTH_FLOW_CAUTION);
+  lines.push('', CAUTIONS[report.model]);
   return lines;
 }
 
@@ -74,6 +80,7 @@ function placeFormat(units: SolveReport['units']): PlaceFormat {
 function wallLines(wall: WallReport, nameWidth: number, f: PlaceFormat): string[] {
   if (wall.peakSpeedRatio === undefined) return [`  ${wall.name.padEnd(nameWidth)}  no flow reaches this wall`];
   const head = `  ${wall.name.padEnd(nameWidth)}  ${ratio(wall.peakSpeedRatio).padStart(5)}`;
+  if (wall.symmetryLine) return [`${head}  line of symmetry (the axis), not a wall`];
   if (wall.sides === undefined) return [`${head}  ${detachmentText(wall.detachment, f)}`];
   return [head, ...wall.sides.map((side) => `    ${side.side}: fastest ${side.peakSpeedRatio === undefined ? 'none' : ratio(side.peakSpeedRatio)}, ${detachmentText(side.detachment, f)}`)];
 }

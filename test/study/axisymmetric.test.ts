@@ -85,6 +85,22 @@ describe('the tight street port marked round about its valve axis (samples/stree
     expect(ratio).toBeLessThan(2);
   });
 
+  it('reads the axis as a line of symmetry, not a wall: no layer marched, never ranked or told, named so by the command', () => {
+    const setup = caseSetup(roundSample, { targetCells: cells });
+    const { reading } = solveCase(setup.domain, { targetCells: cells }, setup.reading);
+    const onAxis = (name: string) => name === AXIS_WALL_NAME || name.startsWith(`${AXIS_WALL_NAME} (`);
+    expect(reading!.walls.filter((w) => onAxis(w.name))).toEqual([]);
+    expect(reading!.detachments.filter((d) => onAxis(d.name))).toEqual([]);
+    expect(reading!.findings.filter((f) => /^axis/i.test(f.text))).toEqual([]);
+    const ran = runBin(['solve', new URL('../../samples/street-valve-round.json', import.meta.url).pathname, '--cells', String(cells), '--json']);
+    expect(ran.code).toBe(0);
+    const walls = JSON.parse(ran.stdout).walls as { name: string; symmetryLine?: true; detachment: unknown }[];
+    const axis = walls.filter((w) => onAxis(w.name));
+    expect(axis.length).toBe(2);
+    expect(axis.every((w) => w.symmetryLine === true && w.detachment === null)).toBe(true);
+    expect(walls.filter((w) => !onAxis(w.name)).every((w) => w.symmetryLine === undefined)).toBe(true);
+  });
+
   it('refuses to keep the side away from the manifold: the inlet lies wholly there', () => {
     expect(() => caseSetup(round(tight, 'right'), { targetCells: cells })).toThrow(StudyError);
     expect(() => caseSetup(round(tight, 'right'), { targetCells: cells })).toThrow(/The inlet \(the manifold face\) lies wholly on the other side of the axis from the right side that is solved\./);

@@ -13,12 +13,14 @@ import { traceStreamlines } from './streamlines.ts';
 import { valvePotential } from './valve-level.ts';
 import { downstreamWalls } from './wall-paths.ts';
 import { readWall } from './walls.ts';
+import { onSymmetryLine } from './symmetry-line.ts';
 import type { FlowReading, ReadingOptions, WallReading } from './types.ts';
 
 export type * from './types.ts';
 export { ReadingSettingError } from './errors.ts';
 export { readingSummary, type ReadingSummary } from './summary.ts';
 export { passageModel } from './port-volume.ts';
+export { onSymmetryLine } from './symmetry-line.ts';
 export { MODEL_WORDS } from './wording.ts';
 
 /**
@@ -36,7 +38,8 @@ export function readFlow(domain: FlowDomain, result: SolveResult, options: Readi
   const input = { domain, grid, phi, index, conductance: result.conductance, inletMeanSpeed: result.inletMeanSpeed };
   const stations = buildStations(input, evenLevels(settings.stationCount), settings.deck);
   const valvePhi = valvePotential(domain, grid, phi, settings.valveIslandName);
-  const paths = downstreamWalls(result.walls, grid, phi);
+  // A symmetry line (the axis of a round model) is not metal: no layer is marched along it, it is never ranked.
+  const paths = downstreamWalls(result.walls, grid, phi).filter((path) => !onSymmetryLine(path, domain.depth, grid.h));
   const valve = valvePhi === null ? null : { phi: valvePhi, name: settings.valveIslandName };
   const depth = cellDepths(grid, domain.depth);
   const partial = {
