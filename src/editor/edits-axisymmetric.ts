@@ -2,9 +2,9 @@
 
 import { z } from 'zod';
 import { axisymmetricSchema } from '../document/axisymmetric-schema.ts';
-import type { AxisymmetricModel, PortDocument, Variant } from '../document/types.ts';
+import type { AxisymmetricModel, PortDocument } from '../document/types.ts';
 import { EditError } from './errors.ts';
-import { activeVariantIndex, variantIndex } from './section-access.ts';
+import { namedOrActiveVariant, withVariantKey } from './section-access.ts';
 
 export const setAxisymmetricArgs = z.strictObject({
   /** The round model (axis in document units, or left out for the valve's axis); null solves the variant plane again. */
@@ -21,8 +21,7 @@ export type SetAxisymmetricArgs = z.infer<typeof setAxisymmetricArgs>;
  */
 export function setAxisymmetric(doc: PortDocument, { axisymmetric, variant }: SetAxisymmetricArgs): PortDocument {
   const edit = 'setAxisymmetric';
-  const index = variant === undefined ? activeVariantIndex(doc, edit) : variantIndex(doc, variant, edit);
-  const before = doc.variants[index];
+  const { index, variant: before } = namedOrActiveVariant(doc, variant, edit);
   const model = axisymmetric === null ? undefined : tidy(axisymmetric);
   if (model !== undefined && before.width !== undefined) {
     throw new EditError(edit, `The variant "${before.name}" has a width profile, and a round section takes its depth from the axis instead. Remove the width profile first.`);
@@ -30,11 +29,7 @@ export function setAxisymmetric(doc: PortDocument, { axisymmetric, variant }: Se
   if (model !== undefined && model.axis === undefined && before.parts?.valve === undefined) {
     throw new EditError(edit, `The variant "${before.name}" has no valve whose axis it could turn about. Give the round model an axis, or add a valve.`);
   }
-  if (sameAxisymmetric(before.axisymmetric, model)) return doc;
-  const { axisymmetric: _old, section, ...rest } = before;
-  // Key order as the file writes it: the round model just before the section.
-  const after: Variant = model === undefined ? { ...rest, section } : { ...rest, axisymmetric: model, section };
-  return { ...doc, variants: doc.variants.map((v, k) => (k === index ? after : v)) };
+  return sameAxisymmetric(before.axisymmetric, model) ? doc : withVariantKey(doc, index, 'axisymmetric', model);
 }
 
 function tidy(model: AxisymmetricModel): AxisymmetricModel {

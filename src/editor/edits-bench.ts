@@ -2,8 +2,8 @@
 
 import { z } from 'zod';
 import { benchInputsSchema } from '../document/bench-schema.ts';
-import type { BenchInputs, PortDocument, Variant } from '../document/types.ts';
-import { activeVariantIndex, variantIndex } from './section-access.ts';
+import type { BenchInputs, PortDocument } from '../document/types.ts';
+import { namedOrActiveVariant, withVariantKey } from './section-access.ts';
 
 export const setBenchArgs = z.strictObject({
   /** The new inputs (SI, see BenchInputs); left out to clear them, so the panel shows its defaults again. */
@@ -19,12 +19,8 @@ export type SetBenchArgs = z.infer<typeof setBenchArgs>;
  */
 export function setBench(doc: PortDocument, { bench, variant }: SetBenchArgs): PortDocument {
   const edit = 'setBench';
-  const index = variant === undefined ? activeVariantIndex(doc, edit) : variantIndex(doc, variant, edit);
-  const before = doc.variants[index];
-  if (sameBench(before.bench, bench)) return doc;
-  const { bench: _old, ...rest } = before;
-  const after: Variant = bench === undefined ? rest : { ...rest, bench };
-  return { ...doc, variants: doc.variants.map((v, k) => (k === index ? after : v)) };
+  const { index, variant: before } = namedOrActiveVariant(doc, variant, edit);
+  return sameBench(before.bench, bench) ? doc : withVariantKey(doc, index, 'bench', bench);
 }
 
 /** The same inputs: the same keys with the same values (both absent counts as the same). */

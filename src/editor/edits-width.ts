@@ -2,9 +2,9 @@
 
 import { z } from 'zod';
 import { widthProfileSchema } from '../document/width-schema.ts';
-import type { PortDocument, Variant, WidthProfile } from '../document/types.ts';
+import type { PortDocument, WidthProfile } from '../document/types.ts';
 import { EditError } from './errors.ts';
-import { activeVariantIndex, variantIndex } from './section-access.ts';
+import { namedOrActiveVariant, withVariantKey } from './section-access.ts';
 
 export const setWidthProfileArgs = z.strictObject({
   /** The new profile (document units); null removes it, so the variant is solved per unit depth again. */
@@ -20,8 +20,7 @@ export type SetWidthProfileArgs = z.infer<typeof setWidthProfileArgs>;
  */
 export function setWidthProfile(doc: PortDocument, { width, variant }: SetWidthProfileArgs): PortDocument {
   const edit = 'setWidthProfile';
-  const index = variant === undefined ? activeVariantIndex(doc, edit) : variantIndex(doc, variant, edit);
-  const before = doc.variants[index];
+  const { index, variant: before } = namedOrActiveVariant(doc, variant, edit);
   const profile = width === null ? undefined : tidy(width);
   if (profile?.obstructions && before.parts?.valve === undefined) {
     throw new EditError(edit, `An obstruction stands on the valve axis, so the variant "${before.name}" needs a valve before it can take one.`);
@@ -29,11 +28,7 @@ export function setWidthProfile(doc: PortDocument, { width, variant }: SetWidthP
   if (profile !== undefined && before.axisymmetric !== undefined) {
     throw new EditError(edit, `The variant "${before.name}" is solved as round, which takes its depth from the axis. Set it back to a plane section before giving it a width profile.`);
   }
-  if (sameWidthProfile(before.width, profile)) return doc;
-  const { width: _old, section, ...rest } = before;
-  // Key order as the file writes it: the width before the section.
-  const after: Variant = profile === undefined ? { ...rest, section } : { ...rest, width: profile, section };
-  return { ...doc, variants: doc.variants.map((v, k) => (k === index ? after : v)) };
+  return sameWidthProfile(before.width, profile) ? doc : withVariantKey(doc, index, 'width', profile);
 }
 
 function tidy(width: WidthProfile): WidthProfile {

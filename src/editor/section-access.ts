@@ -17,6 +17,25 @@ export function variantIndex(doc: PortDocument, name: string, edit: string): num
   return index;
 }
 
+/** The variant an edit names, or the active one when it names none: its index and the variant itself. */
+export function namedOrActiveVariant(doc: PortDocument, name: string | undefined, edit: string): { index: number; variant: Variant } {
+  const index = name === undefined ? activeVariantIndex(doc, edit) : variantIndex(doc, name, edit);
+  return { index, variant: doc.variants[index] };
+}
+
+/**
+ * `doc` with the variant at `index` given `value` under its optional `key`, or without the key when `value` is
+ * undefined (a file never holds an empty placeholder).
+ */
+export function withVariantKey<K extends 'bench' | 'width' | 'axisymmetric'>(doc: PortDocument, index: number, key: K, value: Variant[K]): PortDocument {
+  const { section, ...others } = doc.variants[index];
+  const rest: Partial<Variant> = { ...others };
+  delete rest[key];
+  // Just before the section, where the file writes it.
+  const after = (value === undefined ? { ...rest, section } : { ...rest, [key]: value, section }) as Variant;
+  return { ...doc, variants: doc.variants.map((v, k) => (k === index ? after : v)) };
+}
+
 /** The active variant (its section and its parts); throws EditError when the active name matches none. */
 export function activeVariant(doc: PortDocument, edit = ''): Variant {
   return doc.variants[activeVariantIndex(doc, edit)];
