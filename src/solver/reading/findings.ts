@@ -7,7 +7,8 @@ import { areaText, lengthText, opening, percentText, ratioText } from './wording
 const SLOW_SHARE_WORTH_TELLING = 0.01;
 
 /**
- * Ranked findings. Scores order the list and are a judgement, not physics: a likely detachment on a port wall first
+ * Ranked findings, each told as a whole sentence (the same in the app, the command's text and its JSON). Scores
+ * order the list and are a judgement, not physics: a likely detachment on a port wall first
  * (higher for a bigger pressure climb after the peak, measured in inlet dynamic heads and full at 4), then a large
  * slow share, the tightest station, over-wide stations and the fastest port wall. Walls past the valve and the valve
  * head itself are read but not told. `h` is the grid's cell size (document units), the smallest zoom radius given.
@@ -26,14 +27,13 @@ export function findings(reading: Omit<FlowReading, 'findings'>, settings: Readi
     out.push({
       score: 0.2 + 0.05 * Math.min(2, fastest.peak.speedRatio),
       kind: 'peak',
-      text: `Fastest wall flow on the ${fastest.name}: ${ratioText(fastest.peak.speedRatio)} times the mean inlet speed`,
+      text: `Fastest wall flow on the ${fastest.name}: ${ratioText(fastest.peak.speedRatio)} times the mean inlet speed.`,
       x: fastest.peak.x,
       y: fastest.peak.y,
       radius: 6 * h,
     });
   }
-  // Each finding is told as a whole sentence, the same in the app, the command's text and its JSON.
-  return out.sort((a, b) => b.score - a.score).map((f) => (f.text.endsWith('.') ? f : { ...f, text: `${f.text}.` }));
+  return out.sort((a, b) => b.score - a.score);
 }
 
 type PartReading = Omit<FlowReading, 'findings'>;
@@ -43,7 +43,7 @@ function tightestFinding({ tightest, valvePhi, model }: PartReading, settings: R
   if (!tightest) return [];
   const u = settings.units;
   const ahead = valvePhi !== null ? ' ahead of the valve' : '';
-  const from = `${lengthText(tightest.distanceFromInlet, u)} from the manifold face`;
+  const from = `${lengthText(tightest.distanceFromInlet, u)} from the manifold face.`;
   const text = model === 'plane'
     ? `Tightest section${ahead}: ${lengthText(tightest.width, u)} wide, ${from}`
     : `Least area${ahead}: ${areaText(tightest.area, u)} (${lengthText(tightest.width, u)} across the section), ${from}`;
@@ -63,7 +63,7 @@ function slowFinding({ slow, valvePhi }: PartReading, settings: ReadingSettings,
   return [{
     score: 0.5 + 0.4 * Math.min(1, 2 * slow.portShare),
     kind: 'slow',
-    text: `${percentText(slow.portShare)} of ${part} moves below ${percentText(settings.slowFraction)} of its local mean speed`,
+    text: `${percentText(slow.portShare)} of ${part} moves below ${percentText(settings.slowFraction)} of its local mean speed.`,
     x: slow.largest.x,
     y: slow.largest.y,
     radius: Math.max(slow.largest.radius, 4 * h),
@@ -76,7 +76,7 @@ function overWideFindings(reading: PartReading, settings: ReadingSettings, h: nu
     score: 0.3 + Math.min(0.4, run.excess / run.envelope),
     kind: 'over-wide',
     text: `Over-wide: the section ${lengthText(reading.stations[run.index].distanceFromInlet, u)} from the manifold face is ` +
-      `${lengthText(run.excess, u)} (${percentText(run.excess / run.envelope)}) wider than the sections either side`,
+      `${lengthText(run.excess, u)} (${percentText(run.excess / run.envelope)}) wider than the sections either side.`,
     x: 0.5 * (run.x1 + run.x2),
     y: 0.5 * (run.y1 + run.y2),
     radius: Math.max(0.6 * run.width, 4 * h),
@@ -108,7 +108,7 @@ function detachmentFinding(d: WallDetachmentReading, wall: WallReading, settings
     score: 0.7 + 0.3 * Math.min(1, climb / 4),
     kind: 'detachment',
     text: `${opening(d.name)}: flow likely leaves the wall ${lengthText(past, u)} past the speed peak${stretch}; ` +
-      `speed ratio falls from ${ratioText(top)} to ${ratioText(bottom)}`,
+      `speed ratio falls from ${ratioText(top)} to ${ratioText(bottom)}.`,
     x: at.x,
     y: at.y,
     radius: Math.max(4 * h, past, 0.5 * off),
