@@ -35,14 +35,14 @@ class RawText {
   }
 }
 
-interface Place {
+export interface Place {
   readonly parent: Json[] | { [key: string]: Json };
   readonly key: string | number;
   readonly value: Json;
 }
 
 /** Every place below the root, depth first. */
-function places(value: Json, out: Place[] = []): Place[] {
+export function places(value: Json, out: Place[] = []): Place[] {
   if (value === null || typeof value !== 'object') return out;
   const entries: [string | number, Json][] = Array.isArray(value) ? value.map((v, i) => [i, v]) : Object.entries(value);
   for (const [key, child] of entries) {

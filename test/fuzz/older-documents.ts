@@ -6,7 +6,7 @@
 
 import { readdirSync, readFileSync } from 'node:fs';
 import fc from 'fast-check';
-import type { Json } from './file-mutations.ts';
+import { places as allPlaces, type Json, type Place } from './file-mutations.ts';
 
 /** Every sample and fixture, parsed, by the format version it says it is in. */
 export function filesByVersion(): Map<number, Json[]> {
@@ -24,22 +24,9 @@ export function filesByVersion(): Map<number, Json[]> {
 
 type JsonObject = { [key: string]: Json };
 
-interface Place {
-  readonly parent: Json[] | JsonObject;
-  readonly key: string | number;
-  readonly value: Json;
-}
-
-function places(value: Json, out: Place[] = []): Place[] {
-  if (value === null || typeof value !== 'object') return out;
-  const entries: [string | number, Json][] = Array.isArray(value) ? value.map((v, i) => [i, v]) : Object.entries(value);
-  for (const [key, child] of entries) {
-    // The format and version say which schema applies; changing them is the loader fuzz's business.
-    if (key === 'format' || key === 'version') continue;
-    out.push({ parent: value, key, value: child });
-    places(child, out);
-  }
-  return out;
+/** Every place below the root but the format and version, which say which schema applies (changing them is the loader fuzz's business). */
+function places(value: Json): Place[] {
+  return allPlaces(value).filter((place) => place.key !== 'format' && place.key !== 'version');
 }
 
 /** Names and labels a porter might type, beside those already in the files. */
