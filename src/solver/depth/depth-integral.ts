@@ -1,7 +1,7 @@
 /** Depth integrated along lines: the area of an inlet, an outlet or a station (length times depth), exact for both depth kinds. */
 import { axisNormal, depthFunction } from './depth-model.ts';
 import { FlowSetupError } from '../errors.ts';
-import { markedLength } from '../rasterise/checks.ts';
+import { markedLength, sumOverMarked } from '../rasterise/checks.ts';
 import { MARK_INLET, MARK_OUTLET, type DepthModel, type FlowDomain } from '../types.ts';
 
 /**
@@ -50,16 +50,7 @@ function latticeCuts(a: number, b: number, origin: number, step: number, count: 
 
 /** Integral of b over every segment of every ring that carries `mark` (the inlet's or outlet's area), length units squared. */
 export function markedDepthIntegral(domain: FlowDomain, model: DepthModel, mark: number): number {
-  let total = 0;
-  for (const ring of [domain.outer, ...domain.islands]) {
-    const n = ring.xy.length >> 1;
-    for (let k = 0; k < n; k++) {
-      if (ring.marks[k] !== mark) continue;
-      const m = (k + 1) % n;
-      total += segmentDepthIntegral(model, ring.xy[2 * k], ring.xy[2 * k + 1], ring.xy[2 * m], ring.xy[2 * m + 1]);
-    }
-  }
-  return total;
+  return sumOverMarked(domain, mark, (x0, y0, x1, y1) => segmentDepthIntegral(model, x0, y0, x1, y1));
 }
 
 /** Integral of b along polylines (x0, y0, x1, y1, ... document units): a station's area. */

@@ -24,18 +24,23 @@ export function fluidSense(ring: Ring, outer: boolean): 1 | -1 {
   return outer === ringDoubleArea(ring) > 0 ? 1 : -1;
 }
 
-/** Total length of the segments of every ring that carry `mark`, length units. */
-export function markedLength(domain: FlowDomain, mark: number): number {
+/** Sum of `of(x0, y0, x1, y1)` over the segments of every ring that carry `mark` (e.g. the inlet's). */
+export function sumOverMarked(domain: FlowDomain, mark: number, of: (x0: number, y0: number, x1: number, y1: number) => number): number {
   let total = 0;
   for (const ring of [domain.outer, ...domain.islands]) {
     const n = ring.xy.length >> 1;
     for (let k = 0; k < n; k++) {
       if (ring.marks[k] !== mark) continue;
       const m = (k + 1) % n;
-      total += Math.hypot(ring.xy[2 * m] - ring.xy[2 * k], ring.xy[2 * m + 1] - ring.xy[2 * k + 1]);
+      total += of(ring.xy[2 * k], ring.xy[2 * k + 1], ring.xy[2 * m], ring.xy[2 * m + 1]);
     }
   }
   return total;
+}
+
+/** Total length of the segments of every ring that carry `mark`, length units. */
+export function markedLength(domain: FlowDomain, mark: number): number {
+  return sumOverMarked(domain, mark, (x0, y0, x1, y1) => Math.hypot(x1 - x0, y1 - y0));
 }
 
 function checkRing(ring: Ring, what: string): void {
